@@ -1,0 +1,42 @@
+/**
+ * @file batch.h
+ * @brief Array versions of the density functions, for pipelines and foreign callers.
+ *
+ * Arrays hold SI values (Pa, K, kg/m^3). Each returns how many elements succeeded. A failed
+ * element gets NaN in the output array and its status in @p status_out (which may be NULL).
+ * A count of 0 is fine; NULL input or output arrays with a count above 0 fail every element
+ * (and, with a NULL output array, nothing is written there).
+ */
+#ifndef GASKIT_BATCH_H
+#define GASKIT_BATCH_H
+
+#include "gaskit/eos.h"
+
+#ifdef __cplusplus
+extern "C" {
+#endif
+
+/** @defgroup batch Batch calls
+ *  @{ */
+
+/**
+ * @brief gk_ideal_density() over arrays: out[i] = p[i] M / (R t[i]).
+ * @return Number of elements with status GK_OK.
+ */
+GK_API size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk_real *t_k,
+                                     gk_molar_mass m, gk_real *out_kg_per_m3, gk_status *status_out);
+
+/**
+ * @brief gk_eos_density() (stable root) over arrays.
+ * @return Number of elements with status GK_OK.
+ */
+GK_API size_t gk_eos_density_batch(gk_eos eos, const gk_gas *gas, size_t count, const gk_real *p_pa,
+                                   const gk_real *t_k, gk_real *out_kg_per_m3, gk_status *status_out);
+
+/** @} */
+
+#ifdef __cplusplus
+}
+#endif
+
+#endif /* GASKIT_BATCH_H */

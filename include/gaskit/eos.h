@@ -1,0 +1,141 @@
+/**
+ * @file eos.h
+ * @brief Van der Waals and the cubic equations of state (Redlich-Kwong, Soave-Redlich-Kwong,
+ *        Peng-Robinson), with the choice of the physical root.
+ *
+ * Each cubic equation of state is written as a cubic in the compressibility factor Z = p Vm / (R T).
+ * Below the critical temperature it can have three real roots above the covolume B: the
+ * largest is the gas-like, the smallest the liquid-like root. The root choice is explicit
+ * (gk_root). Validity: the cubic models describe gases and their vapour-liquid behaviour
+ * qualitatively; their density error is typically a few percent for simple gases and worse for
+ * polar gases (water, ammonia) and for liquids (Peng-Robinson liquid densities may be 5-15 % off).
+ */
+#ifndef GASKIT_EOS_H
+#define GASKIT_EOS_H
+
+#include "gaskit/gas.h"
+
+#ifdef __cplusplus
+extern "C" {
+#endif
+
+/** @defgroup eos Van der Waals and cubic equations of state
+ *  @{ */
+
+/** Van der Waals constants. */
+typedef struct gk_vdw {
+    gk_real a;  /**< attraction, Pa m^6 mol^-2 */
+    gk_real b;  /**< covolume, m^3 mol^-1 */
+} gk_vdw;
+
+/** Which root of a cubic equation of state to return. */
+typedef enum gk_root {
+    GK_ROOT_STABLE, /**< the root with the lower fugacity (lower Gibbs energy) */
+    GK_ROOT_GAS,    /**< the largest real root above the covolume */
+    GK_ROOT_LIQUID  /**< the smallest real root above the covolume */
+} gk_root;
+
+/**
+ * @brief Van der Waals constants from the critical point: a = 27 R^2 Tc^2 / (64 Pc),
+ *        b = R Tc / (8 Pc).
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL.
+ * @retval GK_ERR_DOMAIN   An input is not finite or not > 0.
+ * @retval GK_ERR_RANGE    A constant overflows.
+ */
+GK_API gk_status gk_vdw_from_critical(gk_temperature tc, gk_pressure pc, gk_vdw *out);
+
+/**
+ * @brief Van der Waals pressure p = n R T / (V - n b) - a n^2 / V^2.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL.
+ * @retval GK_ERR_DOMAIN   An input is not finite, n, V, T not > 0, a or b < 0, or V <= n b.
+ * @retval GK_ERR_NO_SOLUTION The pressure would not be > 0 (a metastable or unstable state
+ *                            of the model with negative pressure).
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_vdw_pressure(gk_vdw c, gk_amount n, gk_volume v, gk_temperature t, gk_pressure *out);
+
+/**
+ * @brief Van der Waals temperature T = (p + a n^2 / V^2)(V - n b) / (n R).
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL.
+ * @retval GK_ERR_DOMAIN   An input is not finite, n, V, p not > 0, a or b < 0, or V <= n b.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_vdw_temperature(gk_vdw c, gk_amount n, gk_volume v, gk_pressure p, gk_temperature *out);
+
+/**
+ * @brief Van der Waals volume: the chosen real root V > n b of the cubic in V.
+ * @param root Which root where there are three (see gk_root).
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL or @p root out of range.
+ * @retval GK_ERR_DOMAIN   An input is not finite, n, p, T not > 0, or a or b < 0.
+ * @retval GK_ERR_NO_SOLUTION No real root above the covolume.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_vdw_volume(gk_vdw c, gk_amount n, gk_pressure p, gk_temperature t, gk_root root,
+                               gk_volume *out);
+
+/** The equation-of-state models. */
+typedef enum gk_eos {
+    GK_EOS_IDEAL,               /**< p Vm = R T (Z = 1) */
+    GK_EOS_VAN_DER_WAALS,       /**< van der Waals (1873); handbook a, b where the gas lists them */
+    GK_EOS_REDLICH_KWONG,       /**< Redlich and Kwong (1949) */
+    GK_EOS_SOAVE_REDLICH_KWONG, /**< Soave (1972) */
+    GK_EOS_PENG_ROBINSON        /**< Peng and Robinson (1976) */
+} gk_eos;
+
+/** Result of solving an equation of state at given p, T. */
+typedef struct gk_eos_result {
+    gk_real z;                      /**< compressibility factor of the returned root */
+    gk_molar_volume molar_volume;   /**< molar volume of the returned root */
+    gk_real fugacity_coefficient;   /**< fugacity coefficient phi of the returned root */
+    int root_count;                 /**< real roots above the covolume: 1 or 3 (2 at a double root) */
+    gk_real z_roots[3];             /**< those roots of Z, ascending; unused entries 0 */
+    gk_root branch;                 /**< GK_ROOT_GAS or GK_ROOT_LIQUID: the branch returned */
+} gk_eos_result;
+
+/**
+ * @brief Solves an equation of state for the molar volume at pressure @p p and temperature @p t.
+ *
+ * Root choice: GK_ROOT_GAS is the largest real root above the covolume, GK_ROOT_LIQUID the
+ * smallest, GK_ROOT_STABLE the one of those two with the lower fugacity. With one real root
+ * every choice returns it and root_count is 1.
+ * @param eos Model.
+ * @param gas Gas data (Tc, Pc, acentric factor; vdw_a, vdw_b for van der Waals where non-zero).
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p gas or @p out is NULL, or @p eos or @p root out of range.
+ * @retval GK_ERR_DOMAIN   p or T not finite or not > 0, or the gas data are not physical.
+ * @retval GK_ERR_NO_SOLUTION No real root above the covolume.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
+                              gk_root root, gk_eos_result *out);
+
+/**
+ * @brief Pressure from an equation of state at molar volume @p vm and temperature @p t.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p gas or @p out is NULL, or @p eos out of range.
+ * @retval GK_ERR_DOMAIN   Vm or T not finite or not > 0, Vm at or below the covolume, or the
+ *                         gas data are not physical.
+ * @retval GK_ERR_NO_SOLUTION The model gives a pressure that is not > 0.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_temperature t,
+                                 gk_pressure *out);
+
+/**
+ * @brief Mass density of the stable root: rho = M / Vm.
+ * @retval As gk_eos_solve().
+ */
+GK_API gk_status gk_eos_density(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
+                                gk_density *out);
+
+/** @} */
+
+#ifdef __cplusplus
+}
+#endif
+
+#endif /* GASKIT_EOS_H */

@@ -1,0 +1,139 @@
+/**
+ * @file instrument.h
+ * @brief What instruments report: compressibility of a gas or mixture, flow at reference
+ *        conditions, mass flow, vessel contents, leak rates, relative density and wet mixtures.
+ *
+ * Results are engineering estimates from the chosen model; they are not a substitute for
+ * pressure-equipment codes, custody-transfer standards or gas suppliers' data (see the README's
+ * safety section).
+ */
+#ifndef GASKIT_INSTRUMENT_H
+#define GASKIT_INSTRUMENT_H
+
+#include "gaskit/mixture.h"
+#include "gaskit/reference.h"
+
+#ifdef __cplusplus
+extern "C" {
+#endif
+
+/** @defgroup instrument Instrument calculations
+ *  @{ */
+
+/** What is in the vessel or the line: exactly one of gas and mixture is non-NULL. */
+typedef struct gk_fluid {
+    const gk_gas *gas;          /**< a pure gas, or NULL */
+    const gk_mixture *mixture;  /**< a mixture, or NULL */
+    const gk_real *kij;         /**< with a mixture: count*count interaction parameters, or NULL */
+} gk_fluid;
+
+/**
+ * @brief Compressibility factor Z of the stable root of @p eos for a gas or mixture.
+ * @retval GK_OK           @p z written.
+ * @retval GK_ERR_ARGUMENT @p z is NULL, @p eos out of range, or not exactly one of gas and mixture.
+ * @retval Others          As gk_eos_solve() / gk_mixture_eos_solve().
+ */
+GK_API gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t, gk_real *z);
+
+/**
+ * @brief Actual volume flow at p, T to the volume flow at a reference condition, with Z from
+ *        @p eos at both conditions.
+ * @retval As gk_fluid_z(); GK_ERR_DOMAIN for a flow that is not finite; GK_ERR_RANGE for a
+ *         stable state that is liquid at either condition.
+ */
+GK_API gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
+                                      gk_temperature t, gk_reference ref, gk_volume_flow *out);
+
+/**
+ * @brief Volume flow at a reference condition to the actual volume flow at p, T.
+ * @retval As gk_flow_to_reference().
+ */
+GK_API gk_status gk_flow_from_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow at_reference,
+                                        gk_reference ref, gk_pressure p, gk_temperature t,
+                                        gk_volume_flow *out);
+
+/**
+ * @brief Mass flow of an actual volume flow at p, T: w = q rho(p, T).
+ *
+ * The API contract names this function gk_mass_flow, but in C that name is already the
+ * typedef of the mass-flow quantity (gk_mass_flow), and a function and a typedef cannot share
+ * an identifier. The linked symbol is therefore gk_flow_to_mass; the function-like macro
+ * gk_mass_flow() below keeps the contract's call syntax working from C and C++ source (it
+ * expands only where the name is followed by '(', so the type name is unaffected).
+ * Foreign callers bind the symbol gk_flow_to_mass.
+ * @retval As gk_flow_to_reference().
+ */
+GK_API gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
+                                 gk_temperature t, gk_mass_flow *out);
+
+/** Contract spelling of gk_flow_to_mass() (see there). */
+#define gk_mass_flow(eos, fluid, actual, p, t, out) gk_flow_to_mass((eos), (fluid), (actual), (p), (t), (out))
+
+/** Contents of a vessel. */
+typedef struct gk_contents {
+    gk_amount amount;            /**< amount of gas in the vessel */
+    gk_mass mass;                /**< its mass */
+    gk_volume reference_volume;  /**< its volume at the reference condition (as free gas) */
+    gk_real z;                   /**< compressibility factor in the vessel */
+} gk_contents;
+
+/**
+ * @brief Contents of a vessel of internal volume @p vessel at pressure @p p and temperature @p t.
+ *
+ * Where the stable state in the vessel is liquid (a liquefied-gas cylinder), the contents do not
+ * follow from pressure: GK_ERR_RANGE; such containers are weighed.
+ * @retval As gk_fluid_z(); GK_ERR_DOMAIN for a vessel volume not > 0; GK_ERR_RANGE for a
+ *         liquid stable state.
+ */
+GK_API gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel, gk_pressure p,
+                                    gk_temperature t, gk_reference ref, gk_contents *out);
+
+/** A leak rate, in three forms. */
+typedef struct gk_leak {
+    gk_real mol_per_s;              /**< amount lost per second */
+    gk_mass_flow mass_flow;         /**< mass lost per second */
+    gk_volume_flow reference_flow;  /**< volume lost per second at the reference condition */
+} gk_leak;
+
+/**
+ * @brief Leak rate of a closed test volume from a pressure-decay test, temperature-compensated
+ *        through the amount n = p V / (Z R T) at start and end.
+ * @retval GK_OK              @p out written.
+ * @retval GK_ERR_NO_SOLUTION The end state holds more gas than the start (gas flowed in, or
+ *                            the temperature reading is wrong).
+ * @retval GK_ERR_DOMAIN      Elapsed time or volume not finite or not > 0, or another input
+ *                            outside its domain.
+ * @retval Others             As gk_vessel_contents().
+ */
+GK_API gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test_volume,
+                                             gk_pressure p_start, gk_temperature t_start,
+                                             gk_pressure p_end, gk_temperature t_end,
+                                             gk_real elapsed_s, gk_reference ref, gk_leak *out);
+
+/**
+ * @brief Density of a gas or mixture relative to dry air at the same pressure and temperature.
+ * @retval As gk_fluid_z().
+ */
+GK_API gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t,
+                                     gk_real *out);
+
+/**
+ * @brief Adds water vapour at relative humidity @p relative_humidity (fraction in [0, 1]) to a
+ *        dry mixture at p, T: x_w = RH p_ws(T) / p, other fractions scaled by (1 - x_w).
+ * @retval GK_OK              @p wet written (water appended, or added to an existing H2O component).
+ * @retval GK_ERR_ARGUMENT    An argument is NULL.
+ * @retval GK_ERR_COMPOSITION @p dry is not valid, or already holds GK_MIXTURE_MAX components.
+ * @retval GK_ERR_DOMAIN      An input is not finite, or RH outside [0, 1].
+ * @retval GK_ERR_RANGE       T outside the vapour-pressure curves.
+ * @retval GK_ERR_NO_SOLUTION The water partial pressure is not below p.
+ */
+GK_API gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature t,
+                                  gk_real relative_humidity, gk_mixture *wet);
+
+/** @} */
+
+#ifdef __cplusplus
+}
+#endif
+
+#endif /* GASKIT_INSTRUMENT_H */

@@ -1,0 +1,411 @@
+/**
+ * @file units.h
+ * @brief Typed quantities (one SI value each) and unit conversion.
+ *
+ * Units are converted once, at the edge: a reading in any listed unit becomes a typed struct
+ * holding the SI value, and every computing function works in SI. Unit factors are those of
+ * NIST SP 811 (2008), Appendix B; they are listed with their sources in lib/units.c.
+ */
+#ifndef GASKIT_UNITS_H
+#define GASKIT_UNITS_H
+
+#include "gaskit/base.h"
+
+#ifdef __cplusplus
+extern "C" {
+#endif
+
+/** @defgroup units Quantities and units
+ *  @{ */
+
+/** A absolute pressure in pascal (absolute) (Pa). Always absolute; see gk_pressure_from_gauge() for gauge readings. */
+typedef struct gk_pressure { gk_real pa; /**< value in Pa */ } gk_pressure;
+
+/** A thermodynamic temperature in kelvin (K). */
+typedef struct gk_temperature { gk_real k; /**< value in K */ } gk_temperature;
+
+/** A volume in cubic metre (m3). */
+typedef struct gk_volume { gk_real m3; /**< value in m3 */ } gk_volume;
+
+/** A amount of substance in mole (mol). */
+typedef struct gk_amount { gk_real mol; /**< value in mol */ } gk_amount;
+
+/** A molar mass in kilogram per mole (kg/mol). */
+typedef struct gk_molar_mass { gk_real kg_per_mol; /**< value in kg/mol */ } gk_molar_mass;
+
+/** A molar volume in cubic metre per mole (m3/mol). */
+typedef struct gk_molar_volume { gk_real m3_per_mol; /**< value in m3/mol */ } gk_molar_volume;
+
+/** A mass density in kilogram per cubic metre (kg/m3). */
+typedef struct gk_density { gk_real kg_per_m3; /**< value in kg/m3 */ } gk_density;
+
+/** A speed in metre per second (m/s). */
+typedef struct gk_speed { gk_real m_per_s; /**< value in m/s */ } gk_speed;
+
+/** A mass in kilogram (kg). */
+typedef struct gk_mass { gk_real kg; /**< value in kg */ } gk_mass;
+
+/** A volume flow rate in cubic metre per second (m3/s). */
+typedef struct gk_volume_flow { gk_real m3_per_s; /**< value in m3/s */ } gk_volume_flow;
+
+/** A mass flow rate in kilogram per second (kg/s). */
+typedef struct gk_mass_flow { gk_real kg_per_s; /**< value in kg/s */ } gk_mass_flow;
+
+
+/**
+ * Units known to gaskit. Each has one dimension; gk_convert() only converts within one.
+ * GK_UNIT_AT is the technical atmosphere (kgf/cm2, 98066.5 Pa); GK_UNIT_MMHG and GK_UNIT_INHG are
+ * the conventional millimetre and inch of mercury; GK_UNIT_DEGR is the degree Rankine.
+ */
+typedef enum gk_unit {
+    /* pressure */
+    GK_UNIT_PA, GK_UNIT_HPA, GK_UNIT_KPA, GK_UNIT_MPA, GK_UNIT_BAR, GK_UNIT_MBAR,
+    GK_UNIT_ATM, GK_UNIT_AT, GK_UNIT_TORR, GK_UNIT_MMHG, GK_UNIT_INHG, GK_UNIT_PSI,
+    /* temperature */
+    GK_UNIT_K, GK_UNIT_DEGC, GK_UNIT_DEGF, GK_UNIT_DEGR,
+    /* volume */
+    GK_UNIT_M3, GK_UNIT_L, GK_UNIT_ML, GK_UNIT_FT3, GK_UNIT_IN3, GK_UNIT_GAL_US,
+    /* amount */
+    GK_UNIT_MOL, GK_UNIT_MMOL, GK_UNIT_KMOL, GK_UNIT_LBMOL,
+    /* molar mass */
+    GK_UNIT_KG_PER_MOL, GK_UNIT_G_PER_MOL,
+    /* molar volume */
+    GK_UNIT_M3_PER_MOL, GK_UNIT_L_PER_MOL, GK_UNIT_CM3_PER_MOL,
+    /* density */
+    GK_UNIT_KG_PER_M3, GK_UNIT_G_PER_L, GK_UNIT_G_PER_CM3, GK_UNIT_LB_PER_FT3,
+    /* speed */
+    GK_UNIT_M_PER_S, GK_UNIT_KM_PER_H, GK_UNIT_FT_PER_S,
+    /* mass */
+    GK_UNIT_KG, GK_UNIT_G, GK_UNIT_LB,
+    /* volume flow */
+    GK_UNIT_M3_PER_S, GK_UNIT_M3_PER_H, GK_UNIT_L_PER_MIN, GK_UNIT_ML_PER_MIN,
+    GK_UNIT_FT3_PER_MIN,
+    /* mass flow */
+    GK_UNIT_KG_PER_S, GK_UNIT_KG_PER_H, GK_UNIT_G_PER_MIN, GK_UNIT_LB_PER_H,
+    GK_UNIT_COUNT     /**< not a unit: the number of units */
+} gk_unit;
+
+/**
+ * @brief Converts a value between two units of the same dimension.
+ *
+ * Temperatures are converted as temperatures (with the offsets of the Celsius and Fahrenheit
+ * scales), not as differences.
+ * @param value Value in unit @p from; must be finite.
+ * @param from  Unit of @p value.
+ * @param to    Unit wanted.
+ * @param[out] out Converted value.
+ * @retval GK_OK            @p out written.
+ * @retval GK_ERR_ARGUMENT  @p out is NULL, a unit is out of range, or the units differ in dimension.
+ * @retval GK_ERR_DOMAIN    @p value is not finite, or is a temperature below absolute zero.
+ * @retval GK_ERR_RANGE     The result overflows.
+ */
+GK_API gk_status gk_convert(gk_real value, gk_unit from, gk_unit to, gk_real *out);
+
+/**
+ * @brief Finds a unit by its symbol.
+ *
+ * Accepts the SI / NIST SP 811 symbols and plain ASCII spellings, e.g. "Pa", "kPa", "MPa",
+ * "bar", "mbar", "hPa", "atm", "at", "Torr", "mmHg", "inHg", "psi", "K", "degC", "°C" (UTF-8),
+ * "degF", "°F", "degR", "m3", "L", "mL", "ft3", "gal", "mol", "kmol", "lbmol", "g/mol",
+ * "kg/m3", "g/L", "m/s", "km/h", "kg", "g", "lb", "m3/h", "L/min", "mL/min", "kg/h".
+ * The match is exact (case matters: "mbar" is not "Mbar"). Reads @p symbol only up to its
+ * terminating NUL.
+ * @param symbol NUL-terminated text.
+ * @param[out] out The unit.
+ * @retval GK_OK            @p out written.
+ * @retval GK_ERR_ARGUMENT  @p symbol or @p out is NULL.
+ * @retval GK_ERR_NOT_FOUND No unit has that symbol.
+ */
+GK_API gk_status gk_unit_parse(const char *symbol, gk_unit *out);
+
+/**
+ * @brief The symbol of a unit.
+ * @return Static ASCII text such as "kPa" or "degC"; "?" for a value out of range; never NULL.
+ */
+GK_API const char *gk_unit_symbol(gk_unit unit);
+
+/**
+ * @brief Makes a absolute pressure from a value in a pressure unit.
+ * @param value Value in @p unit.
+ * @param unit  A pressure unit.
+ * @param[out] out The absolute pressure in Pa.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a pressure unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0 Pa (absolute).
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_pressure_from(gk_real value, gk_unit unit, gk_pressure *out);
+
+/**
+ * @brief Expresses a absolute pressure in a pressure unit.
+ * @param p The absolute pressure (Pa).
+ * @param unit A pressure unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a pressure unit.
+ * @retval GK_ERR_DOMAIN   The absolute pressure is not finite or not > 0 Pa (absolute).
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_pressure_to(gk_pressure p, gk_unit unit, gk_real *out);
+
+/**
+ * @brief Makes an absolute pressure from a gauge reading: p = value (in @p unit) + ambient.
+ * @param value   Gauge reading in @p unit (may be negative: a vacuum gauge).
+ * @param unit    A pressure unit.
+ * @param ambient Ambient (barometric) pressure, absolute, > 0.
+ * @param[out] out Absolute pressure.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a pressure unit.
+ * @retval GK_ERR_DOMAIN   An input is not finite, @p ambient is not > 0, or the absolute
+ *                         pressure would not be > 0.
+ */
+GK_API gk_status gk_pressure_from_gauge(gk_real value, gk_unit unit, gk_pressure ambient,
+                                        gk_pressure *out);
+
+/**
+ * @brief Makes a thermodynamic temperature from a value in a temperature unit.
+ * @param value Value in @p unit.
+ * @param unit  A temperature unit.
+ * @param[out] out The thermodynamic temperature in K.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a temperature unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite or below absolute zero (not > 0 K).
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_temperature_from(gk_real value, gk_unit unit, gk_temperature *out);
+
+/**
+ * @brief Expresses a thermodynamic temperature in a temperature unit.
+ * @param t The thermodynamic temperature (K).
+ * @param unit A temperature unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a temperature unit.
+ * @retval GK_ERR_DOMAIN   The thermodynamic temperature is not finite or below absolute zero (not > 0 K).
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_temperature_to(gk_temperature t, gk_unit unit, gk_real *out);
+
+/**
+ * @brief Makes a volume from a value in a volume unit.
+ * @param value Value in @p unit.
+ * @param unit  A volume unit.
+ * @param[out] out The volume in m3.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_volume_from(gk_real value, gk_unit unit, gk_volume *out);
+
+/**
+ * @brief Expresses a volume in a volume unit.
+ * @param v The volume (m3).
+ * @param unit A volume unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume unit.
+ * @retval GK_ERR_DOMAIN   The volume is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_volume_to(gk_volume v, gk_unit unit, gk_real *out);
+
+/**
+ * @brief Makes a amount of substance from a value in a amount unit.
+ * @param value Value in @p unit.
+ * @param unit  A amount unit.
+ * @param[out] out The amount of substance in mol.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a amount unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_amount_from(gk_real value, gk_unit unit, gk_amount *out);
+
+/**
+ * @brief Expresses a amount of substance in a amount unit.
+ * @param n The amount of substance (mol).
+ * @param unit A amount unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a amount unit.
+ * @retval GK_ERR_DOMAIN   The amount of substance is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_amount_to(gk_amount n, gk_unit unit, gk_real *out);
+
+/**
+ * @brief Makes a molar mass from a value in a molar mass unit.
+ * @param value Value in @p unit.
+ * @param unit  A molar mass unit.
+ * @param[out] out The molar mass in kg/mol.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar mass unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_molar_mass_from(gk_real value, gk_unit unit, gk_molar_mass *out);
+
+/**
+ * @brief Expresses a molar mass in a molar mass unit.
+ * @param m The molar mass (kg/mol).
+ * @param unit A molar mass unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar mass unit.
+ * @retval GK_ERR_DOMAIN   The molar mass is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_molar_mass_to(gk_molar_mass m, gk_unit unit, gk_real *out);
+
+/**
+ * @brief Makes a molar volume from a value in a molar volume unit.
+ * @param value Value in @p unit.
+ * @param unit  A molar volume unit.
+ * @param[out] out The molar volume in m3/mol.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar volume unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_molar_volume_from(gk_real value, gk_unit unit, gk_molar_volume *out);
+
+/**
+ * @brief Expresses a molar volume in a molar volume unit.
+ * @param vm The molar volume (m3/mol).
+ * @param unit A molar volume unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar volume unit.
+ * @retval GK_ERR_DOMAIN   The molar volume is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_molar_volume_to(gk_molar_volume vm, gk_unit unit, gk_real *out);
+
+/**
+ * @brief Makes a mass density from a value in a density unit.
+ * @param value Value in @p unit.
+ * @param unit  A density unit.
+ * @param[out] out The mass density in kg/m3.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a density unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_density_from(gk_real value, gk_unit unit, gk_density *out);
+
+/**
+ * @brief Expresses a mass density in a density unit.
+ * @param rho The mass density (kg/m3).
+ * @param unit A density unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a density unit.
+ * @retval GK_ERR_DOMAIN   The mass density is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_density_to(gk_density rho, gk_unit unit, gk_real *out);
+
+/**
+ * @brief Makes a speed from a value in a speed unit.
+ * @param value Value in @p unit.
+ * @param unit  A speed unit.
+ * @param[out] out The speed in m/s.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a speed unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite.
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_speed_from(gk_real value, gk_unit unit, gk_speed *out);
+
+/**
+ * @brief Expresses a speed in a speed unit.
+ * @param u The speed (m/s).
+ * @param unit A speed unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a speed unit.
+ * @retval GK_ERR_DOMAIN   The speed is not finite.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_speed_to(gk_speed u, gk_unit unit, gk_real *out);
+
+/**
+ * @brief Makes a mass from a value in a mass unit.
+ * @param value Value in @p unit.
+ * @param unit  A mass unit.
+ * @param[out] out The mass in kg.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_mass_from(gk_real value, gk_unit unit, gk_mass *out);
+
+/**
+ * @brief Expresses a mass in a mass unit.
+ * @param mass The mass (kg).
+ * @param unit A mass unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass unit.
+ * @retval GK_ERR_DOMAIN   The mass is not finite or not > 0.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_mass_to(gk_mass mass, gk_unit unit, gk_real *out);
+
+/**
+ * @brief Makes a volume flow rate from a value in a volume flow unit.
+ * @param value Value in @p unit.
+ * @param unit  A volume flow unit.
+ * @param[out] out The volume flow rate in m3/s.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume flow unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite.
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_volume_flow_from(gk_real value, gk_unit unit, gk_volume_flow *out);
+
+/**
+ * @brief Expresses a volume flow rate in a volume flow unit.
+ * @param q The volume flow rate (m3/s).
+ * @param unit A volume flow unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume flow unit.
+ * @retval GK_ERR_DOMAIN   The volume flow rate is not finite.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_volume_flow_to(gk_volume_flow q, gk_unit unit, gk_real *out);
+
+/**
+ * @brief Makes a mass flow rate from a value in a mass flow unit.
+ * @param value Value in @p unit.
+ * @param unit  A mass flow unit.
+ * @param[out] out The mass flow rate in kg/s.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass flow unit.
+ * @retval GK_ERR_DOMAIN   @p value is not finite.
+ * @retval GK_ERR_RANGE    The SI value overflows.
+ */
+GK_API gk_status gk_mass_flow_from(gk_real value, gk_unit unit, gk_mass_flow *out);
+
+/**
+ * @brief Expresses a mass flow rate in a mass flow unit.
+ * @param w The mass flow rate (kg/s).
+ * @param unit A mass flow unit.
+ * @param[out] out The value in @p unit.
+ * @retval GK_OK           @p out written.
+ * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass flow unit.
+ * @retval GK_ERR_DOMAIN   The mass flow rate is not finite.
+ * @retval GK_ERR_RANGE    The result overflows.
+ */
+GK_API gk_status gk_mass_flow_to(gk_mass_flow w, gk_unit unit, gk_real *out);
+
+/** @} */
+
+#ifdef __cplusplus
+}
+#endif
+
+#endif /* GASKIT_UNITS_H */
