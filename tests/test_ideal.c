@@ -4,6 +4,8 @@
 
 #define BIG ((gk_real)GK_TOL(1e300, 1e30))
 #define SMALL ((gk_real)GK_TOL(1e-300, 1e-30))
+/* NAN is a float constant (C99 7.12): promote it explicitly where a double is wanted */
+#define QNAN ((double)NAN)
 
 /* Most reference figures here are exact CODATA / SI arithmetic; the double tolerance 1e-9
  * follows the truncation of the printed CODATA values, the float one (3e-7) allows the
@@ -19,6 +21,13 @@ static gk_volume V(double m3) { gk_volume q = { (gk_real)m3 }; return q; }
 static gk_amount N(double mol) { gk_amount q = { (gk_real)mol }; return q; }
 static gk_molar_mass M(double kg_per_mol) { gk_molar_mass q = { (gk_real)kg_per_mol }; return q; }
 static gk_density RHO(double kg_per_m3) { gk_density q = { (gk_real)kg_per_m3 }; return q; }
+/* the same from a gk_real (no conversion in a float build) */
+static gk_pressure Pr(gk_real x) { gk_pressure q = { x }; return q; }
+static gk_temperature Tr(gk_real x) { gk_temperature q = { x }; return q; }
+static gk_volume Vr(gk_real x) { gk_volume q = { x }; return q; }
+static gk_amount Nr(gk_real x) { gk_amount q = { x }; return q; }
+static gk_molar_mass Mr(gk_real x) { gk_molar_mass q = { x }; return q; }
+static gk_density RHOr(gk_real x) { gk_density q = { x }; return q; }
 
 /* ------------------------------------------------------------------ published values */
 static void codata_molar_volume(void **state) {
@@ -119,38 +128,38 @@ static void state_change_special_cases(void **state) {
     const gk_state s1 = S(100000.0, 2.0e-3, 300.0, 0.08);
     gk_state s2;
     /* Boyle (n, T constant): V 2 L -> 0.5 L gives p 100 kPa -> 400 kPa */
-    s2 = S(NAN, 0.5e-3, 300.0, 0.08);
+    s2 = S(QNAN, 0.5e-3, 300.0, 0.08);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_PRESSURE), GK_OK);
     assert_rel(s2.p.pa, 400000.0, tol);
     assert_rel(s2.v.m3, (gk_real)0.5e-3, 0.0);   /* the other fields are not touched */
     assert_rel(s2.t.k, 300.0, 0.0);
     assert_rel(s2.n.mol, (gk_real)0.08, 0.0);
     /* Boyle, the other way: p 100 kPa -> 250 kPa gives V 2 L -> 0.8 L */
-    s2 = S(250000.0, NAN, 300.0, 0.08);
+    s2 = S(250000.0, QNAN, 300.0, 0.08);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_VOLUME), GK_OK);
     assert_rel(s2.v.m3, 0.8e-3, tol);
     /* Charles (n, p constant): T 300 K -> 450 K gives V 2 L -> 3 L */
-    s2 = S(100000.0, NAN, 450.0, 0.08);
+    s2 = S(100000.0, QNAN, 450.0, 0.08);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_VOLUME), GK_OK);
     assert_rel(s2.v.m3, 3.0e-3, tol);
     /* Charles, solved for T: V 2 L -> 2.5 L gives T 300 K -> 375 K */
-    s2 = S(100000.0, 2.5e-3, NAN, 0.08);
+    s2 = S(100000.0, 2.5e-3, QNAN, 0.08);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_TEMPERATURE), GK_OK);
     assert_rel(s2.t.k, 375.0, tol);
     /* Gay-Lussac (n, V constant): T 300 K -> 600 K gives p 100 kPa -> 200 kPa */
-    s2 = S(NAN, 2.0e-3, 600.0, 0.08);
+    s2 = S(QNAN, 2.0e-3, 600.0, 0.08);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_PRESSURE), GK_OK);
     assert_rel(s2.p.pa, 200000.0, tol);
     /* Avogadro (p, T constant): n 0.08 mol -> 0.2 mol gives V 2 L -> 5 L */
-    s2 = S(100000.0, NAN, 300.0, 0.2);
+    s2 = S(100000.0, QNAN, 300.0, 0.2);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_VOLUME), GK_OK);
     assert_rel(s2.v.m3, 5.0e-3, tol);
     /* Avogadro, solved for n: V 2 L -> 7 L gives n 0.08 -> 0.28 mol */
-    s2 = S(100000.0, 7.0e-3, 300.0, NAN);
+    s2 = S(100000.0, 7.0e-3, 300.0, QNAN);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_AMOUNT), GK_OK);
     assert_rel(s2.n.mol, 0.28, tol);
     /* nothing changes: the identical state comes back exactly */
-    s2 = S(NAN, 2.0e-3, 300.0, 0.08);
+    s2 = S(QNAN, 2.0e-3, 300.0, 0.08);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_PRESSURE), GK_OK);
     assert_rel(s2.p.pa, 100000.0, 0.0);
 }
@@ -159,16 +168,16 @@ static void state_change_general(void **state) {
     (void)state;
     /* Hand computation (exact rationals): 4 mol at 200 kPa, 50 L, 288.15 K. */
     const gk_state s1 = S(200000.0, 0.050, 288.15, 4.0);
-    gk_state s2 = S(NAN, 0.030, 318.15, 3.5);
+    gk_state s2 = S(QNAN, 0.030, 318.15, 3.5);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_PRESSURE), GK_OK);
     assert_rel(s2.p.pa, 322032.7954190526, TOL_HAND);
-    s2 = S(350000.0, NAN, 318.15, 3.5);
+    s2 = S(350000.0, QNAN, 318.15, 3.5);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_VOLUME), GK_OK);
     assert_rel(s2.v.m3, 0.027602811035918794, TOL_HAND);
-    s2 = S(350000.0, 0.030, NAN, 3.5);
+    s2 = S(350000.0, 0.030, QNAN, 3.5);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_TEMPERATURE), GK_OK);
     assert_rel(s2.t.k, 345.78, TOL_HAND);
-    s2 = S(350000.0, 0.030, 318.15, NAN);
+    s2 = S(350000.0, 0.030, 318.15, QNAN);
     assert_status(gk_state_change(&s1, &s2, GK_VAR_AMOUNT), GK_OK);
     assert_rel(s2.n.mol, 3.803960396039604, TOL_HAND);
     /* the invariant p V / (n T) is the same in both states */
@@ -207,14 +216,15 @@ static void state_change_errors(void **state) {
         }
     }
     /* overflow and underflow of the unknown */
-    const gk_state big = S(BIG, BIG, SMALL, SMALL);
-    after = S(NAN, SMALL, BIG, BIG);
+    const double B = (double)BIG, L = (double)SMALL;
+    const gk_state big = S(B, B, L, L);
+    after = S(QNAN, L, B, B);
     copy = after;
     assert_status(gk_state_change(&big, &after, GK_VAR_PRESSURE), GK_ERR_RANGE);
     assert_memory_equal(&after, &copy, sizeof after);
-    after = S(NAN, BIG, SMALL, SMALL);
+    after = S(QNAN, B, L, L);
     copy = after;
-    const gk_state small = S(SMALL, SMALL, BIG, BIG);
+    const gk_state small = S(L, L, B, B);
     assert_status(gk_state_change(&small, &after, GK_VAR_PRESSURE), GK_ERR_RANGE);
     assert_memory_equal(&after, &copy, sizeof after);
 }
@@ -241,7 +251,7 @@ static void dalton_partial_pressure(void **state) {
     const gk_real bad_p[] = { (gk_real)NAN, (gk_real)INFINITY, (gk_real)-INFINITY, (gk_real)0.0,
                               (gk_real)-1.0 };
     for (size_t i = 0; i < 5; ++i)
-        assert_status(gk_partial_pressure(P(bad_p[i]), (gk_real)0.5, &s), GK_ERR_DOMAIN);
+        assert_status(gk_partial_pressure(Pr(bad_p[i]), (gk_real)0.5, &s), GK_ERR_DOMAIN);
     /* underflow of a non-zero fraction */
     assert_status(gk_partial_pressure(P(GK_TOL(1e-300, 1e-30)), (gk_real)GK_TOL(1e-10, 1e-10), &s),
                   GK_ERR_RANGE);
@@ -252,25 +262,25 @@ static void dalton_partial_pressure(void **state) {
 typedef gk_status (*fn3)(const gk_real *in, gk_real *out);
 
 static gk_status w_pressure(const gk_real *x, gk_real *o) {
-    return gk_ideal_pressure(N(x[0]), T(x[1]), V(x[2]), (gk_pressure *)(void *)o);
+    return gk_ideal_pressure(Nr(x[0]), Tr(x[1]), Vr(x[2]), (gk_pressure *)(void *)o);
 }
 static gk_status w_volume(const gk_real *x, gk_real *o) {
-    return gk_ideal_volume(N(x[0]), T(x[1]), P(x[2]), (gk_volume *)(void *)o);
+    return gk_ideal_volume(Nr(x[0]), Tr(x[1]), Pr(x[2]), (gk_volume *)(void *)o);
 }
 static gk_status w_amount(const gk_real *x, gk_real *o) {
-    return gk_ideal_amount(P(x[0]), V(x[1]), T(x[2]), (gk_amount *)(void *)o);
+    return gk_ideal_amount(Pr(x[0]), Vr(x[1]), Tr(x[2]), (gk_amount *)(void *)o);
 }
 static gk_status w_temperature(const gk_real *x, gk_real *o) {
-    return gk_ideal_temperature(P(x[0]), V(x[1]), N(x[2]), (gk_temperature *)(void *)o);
+    return gk_ideal_temperature(Pr(x[0]), Vr(x[1]), Nr(x[2]), (gk_temperature *)(void *)o);
 }
 static gk_status w_molar_volume(const gk_real *x, gk_real *o) {
-    return gk_ideal_molar_volume(P(x[0]), T(x[1]), (gk_molar_volume *)(void *)o);
+    return gk_ideal_molar_volume(Pr(x[0]), Tr(x[1]), (gk_molar_volume *)(void *)o);
 }
 static gk_status w_density(const gk_real *x, gk_real *o) {
-    return gk_ideal_density(P(x[0]), T(x[1]), M(x[2]), (gk_density *)(void *)o);
+    return gk_ideal_density(Pr(x[0]), Tr(x[1]), Mr(x[2]), (gk_density *)(void *)o);
 }
 static gk_status w_molar_mass(const gk_real *x, gk_real *o) {
-    return gk_ideal_molar_mass(RHO(x[0]), P(x[1]), T(x[2]), (gk_molar_mass *)(void *)o);
+    return gk_ideal_molar_mass(RHOr(x[0]), Pr(x[1]), Tr(x[2]), (gk_molar_mass *)(void *)o);
 }
 
 typedef struct case3 {

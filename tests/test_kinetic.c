@@ -11,6 +11,10 @@
 static gk_pressure P(double pa) { gk_pressure q = { (gk_real)pa }; return q; }
 static gk_temperature T(double k) { gk_temperature q = { (gk_real)k }; return q; }
 static gk_molar_mass M(double kg_per_mol) { gk_molar_mass q = { (gk_real)kg_per_mol }; return q; }
+/* the same from a gk_real (no conversion in a float build) */
+static gk_pressure Pr(gk_real x) { gk_pressure q = { x }; return q; }
+static gk_temperature Tr(gk_real x) { gk_temperature q = { x }; return q; }
+static gk_molar_mass Mr(gk_real x) { gk_molar_mass q = { x }; return q; }
 
 /* ------------------------------------------------------------------ published values */
 static void standard_atmosphere_sea_level(void **state) {
@@ -127,28 +131,28 @@ static void no_spurious_overflow(void **state) {
 typedef gk_status (*fnk)(const gk_real *in, gk_real *out);
 
 static gk_status w_rms(const gk_real *x, gk_real *o) {
-    return gk_speed_rms(T(x[0]), M(x[1]), (gk_speed *)(void *)o);
+    return gk_speed_rms(Tr(x[0]), Mr(x[1]), (gk_speed *)(void *)o);
 }
 static gk_status w_mean(const gk_real *x, gk_real *o) {
-    return gk_speed_mean(T(x[0]), M(x[1]), (gk_speed *)(void *)o);
+    return gk_speed_mean(Tr(x[0]), Mr(x[1]), (gk_speed *)(void *)o);
 }
 static gk_status w_mp(const gk_real *x, gk_real *o) {
-    return gk_speed_most_probable(T(x[0]), M(x[1]), (gk_speed *)(void *)o);
+    return gk_speed_most_probable(Tr(x[0]), Mr(x[1]), (gk_speed *)(void *)o);
 }
 static gk_status w_sound(const gk_real *x, gk_real *o) {
-    return gk_speed_of_sound_ideal(T(x[0]), M(x[1]), x[2], (gk_speed *)(void *)o);
+    return gk_speed_of_sound_ideal(Tr(x[0]), Mr(x[1]), x[2], (gk_speed *)(void *)o);
 }
 static gk_status w_ratio(const gk_real *x, gk_real *o) {
-    return gk_effusion_ratio(M(x[0]), M(x[1]), o);
+    return gk_effusion_ratio(Mr(x[0]), Mr(x[1]), o);
 }
 static gk_status w_effusion_m(const gk_real *x, gk_real *o) {
-    return gk_effusion_molar_mass(M(x[0]), x[1], (gk_molar_mass *)(void *)o);
+    return gk_effusion_molar_mass(Mr(x[0]), x[1], (gk_molar_mass *)(void *)o);
 }
 static gk_status w_mfp(const gk_real *x, gk_real *o) {
-    return gk_mean_free_path(P(x[0]), T(x[1]), x[2], o);
+    return gk_mean_free_path(Pr(x[0]), Tr(x[1]), x[2], o);
 }
 static gk_status w_flux(const gk_real *x, gk_real *o) {
-    return gk_wall_flux(P(x[0]), T(x[1]), M(x[2]), o);
+    return gk_wall_flux(Pr(x[0]), Tr(x[1]), Mr(x[2]), o);
 }
 
 typedef struct casek {

@@ -453,7 +453,7 @@ static void parse_rejects(void **state) {
     (void)state;
     static const char *const rejects[] = {
         "", "k", "kP", "kPa ", " kPa", "kPax", "kpa", "KPA", "Mbar", "MBAR", "pa", "deg",
-        "degc", "\xC2\xB0", "\xC2", "\xC2\xB0" "C ", "m", "L/", "ft", "psig", "bar(g)", "furlong",
+        "degc", "\xC2\xB0", "\xC2", ("\xC2\xB0" "C "), "m", "L/", "ft", "psig", "bar(g)", "furlong",
         "mol/", "g/mo",
     };
     for (size_t i = 0; i < sizeof rejects / sizeof rejects[0]; ++i) {
