@@ -19,7 +19,9 @@ extern "C" {
 /** @defgroup kinetic Kinetic theory
  *  Every function here returns GK_ERR_ARGUMENT for a NULL output, GK_ERR_DOMAIN for an input
  *  that is not finite or not > 0 (unless stated otherwise), and GK_ERR_RANGE where the result
- *  would overflow; outputs are written only on GK_OK.
+ *  would overflow or fall below the smallest normal number; outputs are written only on GK_OK.
+ *  Speeds in m/s, T in K, M in kg/mol, p in Pa. Square roots are taken factor by factor, so
+ *  no intermediate overflows while the result is representable.
  *  @{ */
 
 /** @brief Root-mean-square speed sqrt(3 R T / M).
@@ -36,7 +38,9 @@ GK_API gk_status gk_speed_most_probable(gk_temperature t, gk_molar_mass m, gk_sp
 
 /**
  * @brief Speed of sound in an ideal gas, sqrt(gamma R T / M).
- * @param heat_capacity_ratio gamma = cp/cv; must be finite and in (1, 5/3].
+ * @param heat_capacity_ratio gamma = cp/cv; must be finite and in (1, 5/3] (5/3 for a
+ *        monatomic gas, 1.4 for air and diatomic gases near room temperature). 5/3 is the
+ *        gk_real nearest to 5/3: pass 5.0/3.0, not a rounded 1.667.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_RANGE (see the group).
  * @retval GK_ERR_DOMAIN An input is not finite, T or M not > 0, or gamma outside (1, 5/3].
  */
@@ -64,7 +68,8 @@ GK_API gk_status gk_effusion_molar_mass(gk_molar_mass reference,
 
 /**
  * @brief Mean free path of a hard-sphere gas: lambda = k T / (sqrt(2) pi d^2 p).
- * @param collision_diameter_m Molecular collision diameter d in metres, > 0.
+ * Uses k = GK_BOLTZMANN. Valid while the gas is dilute (lambda much larger than d).
+ * @param collision_diameter_m Molecular collision diameter d in metres, > 0 (a few 1e-10 m).
  * @param[out] out_m Mean free path in metres.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
