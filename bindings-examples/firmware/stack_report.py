@@ -28,10 +28,14 @@ for su in glob.glob(os.path.join(root, "**", "*.su"), recursive=True):
         frames[name] = max(frames.get(name, 0), int(parts[1]))
         kinds[name] = parts[2]
 
+# The call graphs name static functions "file:function"; their nodes carry the frame size.
 edges = {}
 external = set()
 for ci in glob.glob(os.path.join(root, "**", "*.ci"), recursive=True):
     text = open(ci).read()
+    for m in re.finditer(r'node: \{ title: "([^"]+)" label: "[^"]*\\n(\d+) bytes \(([a-z,]+)\)"', text):
+        frames[m.group(1)] = max(frames.get(m.group(1), 0), int(m.group(2)))
+        kinds[m.group(1)] = m.group(3)
     for m in re.finditer(r'edge: \{ sourcename: "([^"]+)" targetname: "([^"]+)"', text):
         edges.setdefault(m.group(1), set()).add(m.group(2))
 
@@ -73,11 +77,15 @@ except RecursionError as e:
 if not public:
     print("no public functions found under", root)
     sys.exit(1)
+def short(fn):
+    return fn.rsplit(":", 1)[-1]
+
+
 own = max(public, key=lambda f: frames[f])
 deep = max(public, key=lambda f: worst[f][0])
 print("summary: stack: largest own frame of a public function: %d bytes (%s)" % (frames[own], own))
 print("summary: stack: worst case with library callees: %d bytes (%s) %s goal <= %d bytes"
-      % (worst[deep][0], " -> ".join(worst[deep][1]),
+      % (worst[deep][0], " -> ".join(short(f) for f in worst[deep][1]),
          "within" if worst[deep][0] <= goal else "ABOVE", goal))
 print("stack: libm/libc callees (frames not included):", ", ".join(sorted(external)) or "none")
 print("stack: per public function (own frame / worst case):")
