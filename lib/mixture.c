@@ -84,7 +84,9 @@ static size_t gk__skip_spaces(const char *text, size_t pos, size_t len) {
  *   component = name '=' value
  *   name      = everything up to the next '=', spaces trimmed at both ends; must not be empty
  *               and must not begin or end with ',' (so names with commas inside, such as
- *               "1,1,1,2-tetrafluoroethane", work, while ",," is still an error)
+ *               "1,1,1,2-tetrafluoroethane", work, while ",," is still an error). A name with
+ *               a comma inside that names no gas is GK_ERR_PARSE, not GK_ERR_NOT_FOUND: the
+ *               comma was most likely a separator ("N2=0,5, O2=0,5" with decimal commas).
  *   value     = number [ '%' | "ppm" ] | "balance"      (spaces allowed around each token;
  *               "ppm" and "balance" in any ASCII case)
  * A component ends at ',' or at the end of the text; anything else after the value is an error.
@@ -158,6 +160,13 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
         for (i = 0; i < name_end - name_begin; ++i) name[i] = text[name_begin + i];
         name[name_end - name_begin] = '\0';
         st = gk_gas_find(name, &gas);
+        if (st == GK_ERR_NOT_FOUND) {
+            /* "N2=0,5, O2=0,5": a comma inside a name that names no gas was most likely
+               meant as a separator, so the text is malformed rather than the gas unknown. */
+            for (i = 0; name[i] != '\0'; ++i) {
+                if (name[i] == ',') return GK_ERR_PARSE;
+            }
+        }
         if (st != GK_OK) return st;
 
         if (mix.count == GK_MIXTURE_MAX) return GK_ERR_COMPOSITION;
