@@ -265,8 +265,8 @@ static void bad_compositions(void **state) {
         "N2=0.5, O2=0.500002, Ar=balance",
         /* U.S. Standard Atmosphere 1976 composition of dry air by volume, as printed: sums to
            0.999997147, 2.9e-6 short of 1, so it needs "balance" or normalizing */
-        "N2=0.78084, O2=0.209476, Ar=0.00934, CO2=0.000314, Ne=18.18ppm, He=5.24ppm, "
-        "Kr=1.14ppm, Xe=0.087ppm, CH4=2ppm, H2=0.5ppm",
+        ("N2=0.78084, O2=0.209476, Ar=0.00934, CO2=0.000314, Ne=18.18ppm, He=5.24ppm, "
+         "Kr=1.14ppm, Xe=0.087ppm, CH4=2ppm, H2=0.5ppm"),
     };
     for (size_t i = 0; i < sizeof bad / sizeof bad[0]; ++i) {
         print_message("composition: \"%s\"\n", bad[i]);
