@@ -97,8 +97,6 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
     size_t pos = 0;
     size_t i;
     size_t balance_index = GK_MIXTURE_MAX;   /* none yet */
-    gk_real given[GK_MIXTURE_MAX];
-    size_t given_count = 0;
     gk_real sum;
 
     if (text == NULL || out == NULL) return GK_ERR_ARGUMENT;
@@ -110,7 +108,6 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
     for (i = 0; i < GK_MIXTURE_MAX; ++i) {
         mix.gas[i] = NULL;
         mix.mole_fraction[i] = GK_LIT(0.0);
-        given[i] = GK_LIT(0.0);
     }
 
     for (;;) {
@@ -184,7 +181,6 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
             if (number.negative && number.mantissa != 0u) return GK_ERR_COMPOSITION;
             if (x > GK_LIT(1.0)) return GK_ERR_COMPOSITION;
             mix.mole_fraction[mix.count] = x;
-            given[given_count++] = x;
         }
         mix.gas[mix.count] = gas;
         mix.count += 1u;
@@ -193,7 +189,8 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
         pos = v + 1u;                                        /* past ',' */
     }
 
-    sum = gk__compensated_sum(given, given_count);
+    /* the balance slot still holds 0, so this is the sum of the given fractions */
+    sum = gk__compensated_sum(mix.mole_fraction, mix.count);
     if (balance_index != GK_MIXTURE_MAX) {
         gk_real rest = GK_LIT(1.0) - sum;
         if (rest < -GK__MIXTURE_SUM_TOL) return GK_ERR_COMPOSITION;  /* negative balance */
