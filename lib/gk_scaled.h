@@ -1,0 +1,73 @@
+/*
+ * gk_scaled.h - over/underflow-safe products of ratios, shared by units.c, ideal.c, kinetic.c
+ * (private, never installed).
+ *
+ * Formulas such as p = n R T / V can overflow or underflow in an intermediate product although
+ * the result is representable (n = 1e200 mol, T = 1e200 K, V = 1e300 m3). gk_scaled_product()
+ * splits every factor into mantissa and exponent with frexp(), combines the mantissas (each
+ * ratio of two mantissas lies in (0.5, 2), so the running product of at most GK_SCALED_MAX
+ * ratios stays within (2^-8, 2^8)) and applies the summed exponent once with ldexp(). frexp and
+ * ldexp are exact for normal numbers, so the rounding error is the same as that of the plain
+ * expression: one rounding per division and per multiplication, i.e. at most about
+ * (2 count - 1) half-ulps (common practice: floating-point error analysis).
+ *
+ * The factors come in (numerator, denominator) pairs: a pair of equal values gives exactly 1,
+ * so the special cases of gk_state_change() (Boyle, Charles, ...) lose nothing.
+ *
+ * Result rule of the foundation modules: a GK_OK result is finite, and when not exactly 0 its
+ * magnitude is at least the smallest normal number (GK_REAL_MIN_NORMAL); a subnormal or zero
+ * result of non-zero inputs has lost digits and is reported as GK_ERR_RANGE (underflow).
+ */
+#ifndef GASKIT_SCALED_H
+#define GASKIT_SCALED_H
+
+#include "gk_internal.h"
+
+#if GK_REAL_IS_FLOAT
+#  define gk_frexp frexpf
+#  define gk_ldexp ldexpf
+#  define GK_REAL_MIN_NORMAL 1.17549435e-38f /* FLT_MIN = 2^-126, IEEE 754 binary32 */
+#else
+#  define gk_frexp frexp
+#  define gk_ldexp ldexp
+#  define GK_REAL_MIN_NORMAL 2.2250738585072014e-308 /* DBL_MIN = 2^-1022, IEEE 754 binary64 */
+#endif
+
+/* Most (numerator, denominator) pairs gk_scaled_product() accepts. */
+#define GK_SCALED_MAX 4
+
+/* GK_OK when x is finite and either exactly 0 or of normal magnitude; GK_ERR_RANGE otherwise. */
+static inline gk_status gk_check_normal(gk_real x) {
+    gk_real a = gk_fabs(x);
+    if (!gk_finite(x)) return GK_ERR_RANGE;
+    if (a > GK_LIT(0.0) && a < GK_REAL_MIN_NORMAL) return GK_ERR_RANGE;
+    return GK_OK;
+}
+
+/*
+ * out = prod_i num[i] / den[i] for i < count (count <= GK_SCALED_MAX); every factor must be
+ * finite and > 0 (the caller has checked). GK_ERR_RANGE when the result overflows or falls
+ * below the smallest normal number; *out written only on GK_OK.
+ */
+static inline gk_status gk_scaled_product(const gk_real *num, const gk_real *den, int count,
+                                          gk_real *out) {
+    gk_real mant = GK_LIT(1.0);
+    int expo = 0;
+    int i;
+    for (i = 0; i < count; ++i) {
+        int en = 0, ed = 0;
+        gk_real fn = gk_frexp(num[i], &en);
+        gk_real fd = gk_frexp(den[i], &ed);
+        mant *= fn / fd;
+        expo += en - ed;
+    }
+    {
+        /* exponents of finite values stay within a few thousand: no int overflow */
+        gk_real r = gk_ldexp(mant, expo);
+        if (!(r > GK_LIT(0.0)) || gk_check_normal(r) != GK_OK) return GK_ERR_RANGE;
+        *out = r;
+    }
+    return GK_OK;
+}
+
+#endif /* GASKIT_SCALED_H */
