@@ -503,6 +503,14 @@ static const quantity *take(args *a, dim d, size_t k) {
 static gk_status need(args *a, dim d, size_t k, const char *what, const quantity **out, detail *why) {
     const quantity *q = take(a, d, k);
     if (q == NULL) {
+        size_t i;
+        for (i = 0; i < a->nq; i++) {
+            if (a->q[i].d == DIM_NUMBER && d != DIM_NUMBER) {
+                snprintf(why->text, sizeof why->text, "missing %s: '%.60s' has no unit", what,
+                         a->q[i].text);
+                return GK_ERR_ARGUMENT;
+            }
+        }
         snprintf(why->text, sizeof why->text, "missing %s (a %s)", what, dim_name(d));
         return GK_ERR_ARGUMENT;
     }
@@ -1373,6 +1381,11 @@ int main(int argc, char **argv) {
             fprintf(stderr, "gkq %s: %s: %s\n", w->name, why.text[0] ? why.text : "error",
                     gk_status_string(st));
             return 1;
+        }
+        if (set.format == OUT_TEXT && w->fields == convert_fields) {
+            /* a float build carries about 7 significant digits: print no more */
+            printf("%s = %.*g %s\n", r.s[0], (gk_build_flags() & GK_BUILD_FLOAT) ? 7 : 10, r.v[1], r.s[2]);
+            return 0;
         }
         if (set.format == OUT_TEXT) {
             if (w->fields == state_fields || strcmp(w->name, "contents") == 0 ||
