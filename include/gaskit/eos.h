@@ -67,7 +67,12 @@ GK_API gk_status gk_vdw_temperature(gk_vdw c, gk_amount n, gk_volume v, gk_press
 
 /**
  * @brief Van der Waals volume: the chosen real root V > n b of the cubic in V.
+ * @param c    Van der Waals constants (a >= 0, b >= 0).
+ * @param n    Amount of gas, > 0.
+ * @param p    Absolute pressure, > 0.
+ * @param t    Temperature, > 0 K.
  * @param root Which root where there are three (see gk_root).
+ * @param[out] out The volume V of the chosen root, m^3.
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL or @p root out of range.
  * @retval GK_ERR_DOMAIN   An input is not finite, n, p, T not > 0, or a or b < 0.
@@ -104,6 +109,10 @@ typedef struct gk_eos_result {
  * every choice returns it and root_count is 1.
  * @param eos Model.
  * @param gas Gas data (Tc, Pc, acentric factor; vdw_a, vdw_b for van der Waals where non-zero).
+ * @param p   Absolute pressure, > 0.
+ * @param t   Temperature, > 0 K.
+ * @param root Which root where there are three (see gk_root).
+ * @param[out] out Z, molar volume and fugacity coefficient of the chosen root, and all roots.
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p gas or @p out is NULL, or @p eos or @p root out of range.
  * @retval GK_ERR_DOMAIN   p or T not finite or not > 0, or the gas data are not physical.

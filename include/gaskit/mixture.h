@@ -104,8 +104,14 @@ GK_API gk_status gk_mixture_molar_mass(const gk_mixture *mix, gk_molar_mass *out
 /**
  * @brief Solves a cubic equation of state for a mixture with the van der Waals one-fluid
  *        mixing rules: a = sum_i sum_j x_i x_j sqrt(a_i a_j)(1 - k_ij), b = sum_i x_i b_i.
+ * @param eos Model.
+ * @param mix Composition (valid as gk_mixture_parse() requires).
  * @param kij Binary interaction parameters, @p mix->count squared, row-major and symmetric
  *            with a zero diagonal; NULL for all zero.
+ * @param p   Absolute pressure, > 0.
+ * @param t   Temperature, > 0 K.
+ * @param root Which root where there are three (see gk_root).
+ * @param[out] out Z, molar volume and fugacity coefficient of the chosen root, and all roots.
  * @retval As gk_eos_solve(), and GK_ERR_COMPOSITION for an invalid composition, GK_ERR_DOMAIN
  *         for a k_ij that is not finite or not symmetric.
  */

@@ -43,7 +43,10 @@ GK_API gk_status gk_water_saturation_temperature(gk_pressure p, gk_temperature *
  *
  * RH = 1 is gas collected over water (saturated). The enhancement factor of moist gas
  * (about 1.004 near ambient) is neglected.
+ * @param total Total (wet-gas) absolute pressure, > 0.
+ * @param t Temperature of the gas, > 0 K.
  * @param relative_humidity RH as a fraction in [0, 1].
+ * @param[out] out Partial pressure of the dry gas.
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL.
  * @retval GK_ERR_DOMAIN   An input is not finite, p or T not > 0, RH outside [0, 1].
