@@ -113,6 +113,29 @@ static void no_spurious_overflow(void **state) {
     assert_rel(n.mol, GK_TOL(1e-100, 1e-15) / 8.314462618, GK_TOL(1e-14, 5e-7));
 }
 
+/* Ordinary magnitudes take a direct path, extreme ones a frexp/ldexp path: scaling p and T by
+ * the same power of two leaves rho = p M / (R T) unchanged bit for bit (IEEE 754 rounding
+ * commutes with power-of-two scaling), so the two paths agree exactly. */
+static void fast_and_wide_paths_agree(void **state) {
+    (void)state;
+    const int shift = (int)GK_TOL(600, 80);
+    const gk_real p = (gk_real)123456.789, t = (gk_real)301.23;
+    gk_density a = { GK_SENTINEL }, b = { GK_SENTINEL };
+    assert_status(gk_ideal_density(Pr(p), Tr(t), M(0.0280134), &a), GK_OK);
+    assert_status(gk_ideal_density(Pr((gk_real)ldexp((double)p, shift)),
+                                   Tr((gk_real)ldexp((double)t, shift)), M(0.0280134), &b), GK_OK);
+    assert_memory_equal(&a, &b, sizeof a);
+    assert_status(gk_ideal_density(Pr((gk_real)ldexp((double)p, -shift)),
+                                   Tr((gk_real)ldexp((double)t, -shift)), M(0.0280134), &b), GK_OK);
+    assert_memory_equal(&a, &b, sizeof a);
+    /* and p = n R T / V with n and V scaled alike */
+    gk_pressure pa = { GK_SENTINEL }, pb = { GK_SENTINEL };
+    assert_status(gk_ideal_pressure(N(2.5), T(300.0), V(0.03), &pa), GK_OK);
+    assert_status(gk_ideal_pressure(Nr((gk_real)ldexp(2.5, shift)), T(300.0),
+                                    Vr((gk_real)ldexp((double)(gk_real)0.03, shift)), &pb), GK_OK);
+    assert_memory_equal(&pa, &pb, sizeof pa);
+}
+
 /* ------------------------------------------------------------------ changes of state */
 static gk_state S(double pa, double m3, double k, double mol) {
     gk_state s;
@@ -335,6 +358,7 @@ int main(void) {
         cmocka_unit_test(iso2533_sea_level_density),
         cmocka_unit_test(ideal_gas_law_forms),
         cmocka_unit_test(no_spurious_overflow),
+        cmocka_unit_test(fast_and_wide_paths_agree),
         cmocka_unit_test(state_change_special_cases),
         cmocka_unit_test(state_change_general),
         cmocka_unit_test(state_change_errors),

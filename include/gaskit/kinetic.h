@@ -22,6 +22,12 @@ extern "C" {
  *  would overflow or fall below the smallest normal number; outputs are written only on GK_OK.
  *  Speeds in m/s, T in K, M in kg/mol, p in Pa. Square roots are taken factor by factor, so
  *  no intermediate overflows while the result is representable.
+ *
+ *  The heat-capacity ratio of gk_speed_of_sound_ideal() must lie in (1, 5/3]: 5/3 for a
+ *  monatomic gas (pass 5.0/3.0, not a rounded 1.667, which is outside the domain), 1.4 for air
+ *  and diatomic gases near room temperature. gk_mean_free_path() uses k = GK_BOLTZMANN;
+ *  collision diameters are a few 1e-10 m; it holds while the gas is dilute (mean free path
+ *  much larger than the diameter).
  *  @{ */
 
 /** @brief Root-mean-square speed sqrt(3 R T / M).
@@ -38,12 +44,7 @@ GK_API gk_status gk_speed_most_probable(gk_temperature t, gk_molar_mass m, gk_sp
 
 /**
  * @brief Speed of sound in an ideal gas, sqrt(gamma R T / M).
- * @param t Temperature, > 0 K.
- * @param m Molar mass, > 0.
- * @param heat_capacity_ratio gamma = cp/cv; must be finite and in (1, 5/3] (5/3 for a
- *        monatomic gas, 1.4 for air and diatomic gases near room temperature). 5/3 is the
- *        gk_real nearest to 5/3: pass 5.0/3.0, not a rounded 1.667.
- * @param[out] out Speed of sound, m/s.
+ * @param heat_capacity_ratio gamma = cp/cv; must be finite and in (1, 5/3].
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_RANGE (see the group).
  * @retval GK_ERR_DOMAIN An input is not finite, T or M not > 0, or gamma outside (1, 5/3].
  */
@@ -52,8 +53,6 @@ GK_API gk_status gk_speed_of_sound_ideal(gk_temperature t, gk_molar_mass m,
 
 /**
  * @brief Graham's law: effusion rate of gas a over that of gas b, sqrt(M_b / M_a).
- * @param a Molar mass of gas a, > 0.
- * @param b Molar mass of gas b, > 0.
  * @param[out] rate_a_over_b Ratio of molar (or volumetric) effusion rates at equal p and T.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
@@ -65,7 +64,6 @@ GK_API gk_status gk_effusion_ratio(gk_molar_mass a, gk_molar_mass b, gk_real *ra
  * Equal amounts effusing under the same conditions take times proportional to sqrt(M).
  * @param reference Molar mass of the reference gas, > 0.
  * @param time_ratio_unknown_over_reference t_unknown / t_ref, finite and > 0.
- * @param[out] out Molar mass of the unknown gas.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_effusion_molar_mass(gk_molar_mass reference,
@@ -74,10 +72,7 @@ GK_API gk_status gk_effusion_molar_mass(gk_molar_mass reference,
 
 /**
  * @brief Mean free path of a hard-sphere gas: lambda = k T / (sqrt(2) pi d^2 p).
- * Uses k = GK_BOLTZMANN. Valid while the gas is dilute (lambda much larger than d).
- * @param p Absolute pressure, > 0.
- * @param t Temperature, > 0 K.
- * @param collision_diameter_m Molecular collision diameter d in metres, > 0 (a few 1e-10 m).
+ * @param collision_diameter_m Molecular collision diameter d in metres, > 0.
  * @param[out] out_m Mean free path in metres.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
