@@ -827,7 +827,7 @@ static const field dew_fields[] = {
     {"p_water", "water partial pressure", F_REAL, GK_UNIT_PA, GK_UNIT_KPA, ""},
     {"x_water", "water mole fraction", F_REAL, U_NONE, U_NONE, ""},
     {"p_dry", "dry-gas partial pressure", F_REAL, GK_UNIT_PA, GK_UNIT_KPA, ""},
-    {"dew_point", "dew point (frost point below 0 degC)", F_REAL, GK_UNIT_K, GK_UNIT_DEGC, ""},
+    {"dew_point", "dew (or frost) point", F_REAL, GK_UNIT_K, GK_UNIT_DEGC, ""},
 };
 
 static gk_status word_dew(const settings *set, args *a, record *r, detail *why) {
