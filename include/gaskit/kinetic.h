@@ -19,7 +19,15 @@ extern "C" {
 /** @defgroup kinetic Kinetic theory
  *  Every function here returns GK_ERR_ARGUMENT for a NULL output, GK_ERR_DOMAIN for an input
  *  that is not finite or not > 0 (unless stated otherwise), and GK_ERR_RANGE where the result
- *  would overflow; outputs are written only on GK_OK.
+ *  would overflow or fall below the smallest normal number; outputs are written only on GK_OK.
+ *  Speeds in m/s, T in K, M in kg/mol, p in Pa. Square roots are taken factor by factor, so
+ *  no intermediate overflows while the result is representable.
+ *
+ *  The heat-capacity ratio of gk_speed_of_sound_ideal() must lie in (1, 5/3]: 5/3 for a
+ *  monatomic gas (pass 5.0/3.0, not a rounded 1.667, which is outside the domain), 1.4 for air
+ *  and diatomic gases near room temperature. gk_mean_free_path() uses k = GK_BOLTZMANN;
+ *  collision diameters are a few 1e-10 m; it holds while the gas is dilute (mean free path
+ *  much larger than the diameter).
  *  @{ */
 
 /** @brief Root-mean-square speed sqrt(3 R T / M).
