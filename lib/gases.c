@@ -72,249 +72,249 @@ static const gk__gas_row gk__gases[] = {
     /* air */
     GK__ROW("air", "air",
             28.9644e-3,                 /* M: 28.9644 g/mol [ISO2533] */
-            132.5, 3.77e6, 0.035,       /* Tc, Pc, omega: pseudo-critical, [AIRPC] */
+            132.5, 3.77e6, 0.035,       /* Tc, Pc, omega: pseudo-critical [AIRPC, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.4,                        /* gamma: 1.40 [ISO2533] */
-            3.711e-10,                  /* sigma, m: [LJ] */
+            3.711e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("dry air")),
     /* nitrogen */
     GK__ROW("nitrogen", "N2",
             28.014e-3,                  /* M: 2 x 14.007 g/mol [AW] */
-            126.2, 3.398e6, 0.037,      /* Tc, Pc, omega: [PPO5] */
+            126.2, 3.398e6, 0.037,      /* Tc, Pc, omega: [PPO5, from memory] */
             0.137, 3.87e-05,            /* a, b: 1.370 bar L2/mol2, 0.0387 L/mol [CRC-vdW] */
-            1.3996,                     /* gamma: cp 29.124 J/(mol K) [JANAF], cp/(cp - R) */
-            3.798e-10,                  /* sigma, m: [LJ] */
+            1.3996,                     /* gamma: cp 29.124 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            3.798e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* oxygen */
     GK__ROW("oxygen", "O2",
             31.998e-3,                  /* M: 2 x 15.999 g/mol [AW] */
-            154.58, 5.043e6, 0.022,     /* Tc, Pc, omega: [PPO5] */
+            154.58, 5.043e6, 0.022,     /* Tc, Pc, omega: [PPO5, from memory] */
             0.1382, 3.186e-05,          /* a, b: 1.382 bar L2/mol2, 0.03186 L/mol [CRC-vdW] */
-            1.3947,                     /* gamma: cp 29.378 J/(mol K) [JANAF], cp/(cp - R) */
-            3.467e-10,                  /* sigma, m: [LJ] */
+            1.3947,                     /* gamma: cp 29.378 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            3.467e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* argon */
     GK__ROW("argon", "Ar",
             39.95e-3,                   /* M: 39.95 g/mol [AW] */
-            150.86, 4.898e6, -0.002,    /* Tc, Pc, omega: [PPO5] */
+            150.86, 4.898e6, -0.002,    /* Tc, Pc, omega: [PPO5, from memory] */
             0.1355, 3.201e-05,          /* a, b: 1.355 bar L2/mol2, 0.03201 L/mol [CRC-vdW] */
             1.6666666666666667,         /* gamma: 5/3, monatomic ideal gas (kinetic theory) */
-            3.542e-10,                  /* sigma, m: [LJ] */
+            3.542e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* helium */
     GK__ROW("helium", "He",
             4.002602e-3,                /* M: 4.002602 g/mol [AW] */
-            5.19, 0.227e6, -0.39,       /* Tc, Pc, omega: [PPO5] */
+            5.19, 0.227e6, -0.39,       /* Tc, Pc, omega: [PPO5, from memory] */
             0.00346, 2.38e-05,          /* a, b: 0.0346 bar L2/mol2, 0.0238 L/mol [CRC-vdW] */
             1.6666666666666667,         /* gamma: 5/3, monatomic ideal gas (kinetic theory) */
-            2.551e-10,                  /* sigma, m: [LJ] */
+            2.551e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("helium-4")),
     /* neon */
     GK__ROW("neon", "Ne",
             20.1797e-3,                 /* M: 20.1797 g/mol [AW] */
-            44.4, 2.76e6, -0.029,       /* Tc, Pc, omega: [PPO5] */
+            44.4, 2.76e6, -0.029,       /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.6666666666666667,         /* gamma: 5/3, monatomic ideal gas (kinetic theory) */
-            2.82e-10,                   /* sigma, m: [LJ] */
+            2.82e-10,                   /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* krypton */
     GK__ROW("krypton", "Kr",
             83.798e-3,                  /* M: 83.798 g/mol [AW] */
-            209.4, 5.502e6, 0.0,        /* Tc, Pc, omega: [PPO5] */
+            209.4, 5.502e6, 0.0,        /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.6666666666666667,         /* gamma: 5/3, monatomic ideal gas (kinetic theory) */
-            3.655e-10,                  /* sigma, m: [LJ] */
+            3.655e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* xenon */
     GK__ROW("xenon", "Xe",
             131.293e-3,                 /* M: 131.293 g/mol [AW] */
-            289.74, 5.84e6, 0.0,        /* Tc, Pc, omega: [PPO5] */
+            289.74, 5.84e6, 0.0,        /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.6666666666666667,         /* gamma: 5/3, monatomic ideal gas (kinetic theory) */
-            4.047e-10,                  /* sigma, m: [LJ] */
+            4.047e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* hydrogen */
     GK__ROW("hydrogen", "H2",
             2.016e-3,                   /* M: 2 x 1.008 g/mol [AW] */
-            33.19, 1.313e6, -0.216,     /* Tc, Pc, omega: [PPO5] */
+            33.19, 1.313e6, -0.216,     /* Tc, Pc, omega: [PPO5, from memory] */
             0.02452, 2.65e-05,          /* a, b: 0.2452 bar L2/mol2, 0.0265 L/mol [CRC-vdW-new] */
-            1.4052,                     /* gamma: cp 28.836 J/(mol K) [JANAF], cp/(cp - R) */
-            2.827e-10,                  /* sigma, m: [LJ] */
+            1.4052,                     /* gamma: cp 28.836 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            2.827e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* carbon dioxide */
     GK__ROW("carbon dioxide", "CO2",
             44.009e-3,                  /* M: 12.011 + 2 x 15.999 g/mol [AW] */
-            304.12, 7.374e6, 0.225,     /* Tc, Pc, omega: [PPO5] */
+            304.12, 7.374e6, 0.225,     /* Tc, Pc, omega: [PPO5, from memory] */
             0.3658, 4.29e-05,           /* a, b: 3.658 bar L2/mol2, 0.0429 L/mol [CRC-vdW-new] */
-            1.2885,                     /* gamma: cp 37.135 J/(mol K) [JANAF], cp/(cp - R) */
-            3.941e-10,                  /* sigma, m: [LJ] */
+            1.2885,                     /* gamma: cp 37.135 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            3.941e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* carbon monoxide */
     GK__ROW("carbon monoxide", "CO",
             28.01e-3,                   /* M: 12.011 + 15.999 g/mol [AW] */
-            132.85, 3.494e6, 0.045,     /* Tc, Pc, omega: [PPO5] */
+            132.85, 3.494e6, 0.045,     /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.3992,                     /* gamma: cp 29.142 J/(mol K) [JANAF], cp/(cp - R) */
-            3.69e-10,                   /* sigma, m: [LJ] */
+            1.3992,                     /* gamma: cp 29.142 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            3.69e-10,                   /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* methane */
     GK__ROW("methane", "CH4",
             16.043e-3,                  /* M: 12.011 + 4 x 1.008 g/mol [AW] */
-            190.56, 4.599e6, 0.011,     /* Tc, Pc, omega: [PPO5] */
+            190.56, 4.599e6, 0.011,     /* Tc, Pc, omega: [PPO5, from memory] */
             0.2303, 4.31e-05,           /* a, b: 2.303 bar L2/mol2, 0.04310 L/mol [CRC-vdW] */
-            1.3037,                     /* gamma: cp 35.69 J/(mol K) [JANAF], cp/(cp - R) */
-            3.758e-10,                  /* sigma, m: [LJ] */
+            1.3037,                     /* gamma: cp 35.69 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            3.758e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* ethane */
     GK__ROW("ethane", "C2H6",
             30.07e-3,                   /* M: 2 x 12.011 + 6 x 1.008 g/mol [AW] */
-            305.32, 4.872e6, 0.099,     /* Tc, Pc, omega: [PPO5] */
+            305.32, 4.872e6, 0.099,     /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.1882,                     /* gamma: cp 52.49 J/(mol K) [TRC], cp/(cp - R) */
-            4.443e-10,                  /* sigma, m: [LJ] */
+            1.1882,                     /* gamma: cp 52.49 J/(mol K) [TRC, from memory], cp/(cp - R) */
+            4.443e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* propane */
     GK__ROW("propane", "C3H8",
             44.097e-3,                  /* M: 3 x 12.011 + 8 x 1.008 g/mol [AW] */
-            369.83, 4.248e6, 0.152,     /* Tc, Pc, omega: [PPO5] */
+            369.83, 4.248e6, 0.152,     /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.1274,                     /* gamma: cp 73.6 J/(mol K) [TRC], cp/(cp - R) */
-            5.118e-10,                  /* sigma, m: [LJ] */
+            1.1274,                     /* gamma: cp 73.6 J/(mol K) [TRC, from memory], cp/(cp - R) */
+            5.118e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* n-butane */
     GK__ROW("n-butane", "n-C4H10",
             58.124e-3,                  /* M: 4 x 12.011 + 10 x 1.008 g/mol [AW] */
-            425.12, 3.796e6, 0.2,       /* Tc, Pc, omega: [PPO5] */
+            425.12, 3.796e6, 0.2,       /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.0922,                     /* gamma: cp 98.5 J/(mol K) [TRC], cp/(cp - R) */
-            4.687e-10,                  /* sigma, m: [LJ] */
+            1.0922,                     /* gamma: cp 98.5 J/(mol K) [TRC, from memory], cp/(cp - R) */
+            4.687e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("butane")),
     /* isobutane */
     GK__ROW("isobutane", "i-C4H10",
             58.124e-3,                  /* M: 4 x 12.011 + 10 x 1.008 g/mol [AW] */
-            407.85, 3.64e6, 0.186,      /* Tc, Pc, omega: [PPO5] */
+            407.85, 3.64e6, 0.186,      /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.094,                      /* gamma: cp 96.8 J/(mol K) [TRC], cp/(cp - R) */
-            5.278e-10,                  /* sigma, m: [LJ] */
+            1.094,                      /* gamma: cp 96.8 J/(mol K) [TRC, from memory], cp/(cp - R) */
+            5.278e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("2-methylpropane", "i-butane")),
     /* ethylene */
     GK__ROW("ethylene", "C2H4",
             28.054e-3,                  /* M: 2 x 12.011 + 4 x 1.008 g/mol [AW] */
-            282.34, 5.041e6, 0.087,     /* Tc, Pc, omega: [PPO5] */
+            282.34, 5.041e6, 0.087,     /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.2404,                     /* gamma: cp 42.9 J/(mol K) [JANAF], cp/(cp - R) */
-            4.163e-10,                  /* sigma, m: [LJ] */
+            1.2404,                     /* gamma: cp 42.9 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            4.163e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("ethene")),
     /* propylene */
     GK__ROW("propylene", "C3H6",
             42.081e-3,                  /* M: 3 x 12.011 + 6 x 1.008 g/mol [AW] */
-            364.9, 4.6e6, 0.142,        /* Tc, Pc, omega: [PPO5] */
+            364.9, 4.6e6, 0.142,        /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.1485,                     /* gamma: cp 64.32 J/(mol K) [TRC], cp/(cp - R) */
-            4.678e-10,                  /* sigma, m: [LJ] */
+            1.1485,                     /* gamma: cp 64.32 J/(mol K) [TRC, from memory], cp/(cp - R) */
+            4.678e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("propene")),
     /* acetylene */
     GK__ROW("acetylene", "C2H2",
             26.038e-3,                  /* M: 2 x 12.011 + 2 x 1.008 g/mol [AW] */
-            308.3, 6.114e6, 0.189,      /* Tc, Pc, omega: [PPO5] */
+            308.3, 6.114e6, 0.189,      /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.2327,                     /* gamma: cp 44.04 J/(mol K) [JANAF], cp/(cp - R) */
-            4.033e-10,                  /* sigma, m: [LJ] */
+            1.2327,                     /* gamma: cp 44.04 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            4.033e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("ethyne")),
     /* ammonia */
     GK__ROW("ammonia", "NH3",
             17.031e-3,                  /* M: 14.007 + 3 x 1.008 g/mol [AW] */
-            405.4, 11.353e6, 0.257,     /* Tc, Pc, omega: [PPO5] */
+            405.4, 11.353e6, 0.257,     /* Tc, Pc, omega: [PPO5, from memory] */
             0.4225, 3.713e-05,          /* a, b: 4.225 bar L2/mol2, 0.03713 L/mol [CRC-vdW] */
-            1.3044,                     /* gamma: cp 35.63 J/(mol K) [JANAF], cp/(cp - R) */
-            2.9e-10,                    /* sigma, m: [LJ] */
+            1.3044,                     /* gamma: cp 35.63 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            2.9e-10,                    /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* water */
     GK__ROW("water", "H2O",
             18.015e-3,                  /* M: 2 x 1.008 + 15.999 g/mol [AW] */
-            647.096, 22.064e6, 0.344,   /* Tc, Pc, omega: Tc, Pc [IAPWS]; omega [PPO5] */
+            647.096, 22.064e6, 0.344,   /* Tc, Pc, omega: Tc, Pc [IAPWS]; omega [PPO5, from memory] */
             0.5537, 3.049e-05,          /* a, b: 5.537 bar L2/mol2, 0.03049 L/mol [CRC-vdW] */
-            1.329,                      /* gamma: cp 33.588 J/(mol K) [JANAF], cp/(cp - R) */
-            2.641e-10,                  /* sigma, m: [LJ] */
+            1.329,                      /* gamma: cp 33.588 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            2.641e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("water vapour", "water vapor")),
     /* hydrogen sulfide */
     GK__ROW("hydrogen sulfide", "H2S",
             34.076e-3,                  /* M: 2 x 1.008 + 32.06 g/mol [AW] */
-            373.4, 8.963e6, 0.09,       /* Tc, Pc, omega: [PPO5] */
+            373.4, 8.963e6, 0.09,       /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.3213,                     /* gamma: cp 34.192 J/(mol K) [JANAF], cp/(cp - R) */
-            3.623e-10,                  /* sigma, m: [LJ] */
+            1.3213,                     /* gamma: cp 34.192 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            3.623e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("hydrogen sulphide")),
     /* sulfur dioxide */
     GK__ROW("sulfur dioxide", "SO2",
             64.058e-3,                  /* M: 32.06 + 2 x 15.999 g/mol [AW] */
-            430.8, 7.884e6, 0.245,      /* Tc, Pc, omega: [PPO5] */
+            430.8, 7.884e6, 0.245,      /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.2634,                     /* gamma: cp 39.878 J/(mol K) [JANAF], cp/(cp - R) */
-            4.112e-10,                  /* sigma, m: [LJ] */
+            1.2634,                     /* gamma: cp 39.878 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            4.112e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("sulphur dioxide")),
     /* nitrous oxide */
     GK__ROW("nitrous oxide", "N2O",
             44.013e-3,                  /* M: 2 x 14.007 + 15.999 g/mol [AW] */
-            309.6, 7.255e6, 0.165,      /* Tc, Pc, omega: [PPO5] */
+            309.6, 7.255e6, 0.165,      /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.2744,                     /* gamma: cp 38.617 J/(mol K) [JANAF], cp/(cp - R) */
-            3.828e-10,                  /* sigma, m: [LJ] */
+            1.2744,                     /* gamma: cp 38.617 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            3.828e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("dinitrogen monoxide")),
     /* nitric oxide */
     GK__ROW("nitric oxide", "NO",
             30.006e-3,                  /* M: 14.007 + 15.999 g/mol [AW] */
-            180.15, 6.48e6, 0.583,      /* Tc, Pc, omega: [PPO5] */
+            180.15, 6.48e6, 0.583,      /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.3862,                     /* gamma: cp 29.845 J/(mol K) [JANAF], cp/(cp - R) */
-            3.492e-10,                  /* sigma, m: [LJ] */
+            1.3862,                     /* gamma: cp 29.845 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            3.492e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("nitrogen monoxide")),
     /* chlorine */
     GK__ROW("chlorine", "Cl2",
             70.9e-3,                    /* M: 2 x 35.45 g/mol [AW] */
-            416.9, 7.991e6, 0.069,      /* Tc, Pc, omega: [PPO5] */
+            416.9, 7.991e6, 0.069,      /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.3243,                     /* gamma: cp 33.949 J/(mol K) [JANAF], cp/(cp - R) */
-            4.217e-10,                  /* sigma, m: [LJ] */
+            1.3243,                     /* gamma: cp 33.949 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            4.217e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* hydrogen chloride */
     GK__ROW("hydrogen chloride", "HCl",
             36.458e-3,                  /* M: 1.008 + 35.45 g/mol [AW] */
-            324.69, 8.31e6, 0.132,      /* Tc, Pc, omega: [PPO5] */
+            324.69, 8.31e6, 0.132,      /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.3993,                     /* gamma: cp 29.136 J/(mol K) [JANAF], cp/(cp - R) */
-            3.339e-10,                  /* sigma, m: [LJ] */
+            1.3993,                     /* gamma: cp 29.136 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            3.339e-10,                  /* sigma, m: [LJ, from memory] */
             GK__NO_ALIAS),
     /* sulfur hexafluoride */
     GK__ROW("sulfur hexafluoride", "SF6",
             146.050418972e-3,           /* M: 32.06 + 6 x 18.998403162 g/mol [AW] */
-            318.69, 3.76e6, 0.21,       /* Tc, Pc, omega: [PPO5] */
+            318.69, 3.76e6, 0.21,       /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.0938,                     /* gamma: cp 97.0 J/(mol K) [JANAF], cp/(cp - R) */
-            5.128e-10,                  /* sigma, m: [LJ] */
+            1.0938,                     /* gamma: cp 97.0 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            5.128e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("sulphur hexafluoride")),
     /* nitrogen trifluoride */
     GK__ROW("nitrogen trifluoride", "NF3",
             71.002209486e-3,            /* M: 14.007 + 3 x 18.998403162 g/mol [AW] */
-            234.0, 4.46e6, 0.12,        /* Tc, Pc, omega: [PPO5] */
+            234.0, 4.46e6, 0.12,        /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.1844,                     /* gamma: cp 53.4 J/(mol K) [JANAF], cp/(cp - R) */
+            1.1844,                     /* gamma: cp 53.4 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             0.0,                        /* sigma: not known */
             GK__NO_ALIAS),
     /* carbon tetrafluoride */
     GK__ROW("carbon tetrafluoride", "CF4",
             88.004612648e-3,            /* M: 12.011 + 4 x 18.998403162 g/mol [AW] */
-            227.51, 3.745e6, 0.179,     /* Tc, Pc, omega: [PPO5] */
+            227.51, 3.745e6, 0.179,     /* Tc, Pc, omega: [PPO5, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.1575,                     /* gamma: cp 61.09 J/(mol K) [JANAF], cp/(cp - R) */
-            4.662e-10,                  /* sigma, m: [LJ] */
+            1.1575,                     /* gamma: cp 61.09 J/(mol K) [JANAF, from memory], cp/(cp - R) */
+            4.662e-10,                  /* sigma, m: [LJ, from memory] */
             GK__ALIAS("tetrafluoromethane")),
     /* 1,1,1,2-tetrafluoroethane */
     GK__ROW("1,1,1,2-tetrafluoroethane", "CH2FCF3",
             102.031612648e-3,           /* M: 2x12.011 + 2x1.008 + 4x18.998403162 [AW] */
-            374.21, 4.0593e6, 0.3268,   /* Tc, Pc, omega: Tc, Pc [TRB94]; omega [REFPROP] */
+            374.21, 4.0593e6, 0.3268,   /* Tc, Pc, omega: Tc, Pc [TRB94, from memory]; omega [REFPROP, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
-            1.1068,                     /* gamma: cp 86.2 J/(mol K) [TRB94], cp/(cp - R) */
+            1.1068,                     /* gamma: cp 86.2 J/(mol K) [TRB94, from memory], cp/(cp - R) */
             0.0,                        /* sigma: not known */
             GK__ALIAS("r-134a", "r134a", "hfc-134a")),
 };

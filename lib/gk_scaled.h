@@ -45,15 +45,53 @@ static inline gk_status gk_check_normal(gk_real x) {
 }
 
 /*
- * out = prod_i num[i] / den[i] for i < count (count <= GK_SCALED_MAX); every factor must be
- * finite and > 0 (the caller has checked). GK_ERR_RANGE when the result overflows or falls
+ * Fast-path bound: with every factor in [2^-B, 2^B], each ratio lies in [2^-2B, 2^2B] and every
+ * partial product of count ratios in [2^-2B count, 2^2B count], inside the normal range
+ * (2^-1022 .. 2^1024 for binary64, 2^-126 .. 2^128 for binary32) when 2 B count <= 1021
+ * (binary64) or <= 125 (binary32). Exact powers of two (C99 hex literals).
+ */
+static inline gk_real gk_scaled_bound(int count) {
+#if GK_REAL_IS_FLOAT
+    switch (count) {
+    case 1:  return GK_LIT(0x1p62);
+    case 2:  return GK_LIT(0x1p31);
+    case 3:  return GK_LIT(0x1p20);
+    default: return GK_LIT(0x1p15);
+    }
+#else
+    switch (count) {
+    case 1:  return GK_LIT(0x1p510);
+    case 2:  return GK_LIT(0x1p255);
+    case 3:  return GK_LIT(0x1p170);
+    default: return GK_LIT(0x1p127);
+    }
+#endif
+}
+
+/*
+ * out = prod_i num[i] / den[i] for i < count (1 <= count <= GK_SCALED_MAX); every factor must
+ * be finite and > 0 (the caller has checked). GK_ERR_RANGE when the result overflows or falls
  * below the smallest normal number; *out written only on GK_OK.
+ *
+ * Fast path: when every factor is within the bound above, the plain product of ratios cannot
+ * over/underflow in any step, and since scaling by a power of two commutes with rounding in
+ * the normal range it gives bit for bit the result of the frexp/ldexp path.
  */
 static inline gk_status gk_scaled_product(const gk_real *num, const gk_real *den, int count,
                                           gk_real *out) {
+    const gk_real hi = gk_scaled_bound(count);
+    const gk_real lo = GK_LIT(1.0) / hi; /* exact: a power of two */
     gk_real mant = GK_LIT(1.0);
     int expo = 0;
-    int i;
+    int i, in_range = 1;
+    for (i = 0; i < count; ++i) {
+        if (num[i] > hi || num[i] < lo || den[i] > hi || den[i] < lo) in_range = 0;
+    }
+    if (in_range) {
+        for (i = 0; i < count; ++i) mant *= num[i] / den[i];
+        *out = mant;
+        return GK_OK;
+    }
     for (i = 0; i < count; ++i) {
         int en = 0, ed = 0;
         gk_real fn = gk_frexp(num[i], &en);

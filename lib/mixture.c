@@ -84,7 +84,9 @@ static size_t gk__skip_spaces(const char *text, size_t pos, size_t len) {
  *   component = name '=' value
  *   name      = everything up to the next '=', spaces trimmed at both ends; must not be empty
  *               and must not begin or end with ',' (so names with commas inside, such as
- *               "1,1,1,2-tetrafluoroethane", work, while ",," is still an error)
+ *               "1,1,1,2-tetrafluoroethane", work, while ",," is still an error). A name with
+ *               a comma inside that names no gas is GK_ERR_PARSE, not GK_ERR_NOT_FOUND: the
+ *               comma was most likely a separator ("N2=0,5, O2=0,5" with decimal commas).
  *   value     = number [ '%' | "ppm" ] | "balance"      (spaces allowed around each token;
  *               "ppm" and "balance" in any ASCII case)
  * A component ends at ',' or at the end of the text; anything else after the value is an error.
@@ -95,8 +97,6 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
     size_t pos = 0;
     size_t i;
     size_t balance_index = GK_MIXTURE_MAX;   /* none yet */
-    gk_real given[GK_MIXTURE_MAX];
-    size_t given_count = 0;
     gk_real sum;
 
     if (text == NULL || out == NULL) return GK_ERR_ARGUMENT;
@@ -108,7 +108,6 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
     for (i = 0; i < GK_MIXTURE_MAX; ++i) {
         mix.gas[i] = NULL;
         mix.mole_fraction[i] = GK_LIT(0.0);
-        given[i] = GK_LIT(0.0);
     }
 
     for (;;) {
@@ -158,6 +157,13 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
         for (i = 0; i < name_end - name_begin; ++i) name[i] = text[name_begin + i];
         name[name_end - name_begin] = '\0';
         st = gk_gas_find(name, &gas);
+        if (st == GK_ERR_NOT_FOUND) {
+            /* "N2=0,5, O2=0,5": a comma inside a name that names no gas was most likely
+               meant as a separator, so the text is malformed rather than the gas unknown. */
+            for (i = 0; name[i] != '\0'; ++i) {
+                if (name[i] == ',') return GK_ERR_PARSE;
+            }
+        }
         if (st != GK_OK) return st;
 
         if (mix.count == GK_MIXTURE_MAX) return GK_ERR_COMPOSITION;
@@ -175,7 +181,6 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
             if (number.negative && number.mantissa != 0u) return GK_ERR_COMPOSITION;
             if (x > GK_LIT(1.0)) return GK_ERR_COMPOSITION;
             mix.mole_fraction[mix.count] = x;
-            given[given_count++] = x;
         }
         mix.gas[mix.count] = gas;
         mix.count += 1u;
@@ -184,7 +189,8 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
         pos = v + 1u;                                        /* past ',' */
     }
 
-    sum = gk__compensated_sum(given, given_count);
+    /* the balance slot still holds 0, so this is the sum of the given fractions */
+    sum = gk__compensated_sum(mix.mole_fraction, mix.count);
     if (balance_index != GK_MIXTURE_MAX) {
         gk_real rest = GK_LIT(1.0) - sum;
         if (rest < -GK__MIXTURE_SUM_TOL) return GK_ERR_COMPOSITION;  /* negative balance */

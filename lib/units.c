@@ -178,15 +178,34 @@ static const gk_unit_row *gk_unit_row_of(gk_unit unit) {
     return &gk_units[u];
 }
 
+/* Fast-path bound of gk_scale(): the table ratios num / den lie within [2^-40, 2^40] (they span
+ * 1e-6 / 60 .. 1e6), so for |x| within [2^-B, 2^B] the product stays inside the normal range
+ * (B = 900 for binary64, B = 60 for binary32: exact powers of two). */
+#if GK_REAL_IS_FLOAT
+#  define GK_SCALE_HI GK_LIT(0x1p60)
+#  define GK_SCALE_LO GK_LIT(0x1p-60)
+#else
+#  define GK_SCALE_HI GK_LIT(0x1p900)
+#  define GK_SCALE_LO GK_LIT(0x1p-900)
+#endif
+
 /* x * num / den without intermediate over/underflow (signed x, num and den > 0).
  * GK_ERR_RANGE when the result overflows, or when a non-zero x gives a result below the
- * smallest normal number. */
+ * smallest normal number. In the fast path x * (num / den) is computed directly; since scaling
+ * by a power of two commutes with rounding in the normal range, it gives bit for bit the
+ * result of the frexp/ldexp path. */
 static gk_status gk_scale(gk_real x, gk_real num, gk_real den, gk_real *out) {
+    const gk_real ax = gk_fabs(x);
     int ex = 0, en = 0, ed = 0;
-    gk_real fx = gk_frexp(x, &ex);
-    gk_real fn = gk_frexp(num, &en);
-    gk_real fd = gk_frexp(den, &ed);
-    gk_real r = gk_ldexp(fx * (fn / fd), ex + en - ed);
+    gk_real fx, fn, fd, r;
+    if ((ax >= GK_SCALE_LO && ax <= GK_SCALE_HI) || !(ax > GK_LIT(0.0))) {
+        *out = x * (num / den);
+        return GK_OK;
+    }
+    fx = gk_frexp(x, &ex);
+    fn = gk_frexp(num, &en);
+    fd = gk_frexp(den, &ed);
+    r = gk_ldexp(fx * (fn / fd), ex + en - ed);
     if (gk_check_normal(r) != GK_OK) return GK_ERR_RANGE;
     if (gk_fabs(x) > GK_LIT(0.0) && !(gk_fabs(r) > GK_LIT(0.0))) return GK_ERR_RANGE;
     *out = r;
