@@ -22,6 +22,9 @@
 /* Half the unit roundoff is too strict for the stopping test; one epsilon is the rounding level. */
 #define CUBIC_EPS GK_REAL_EPS
 
+/* 1/3 rounded (one rounding more than a division; z1, z2 only isolate the roots). */
+#define CUBIC_THIRD (GK_LIT(1.0) / GK_LIT(3.0))
+
 typedef struct cubic_poly { gk_real c2, c1, c0; } cubic_poly;
 
 /* f(z) by Horner's rule: rounding error below 3u sum |c_i||z|^i (Higham, Accuracy and Stability
@@ -38,35 +41,38 @@ static gk_real cubic_df(const cubic_poly *p, gk_real z) {
 static int cubic_nonzero(gk_real x) { return (x < GK_LIT(0.0) || x > GK_LIT(0.0)) ? 1 : 0; }
 
 /*
- * Newton's iteration from x inside [lo, hi], an interval on which f is monotonic and holds the
- * root (lo/hi may be infinite). Iterates leaving the interval are pulled back to its midpoint
- * with the current point. Stops when the predicted next correction |f''| dx^2 / (2|f'|) is
- * below one epsilon of x, when |f| stops decreasing (rounding level), or after
- * GK_CUBIC_ITER_MAX steps. The first step may increase |f| (start on the far side).
+ * Halley's iteration (cubically convergent: x - f f' / (f'^2 - f f''/2)) from x inside (lo, hi),
+ * an interval on which f is monotonic and holds the root. Iterates leaving the interval are
+ * pulled back halfway towards its end. Stops when the predicted remaining error C |dx|^3,
+ * C = (f''/(2 f'))^2 - f'''/(6 f'), is below one epsilon of x; when |f| stops decreasing
+ * (rounding level: the previous point is kept); or after GK_CUBIC_ITER_MAX steps. Near a multiple
+ * root (f' -> 0) the prediction is large and the |f| test ends the iteration.
  */
 static gk_real cubic_newton(const cubic_poly *p, gk_real x, gk_real lo, gk_real hi) {
     gk_real fx = cubic_f(p, x);
     int i;
     for (i = 0; i < GK_CUBIC_ITER_MAX; ++i) {
-        gk_real d, dx, xn, fn, d2;
+        gk_real d1, d2, den, dx, xn, fn;
         if (!cubic_nonzero(fx)) break;
-        d = cubic_df(p, x);
-        if (!cubic_nonzero(d)) break;
-        dx = fx / d;
+        d1 = cubic_df(p, x);
+        d2 = GK_LIT(6.0) * x + GK_LIT(2.0) * p->c2;
+        den = d1 * d1 - GK_LIT(0.5) * fx * d2;
+        if (!cubic_nonzero(den)) break;
+        dx = fx * d1 / den;
         xn = x - dx;
         if (!(xn > lo && xn < hi)) {
             /* guarded: stay inside the isolating interval */
             xn = (xn <= lo) ? GK_LIT(0.5) * (x + lo) : GK_LIT(0.5) * (x + hi);
             if (!(xn > lo && xn < hi)) break;
-            dx = x - xn;
+        } else if (gk_fabs(dx) * dx * dx * (d2 * d2 + GK_LIT(4.0) * gk_fabs(d1)) <=
+                   GK_LIT(4.0) * CUBIC_EPS * d1 * d1 * gk_fabs(xn)) {
+            x = xn; /* the next correction would be below one rounding unit */
+            break;
         }
         fn = cubic_f(p, xn);
         if (i > 0 && !(gk_fabs(fn) < gk_fabs(fx))) break; /* rounding level reached at x */
-        d2 = GK_LIT(6.0) * xn + GK_LIT(2.0) * p->c2;
         x = xn;
         fx = fn;
-        /* quadratic convergence: the next correction is about f'' dx^2 / (2 f') */
-        if (gk_fabs(d2) * dx * dx <= CUBIC_EPS * gk_fabs(d) * gk_fabs(xn)) break;
     }
     return x;
 }
@@ -85,7 +91,7 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
     gk_real r[3];
     gk_real big = CUBIC_BIG;
     gk_real a2 = gk_fabs(c2), a1 = gk_fabs(c1), a0 = gk_fabs(c0);
-    gk_real dd, sd, z1, z2, f1, f2, t;
+    gk_real dd, sd, z1, z2, f1, f2, t, hstep = hi;
     int n = 0, e = 0, i, out;
     int have_hi = (hi > lo) ? 1 : 0;
 
@@ -107,59 +113,86 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
     p.c1 = c1;
     p.c0 = c0;
 
+    /* a first step from the caller's upper bound, independent of the isolation below (so a
+       pipelined processor overlaps the two); used only where it lies above z2. Householder's
+       order-4 step x - f (f'^2 - f f''/2) / (f'^3 - f f' f'' + f^2 f'''/6), with f''' = 6. */
+    if (have_hi) {
+        gk_real fh = cubic_f(&p, hi), dh = cubic_df(&p, hi);
+        gk_real d2h = GK_LIT(6.0) * hi + GK_LIT(2.0) * c2;
+        gk_real num = fh * (dh * dh - GK_LIT(0.5) * fh * d2h);
+        gk_real den = dh * (dh * dh - fh * d2h) + fh * fh;
+        hstep = (fh > GK_LIT(0.0) && dh > GK_LIT(0.0) && den > GK_LIT(0.0)) ? hi - num / den : hi;
+        if (!(hstep <= hi)) hstep = hi;
+    }
+
     /* 2. critical points: 3 z^2 + 2 c2 z + c1 = 0, z = (-c2 +- sqrt(D)) / 3, D = c2^2 - 3 c1 */
     dd = c2 * c2 - GK_LIT(3.0) * c1;
     if (!gk_finite(dd)) return -1;
     if (dd > GK_LIT(0.0)) {
         sd = gk_sqrt(dd);
         /* cancellation-free: the root of larger magnitude first, the other from the product */
-        t = -(c2 + gk_copysign(sd, c2)); /* = 3 * (root of larger magnitude) */
-        if (cubic_nonzero(t)) {
-            gk_real za = t / GK_LIT(3.0), zb = c1 / t;
-            z1 = za < zb ? za : zb;
-            z2 = za < zb ? zb : za;
-        } else { /* c2 = 0 and D = 0 cannot happen with dd > 0; kept for safety */
-            z1 = -sd / GK_LIT(3.0);
-            z2 = sd / GK_LIT(3.0);
-        }
-        f1 = cubic_f(&p, z1); /* local maximum */
-        f2 = cubic_f(&p, z2); /* local minimum */
-        if (f1 >= GK_LIT(0.0) && f2 <= GK_LIT(0.0)) {
-            /* 3. three real roots r0 <= z1 <= r1 <= z2 <= r2 */
-            gk_real x0;
-            if (cubic_nonzero(f2)) {
-                x0 = z2 + gk_sqrt(-f2 / sd); /* above the largest root */
-                if (have_hi && hi > z2 && hi < x0) x0 = hi;
-                r[2] = cubic_newton(&p, x0, z2, x0 + (x0 - z2) + GK_LIT(1.0));
-            } else {
-                r[2] = z2;
-            }
-            if (cubic_nonzero(f1)) {
-                x0 = z1 - gk_sqrt(f1 / sd); /* below the smallest root */
-                r[0] = cubic_newton(&p, x0, x0 - (z1 - x0) - GK_LIT(1.0), z1);
-            } else {
-                r[0] = z1;
-            }
-            if (!cubic_nonzero(f1)) {
-                r[1] = z1;
-            } else if (!cubic_nonzero(f2)) {
-                r[1] = z2;
-            } else {
-                /* 4. middle root from the product of the roots, then polished inside [z1, z2] */
-                gk_real prod = r[0] * r[2];
-                gk_real xm = cubic_nonzero(prod) ? -c0 / prod : -c2 / GK_LIT(3.0);
-                if (!(xm > z1 && xm < z2)) xm = GK_LIT(0.5) * (z1 + z2);
-                r[1] = cubic_newton(&p, xm, z1, z2);
-            }
-            n = 3;
-        } else if (f1 < GK_LIT(0.0)) {
-            /* one real root, above z2 */
-            gk_real x0 = z2 + gk_sqrt(-f2 / sd);
-            if (have_hi && hi > z2 && hi < x0) x0 = hi;
-            r[0] = cubic_newton(&p, x0, z2, x0 + (x0 - z2) + GK_LIT(1.0));
-            n = 1;
+        t = -(c2 + gk_copysign(sd, c2)); /* = 3 * (root of larger magnitude), |t| >= sd > 0 */
+        if (t > GK_LIT(0.0)) {
+            z2 = t * CUBIC_THIRD;
+            z1 = c1 / t;
         } else {
-            /* one real root, below z1 */
+            z1 = t * CUBIC_THIRD;
+            z2 = c1 / t;
+        }
+        f2 = cubic_f(&p, z2); /* local minimum */
+        if (f2 <= GK_LIT(0.0)) {
+            /* the largest root r2 >= z2, where f is convex and increasing: start above it, at the
+               caller's bound hi or at z2 + sqrt(-f(z2)/sqrt(D)) (f(z2 + h) = f(z2) + sqrt(D) h^2
+               + h^3 exactly, so that point has f >= 0) */
+            gk_real x0, rbig;
+            if (!cubic_nonzero(f2)) {
+                rbig = z2;
+            } else {
+                if (have_hi) {
+                    x0 = hstep; /* not a select on z2: keeps the iteration off the isolation's path */
+                    if (!(x0 > z2)) x0 = (hi > z2) ? hi : z2 + gk_sqrt(-f2 / sd);
+                } else {
+                    x0 = z2 + gk_sqrt(-f2 / sd);
+                }
+                rbig = cubic_newton(&p, x0, z2, x0 + (x0 - z2) + GK_LIT(1.0));
+            }
+            f1 = cubic_f(&p, z1); /* local maximum */
+            if (f1 < GK_LIT(0.0)) {
+                r[0] = rbig; /* one real root */
+                n = 1;
+            } else {
+                /* 3. three real roots r0 <= z1 <= r1 <= z2 <= r2: the two smaller ones from the
+                   deflated quadratic z^2 + (c2 + r2) z - c0/r2 (cancellation-free formula), each
+                   then polished on the cubic inside its isolating interval */
+                gk_real e1 = c2 + rbig;
+                gk_real e0 = cubic_nonzero(rbig) ? -c0 / rbig : c1;
+                gk_real disc = e1 * e1 - GK_LIT(4.0) * e0;
+                gk_real q, qa, qb, x0l, x0m;
+                if (disc < GK_LIT(0.0)) disc = GK_LIT(0.0);
+                q = GK_LIT(-0.5) * (e1 + gk_copysign(gk_sqrt(disc), e1));
+                qa = q;
+                qb = cubic_nonzero(q) ? e0 / q : q;
+                x0l = qa < qb ? qa : qb;
+                x0m = qa < qb ? qb : qa;
+                r[2] = rbig;
+                if (!cubic_nonzero(f1)) {
+                    r[0] = z1;
+                    r[1] = z1;
+                } else {
+                    if (!(x0l < z1)) x0l = z1 - gk_sqrt(f1 / sd); /* below the smallest root */
+                    r[0] = cubic_newton(&p, x0l, x0l - (z1 - x0l) - GK_LIT(1.0), z1);
+                    if (!cubic_nonzero(f2)) {
+                        r[1] = z2;
+                    } else {
+                        if (!(x0m > z1 && x0m < z2)) x0m = GK_LIT(0.5) * (z1 + z2);
+                        r[1] = cubic_newton(&p, x0m, z1, z2);
+                    }
+                }
+                n = 3;
+            }
+        } else {
+            /* one real root, below z1 (where f is concave and increasing): start below it */
+            f1 = cubic_f(&p, z1);
             if (z1 <= lo) {
                 n = 0;
             } else {

@@ -168,11 +168,14 @@ gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_rea
             b = VDW_OMEGA_B * pr / tr;
         }
     } else {
+        /* three independent divisions (a pipelined processor overlaps them) */
         gk_real tr = t / gas->critical_temperature.k;
+        gk_real itr = gas->critical_temperature.k / t;
         gk_real pr = p / gas->critical_pressure.pa;
+        gk_real pitr = pr * itr;
         eos_omegas(eos, &oa, &ob);
-        a = oa * eos_alpha(eos, tr, gas->acentric_factor) * (pr / tr) / tr;
-        b = ob * pr / tr;
+        a = oa * eos_alpha(eos, tr, gas->acentric_factor) * pitr * itr;
+        b = ob * pitr;
     }
     if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
     if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE; /* underflow: covolume lost */
@@ -181,13 +184,14 @@ gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_rea
     return GK_OK;
 }
 
-/* log1p(x)/x, 1 at x = 0 (x >= 0). */
-static gk_real eos_log1p_ratio(gk_real x) {
-    if (x < GK_LIT(1e-4)) {
-        /* series 1 - x/2 + x^2/3 - x^3/4: truncation below x^4/5 < 2e-17 */
+/* Below this x, ln(1 + x)/x is taken from its series (truncation below x^4/5 < 2e-17). */
+#define LN1P_SERIES_MAX GK_LIT(1e-4)
+
+/* ln(1 + x)/x for x >= 0, accurate also as x -> 0. */
+static gk_real eos_ln1p_ratio(gk_real x) {
+    if (x < LN1P_SERIES_MAX)
         return GK_LIT(1.0) - x * (GK_LIT(0.5) - x * (GK_LIT(1.0) / GK_LIT(3.0) - x * GK_LIT(0.25)));
-    }
-    return gk_log1p(x) / x;
+    return gk_log(GK_LIT(1.0) + x) / x;
 }
 
 /*
@@ -196,27 +200,39 @@ static gk_real eos_log1p_ratio(gk_real x) {
  *   RK, SRK:              ln phi = Z - 1 - ln(Z - B) - (A/B) ln(1 + B/Z)
  *   Peng-Robinson:        ln phi = Z - 1 - ln(Z - B)
  *                                  - A / (2 sqrt2 B) ln((Z + (1 + sqrt2) B) / (Z + (1 - sqrt2) B))
- * The logarithms of ratios are written as log1p so nothing cancels when B is small.
+ * The last term is written (A/den) L(x) with L(x) = ln(1 + x)/x, den = Z + (1 - sqrt2) B (or Z)
+ * and x = 2 sqrt2 B/den (or B/Z), so it stays accurate when B -> 0. ln(1 + x) rounds 1 + x:
+ * absolute error about u (A/B) in ln phi, below 1e-14 for the states of the tests.
  */
-static gk_real eos_lnphi(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
-    gk_real zm1 = z - GK_LIT(1.0);
-    gk_real lzb = (z > GK_LIT(0.5) && z < GK_LIT(2.0)) ? gk_log1p(zm1 - b) : gk_log(z - b);
-    gk_real att;
+static gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
     switch (family) {
-    case GK__FAMILY_RK:
-        att = (a / z) * eos_log1p_ratio(b / z);
-        break;
+    case GK__FAMILY_RK: {
+        gk_real x = b / z;
+        return (x < LN1P_SERIES_MAX) ? (a / z) * eos_ln1p_ratio(x) : (a / b) * gk_log(GK_LIT(1.0) + x);
+    }
     case GK__FAMILY_PR: {
         gk_real den = z + (GK_LIT(1.0) - GK_SQRT2) * b; /* > 0 since z > b */
-        att = (a / den) * eos_log1p_ratio(GK_LIT(2.0) * GK_SQRT2 * b / den);
-        break;
+        gk_real x = GK_LIT(2.0) * GK_SQRT2 * b / den;
+        return (x < LN1P_SERIES_MAX) ? (a / den) * eos_ln1p_ratio(x)
+                                     : (a / (GK_LIT(2.0) * GK_SQRT2 * b)) * gk_log(GK_LIT(1.0) + x);
     }
     case GK__FAMILY_VDW:
     default:
-        att = a / z;
-        break;
+        return a / z;
     }
-    return zm1 - lzb - att;
+}
+
+static gk_real eos_lnphi(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
+    return (z - GK_LIT(1.0)) - gk_log(z - b) - eos_attraction(family, a, b, z);
+}
+
+/* phi = exp(Z - 1 - attraction) / (Z - B): one logarithm fewer than exp(ln phi); falls back to
+   exp(ln phi) where the first factor would leave the floating-point range. */
+static gk_real eos_phi(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
+    gk_real e = (z - GK_LIT(1.0)) - eos_attraction(family, a, b, z);
+    gk_real phi = gk_exp(e) / (z - b);
+    if (!(phi > GK_LIT(0.0)) || !gk_finite(phi)) phi = gk_exp(e - gk_log(z - b));
+    return phi;
 }
 
 gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
@@ -235,7 +251,7 @@ gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
 
 gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
                            gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
-    gk_real u, w, c2, c1, c0, zr[3], zsel, lnphi, phi, vm;
+    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm;
     int n, pick;
     gk_root branch;
 
@@ -255,30 +271,27 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
 
     if (n == 1) {
         pick = 0;
-        lnphi = eos_lnphi(family, a, b, zr[0]);
         branch = (zr[0] < vc_over_b * b) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
     } else if (root == GK_ROOT_LIQUID) {
         pick = 0;
-        lnphi = eos_lnphi(family, a, b, zr[0]);
         branch = GK_ROOT_LIQUID;
     } else if (root == GK_ROOT_GAS) {
         pick = n - 1;
-        lnphi = eos_lnphi(family, a, b, zr[n - 1]);
         branch = GK_ROOT_GAS;
     } else {
         /* stable: the lower fugacity (same p, T: the lower Gibbs energy); a tie goes to the gas */
         gk_real lg = eos_lnphi(family, a, b, zr[n - 1]);
         gk_real ll = eos_lnphi(family, a, b, zr[0]);
         if (ll < lg) {
-            pick = 0; lnphi = ll; branch = GK_ROOT_LIQUID;
+            pick = 0; branch = GK_ROOT_LIQUID;
         } else {
-            pick = n - 1; lnphi = lg; branch = GK_ROOT_GAS;
+            pick = n - 1; branch = GK_ROOT_GAS;
         }
     }
     zsel = zr[pick];
-    phi = gk_exp(lnphi);
+    phi = eos_phi(family, a, b, zsel);
     vm = zsel * (GK_R * t / p);
-    if (!gk_finite(lnphi) || !gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
+    if (!gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
 
     out->z = zsel;
     out->molar_volume.m3_per_mol = vm;

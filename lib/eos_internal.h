@@ -16,12 +16,6 @@
 
 #include "gk_internal.h"
 
-#if GK_REAL_IS_FLOAT
-#  define gk_log1p log1pf
-#else
-#  define gk_log1p log1p
-#endif
-
 /* The cubic families: the (u, w) of the denominator and the form of ln(phi). */
 typedef enum gk__cubic_family {
     GK__FAMILY_VDW, /* u = 0, w = 0 */
