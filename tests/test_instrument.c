@@ -184,6 +184,54 @@ static void liquefied_gas_is_out_of_range(void **state) {
     assert_untouched(w.kg_per_s);
 }
 
+/* A calibration-gas cylinder of our own invented bench: 10 L of "CO2=5%, N2=balance" at 150 bar
+   and 20 degC. Ideal: n = pV / (RT) = 61.5413721874 mol whatever the composition; mass with
+   M = 0.05 x 44.009 + 0.95 x 28.014 g/mol is 1.77323771287 kg (mpmath). The real-gas models
+   take the mixture path; zero k_ij given explicitly equal NULL, an asymmetric k_ij is rejected. */
+static void mixture_vessel_contents(void **state) {
+    (void)state;
+    gk_mixture m;
+    assert_status(gk_mixture_parse("CO2=5%, N2=balance", &m), GK_OK);
+    const gk_fluid f = {NULL, &m, NULL};
+    const gk_reference din = ref_of(GK_REF_0C_101325PA);
+    gk_contents c;
+    assert_status(gk_vessel_contents(GK_EOS_IDEAL, f, M3(0.01), PA(1.5e7), KEL(293.15), din, &c), GK_OK);
+    assert_rel(c.amount.mol, 61.541372187417393, TOL_IDEAL);
+    assert_rel(c.mass.kg, 1.7732377128651979, TOL_IDEAL);
+    gk_contents c0, c1;
+    const gk_real zero_kij[4] = {RV(0.0), RV(0.0), RV(0.0), RV(0.0)};
+    const gk_fluid fk = {NULL, &m, zero_kij};
+    assert_status(gk_vessel_contents(GK_EOS_PENG_ROBINSON, f, M3(0.01), PA(1.5e7), KEL(293.15), din, &c0), GK_OK);
+    assert_status(gk_vessel_contents(GK_EOS_PENG_ROBINSON, fk, M3(0.01), PA(1.5e7), KEL(293.15), din, &c1), GK_OK);
+    assert_rel(c1.amount.mol, c0.amount.mol, GK_TOL(1e-14, 1e-6));
+    /* a nitrogen-rich gas at 150 bar: PR Z within a few percent of 1 */
+    assert_abs((double)c0.z, 1.0, 0.05);
+    const gk_real bad_kij[4] = {RV(0.0), RV(0.1), RV(0.2), RV(0.0)};
+    const gk_fluid fb = {NULL, &m, bad_kij};
+    c1.z = GK_SENTINEL;
+    assert_status(gk_vessel_contents(GK_EOS_PENG_ROBINSON, fb, M3(0.01), PA(1.5e7), KEL(293.15), din, &c1), GK_ERR_DOMAIN);
+    assert_untouched(c1.z);
+}
+
+/* Wet-gas correction, the recipe of docs/instruments.md: 250 mL of gas collected over water at
+   22 degC and 99.2 kPa (an invented bench reading) is, dry, at the IUPAC condition
+   V = 0.25 L x (p - p_ws) / 100 kPa x 273.15 / 295.15 = 0.223394380383 L, with
+   p_ws(295.15 K) = 2645.21124658 Pa (IF97 eq. 30; all mpmath). */
+static void wet_gas_correction_recipe(void **state) {
+    (void)state;
+    gk_pressure dry;
+    assert_status(gk_dry_gas_pressure(PA(99200.0), KEL(295.15), RV(1.0), &dry), GK_OK);
+    assert_rel(dry.pa, 96554.788753417740, GK_TOL(1e-13, 1e-6));
+    gk_real f;
+    assert_status(gk_reference_factor(dry, KEL(295.15), RV(1.0), ref_of(GK_REF_0C_100KPA), RV(1.0), &f), GK_OK);
+    assert_rel((double)f * 0.25e-3, 2.2339438038282277e-4, GK_TOL(1e-13, 1e-6));
+    /* the same through a humid mixture: the dry part of the wet gas is (1 - x_w) of it */
+    gk_mixture dry_mix, wet_mix;
+    assert_status(gk_mixture_parse("N2=1", &dry_mix), GK_OK);
+    assert_status(gk_humid_mixture(&dry_mix, PA(99200.0), KEL(295.15), RV(1.0), &wet_mix), GK_OK);
+    assert_rel((double)wet_mix.mole_fraction[0] * 99200.0, 96554.788753417740, GK_TOL(1e-13, 1e-6));
+}
+
 /* ------------------------------------------------------------------ leak rate */
 
 /* 2 L test volume of N2, 3.00 bar -> 2.99 bar abs at 20 degC in 60 s, DIN 1343 reference.
@@ -496,6 +544,8 @@ int main(void) {
         cmocka_unit_test(nitrogen_cylinder_ideal_vs_real),
         cmocka_unit_test(carbon_dioxide_gas_region),
         cmocka_unit_test(liquefied_gas_is_out_of_range),
+        cmocka_unit_test(mixture_vessel_contents),
+        cmocka_unit_test(wet_gas_correction_recipe),
         cmocka_unit_test(leak_rate_values),
         cmocka_unit_test(leak_gas_flowed_in),
         cmocka_unit_test(relative_density_values),
