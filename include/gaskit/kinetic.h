@@ -79,9 +79,10 @@ GK_API gk_status gk_effusion_molar_mass(gk_molar_mass reference,
 
 /**
  * @brief Mean free path of a hard-sphere gas: lambda = k T / (sqrt(2) pi d^2 p).
+ * Uses k = GK_BOLTZMANN. Valid while the gas is dilute (lambda much larger than d).
  * @param p Absolute pressure, > 0.
  * @param t Temperature, > 0 K.
- * @param collision_diameter_m Molecular collision diameter d in metres, > 0.
+ * @param collision_diameter_m Molecular collision diameter d in metres, > 0 (a few 1e-10 m).
  * @param[out] out_m Mean free path in metres.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */

@@ -1,0 +1,3 @@
+module gaskit.example/cgo
+
+go 1.19
