@@ -29,9 +29,6 @@
 #define GKQ_TEXT_MAX 256      /* longest fluid or unit text kept */
 #define GKQ_FIELDS_MAX 24     /* most fields in one output record */
 
-#ifndef GKQ_HAVE_INSTRUMENT
-#define GKQ_HAVE_INSTRUMENT 1 /* the instrument calculations (contents, leak) are in the library */
-#endif
 
 /* ------------------------------------------------------------------ small helpers */
 
@@ -565,7 +562,6 @@ static gk_status parse_fluid(const char *text, fluid_in *f, detail *why) {
     return GK_OK;
 }
 
-#if GKQ_HAVE_INSTRUMENT
 static gk_fluid as_fluid(const fluid_in *f) {
     gk_fluid fl;
     fl.gas = f->is_mix ? NULL : f->gas;
@@ -573,7 +569,6 @@ static gk_fluid as_fluid(const fluid_in *f) {
     fl.kij = NULL;
     return fl;
 }
-#endif
 
 static gk_status need_word(const args *a, size_t k, const char *what, detail *why) {
     if (a->nw <= k) {
@@ -832,7 +827,7 @@ static const field dew_fields[] = {
     {"p_water", "water partial pressure", F_REAL, GK_UNIT_PA, GK_UNIT_KPA, ""},
     {"x_water", "water mole fraction", F_REAL, U_NONE, U_NONE, ""},
     {"p_dry", "dry-gas partial pressure", F_REAL, GK_UNIT_PA, GK_UNIT_KPA, ""},
-    {"dew_point", "dew point (frost point below 0 degC)", F_REAL, GK_UNIT_K, GK_UNIT_DEGC, ""},
+    {"dew_point", "dew (or frost) point", F_REAL, GK_UNIT_K, GK_UNIT_DEGC, ""},
 };
 
 static gk_status word_dew(const settings *set, args *a, record *r, detail *why) {
@@ -882,7 +877,6 @@ static gk_status word_dew(const settings *set, args *a, record *r, detail *why) 
     return GK_OK;
 }
 
-#if GKQ_HAVE_INSTRUMENT
 /* ------------------------------------------------------------------ word: contents */
 
 static const field contents_fields[] = {
@@ -1001,8 +995,6 @@ static gk_status word_leak(const settings *set, args *a, record *r, detail *why)
     return GK_OK;
 }
 
-#endif /* GKQ_HAVE_INSTRUMENT */
-
 /* ------------------------------------------------------------------ word: gases */
 
 static const field gas_fields[] = {
@@ -1086,12 +1078,10 @@ static const struct word {
      "water vapour pressure"},
     {"dew", word_dew, dew_fields, sizeof dew_fields / sizeof dew_fields[0],
      "dew point and wet gas"},
-#if GKQ_HAVE_INSTRUMENT
     {"contents", word_contents, contents_fields, sizeof contents_fields / sizeof contents_fields[0],
      "vessel contents"},
     {"leak", word_leak, leak_fields, sizeof leak_fields / sizeof leak_fields[0],
      "pressure-decay leak rate"},
-#endif
 };
 
 static const struct word *find_word(const char *name) {

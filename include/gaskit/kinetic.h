@@ -23,8 +23,8 @@ extern "C" {
  *  Speeds in m/s, T in K, M in kg/mol, p in Pa. Square roots are taken factor by factor, so
  *  no intermediate overflows while the result is representable.
  *
- *  The heat-capacity ratio of gk_speed_of_sound_ideal() must lie in (1, 5/3]: 5/3 for a
- *  monatomic gas (pass 5.0/3.0, not a rounded 1.667, which is outside the domain), 1.4 for air
+ *  The heat-capacity ratio of gk_speed_of_sound_ideal() must lie in (1, 1.67]: 5/3 for a
+ *  monatomic gas (a printed 1.667 or 1.67 is accepted), 1.4 for air
  *  and diatomic gases near room temperature. gk_mean_free_path() uses k = GK_BOLTZMANN;
  *  collision diameters are a few 1e-10 m; it holds while the gas is dilute (mean free path
  *  much larger than the diameter).
@@ -44,9 +44,13 @@ GK_API gk_status gk_speed_most_probable(gk_temperature t, gk_molar_mass m, gk_sp
 
 /**
  * @brief Speed of sound in an ideal gas, sqrt(gamma R T / M).
- * @param heat_capacity_ratio gamma = cp/cv; must be finite and in (1, 5/3].
+ * @param t Temperature, > 0 K.
+ * @param m Molar mass, > 0.
+ * @param heat_capacity_ratio gamma = cp/cv; must be finite and in (1, 1.67] (5/3 for a monatomic ideal gas,
+ *        with room for its rounded printed forms).
+ * @param[out] out Speed of sound, m/s.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_RANGE (see the group).
- * @retval GK_ERR_DOMAIN An input is not finite, T or M not > 0, or gamma outside (1, 5/3].
+ * @retval GK_ERR_DOMAIN An input is not finite, T or M not > 0, or gamma outside (1, 1.67].
  */
 GK_API gk_status gk_speed_of_sound_ideal(gk_temperature t, gk_molar_mass m,
                                          gk_real heat_capacity_ratio, gk_speed *out);
@@ -72,7 +76,9 @@ GK_API gk_status gk_effusion_molar_mass(gk_molar_mass reference,
 
 /**
  * @brief Mean free path of a hard-sphere gas: lambda = k T / (sqrt(2) pi d^2 p).
- * @param collision_diameter_m Molecular collision diameter d in metres, > 0.
+ * @param p Absolute pressure, > 0.
+ * @param t Temperature, > 0 K.
+ * @param collision_diameter_m Molecular collision diameter d in metres, > 0 (a few 1e-10 m).
  * @param[out] out_m Mean free path in metres.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
