@@ -17,8 +17,8 @@
 #include "gk_available.h"
 
 #define GK_THREADS 4
-#define GK_ROUNDS 40
-#define GK_MAX_RESULTS 512
+#define GK_ROUNDS 8
+#define GK_MAX_RESULTS 4096
 
 typedef struct results {
     size_t count;
