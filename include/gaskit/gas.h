@@ -34,20 +34,41 @@ typedef struct gk_gas {
 /**
  * @brief Finds a gas of the built-in table by formula or name.
  *
- * The formula matches exactly ("CO2", "n-C4H10"); the name matches without regard to ASCII
- * case ("Carbon Dioxide"). Reads @p name_or_formula only up to its terminating NUL.
+ * Lookup rules:
+ * - Formulas are tried first and match exactly, case-sensitive: "CO" is carbon monoxide,
+ *   "Co" and "co" find nothing. Isomers carry a prefix ("n-C4H10", "i-C4H10"); R-134a is
+ *   "CH2FCF3"; air is "air".
+ * - Then names, and a few aliases per gas (British spellings such as "sulphur dioxide",
+ *   IUPAC names such as "propene", refrigerant numbers such as "R-134a"), without regard to
+ *   ASCII case ("Carbon Dioxide"). No locale is consulted.
+ * - No trimming: " N2" and "nitrogen " find nothing.
+ * The table, its conventions and the source of every column are listed in docs/gas-table.md.
+ * Reads @p name_or_formula only up to its terminating NUL.
  * @param name_or_formula NUL-terminated text.
- * @param[out] out Pointer to the static, constant table entry.
+ * @param[out] out Pointer to the static, constant table entry (the same pointer for every key
+ *             of the same gas, so pointers may be compared).
  * @retval GK_OK            @p out written.
  * @retval GK_ERR_ARGUMENT  An argument is NULL.
- * @retval GK_ERR_NOT_FOUND No gas has that formula or name.
+ * @retval GK_ERR_NOT_FOUND No gas has that formula, name or alias (also for ""); @p out is
+ *                          left untouched.
  */
 GK_API gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out);
 
-/** @brief Number of gases in the built-in table. */
+/**
+ * @brief Number of gases in the built-in table (31 in version 0.1).
+ * @return The count; gk_gas_at() accepts 0 ... count - 1.
+ */
 GK_API size_t gk_gas_count(void);
 
-/** @brief The built-in gas at @p index (0 ... gk_gas_count() - 1); NULL past the end. */
+/**
+ * @brief The built-in gas at @p index, in table order (not sorted; later versions may append
+ *        gases, never reorder within a major version).
+ * @param index 0 ... gk_gas_count() - 1.
+ * @return Pointer to the static, constant entry; NULL when @p index is past the end.
+ *         Its collision_diameter is the Lennard-Jones sigma fitted to viscosity (0 = not
+ *         known); vdw_a and vdw_b are 0 where no handbook value is carried, so that a caller
+ *         derives them from the critical constants.
+ */
 GK_API const gk_gas *gk_gas_at(size_t index);
 
 /** @} */

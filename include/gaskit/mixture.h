@@ -29,34 +29,75 @@ typedef struct gk_mixture {
  * @brief Reads a composition such as "N2=0.7808, O2=0.2095, Ar=0.0097", "CO2=5%, N2=balance"
  *        or "CO=50ppm, air=balance".
  *
- * Components are separated by commas; each is a gas name or formula (as gk_gas_find()), '=',
- * and a fraction, a percentage ("5%") or parts per million ("50ppm", umol/mol). At most one
- * component may be "balance" (one minus the rest). Without "balance" the fractions must sum to
- * 1 within 1e-6. Spaces around tokens are ignored. Reads only up to the terminating NUL.
+ * Syntax: components separated by commas; each is a gas name, alias or formula (as
+ * gk_gas_find(): everything before '=' with the surrounding white space trimmed, so
+ * "carbon dioxide" works), '=', and one of
+ * - a fraction: [+|-] digits [. digits] [e|E [+|-] digits], or with the point first (".5");
+ *   no hexadecimal, "inf" or "nan", no decimal comma; at most 40 mantissa digits;
+ * - a percentage: a number and '%' ("5%", "5 %");
+ * - parts per million (umol/mol): a number and "ppm" ("50ppm", "50 PPM");
+ * - "balance" (any ASCII case): one minus the sum of the others. At most one per text.
+ * White space (space, tab, CR, LF, VT, FF) around tokens is ignored. A comma inside a name is
+ * allowed when the whole name is a gas ("1,1,1,2-tetrafluoroethane=0.1"); otherwise it is
+ * taken as a misplaced separator and the text is malformed.
+ *
+ * Limits: the text may hold at most 1024 characters before the NUL; it is read only up to the
+ * NUL and never beyond 1025 characters. At most GK_MIXTURE_MAX components.
+ *
+ * Numbers are read without strtod, stdio or locale. Accuracy: correctly rounded (exactly the
+ * gk_real nearest the decimal value, percent or ppm included) for up to 15 significant digits
+ * (float build: 7) and decimal exponents within +-22 (float build: +-10), which covers every
+ * ordinary figure; otherwise within a few ulp. A value that underflows becomes 0.
+ *
+ * Fractions are stored as given (not rescaled). Without "balance" their sum must be 1 within
+ * 1e-6. With "balance", the others may sum to at most 1 + 1e-6; a balance between -1e-6 and 0
+ * (rounding) is stored as 0.
+ *
+ * The first error from left to right is reported; the sum checks come after the whole text.
+ * @param text NUL-terminated composition text (untrusted input is fine).
+ * @param[out] out The mixture, components in text order; written only on GK_OK.
  * @retval GK_OK              @p out written.
  * @retval GK_ERR_ARGUMENT    An argument is NULL.
- * @retval GK_ERR_PARSE       Malformed text (missing '=', bad number, two balances, ...).
+ * @retval GK_ERR_PARSE       Malformed text: empty, a component without '=' or without a name
+ *                            or value, a bad number or suffix, text after a value, a trailing
+ *                            comma, two balances, more than 40 mantissa digits, more than 1024
+ *                            characters.
  * @retval GK_ERR_NOT_FOUND   A component names no known gas.
- * @retval GK_ERR_COMPOSITION A fraction outside [0, 1], a sum not 1 within 1e-6, a negative
- *                            balance, a gas listed twice, or more than GK_MIXTURE_MAX components.
+ * @retval GK_ERR_COMPOSITION A fraction outside [0, 1] (including one too large for gk_real,
+ *                            such as "1e999"), a sum not 1 within 1e-6, a negative balance, a
+ *                            gas listed twice (by any of its keys), or more than
+ *                            GK_MIXTURE_MAX components.
  */
 GK_API gk_status gk_mixture_parse(const char *text, gk_mixture *out);
 
 /**
- * @brief Rescales the mole fractions to a sum of exactly 1 (to rounding).
+ * @brief Rescales the mole fractions to a sum of exactly 1 (to rounding): x_i / sum x_j.
+ *
+ * The fractions may be any non-negative proportions (78, 21, 1 gives 0.78, 0.21, 0.01), even
+ * ones whose sum would overflow. Each result is one correctly rounded division by the
+ * (compensated) sum.
+ * @param[in,out] mix The mixture; only count and the first count fractions are read, only
+ *                the fractions are written, and only on GK_OK.
  * @retval GK_OK              @p mix rescaled.
- * @retval GK_ERR_ARGUMENT    @p mix is NULL or has a NULL gas.
+ * @retval GK_ERR_ARGUMENT    @p mix is NULL or has a NULL gas among the first count.
  * @retval GK_ERR_COMPOSITION count is 0 or above GK_MIXTURE_MAX, a fraction is negative or not
  *                            finite, or all are 0. @p mix is left unchanged.
  */
 GK_API gk_status gk_mixture_normalize(gk_mixture *mix);
 
 /**
- * @brief Mean molar mass of a mixture, sum of x_i M_i.
+ * @brief Mean molar mass of a mixture, sum of x_i M_i (compensated summation).
+ *
+ * Validates the composition first: count 1 ... GK_MIXTURE_MAX, no NULL gas, every fraction in
+ * [0, 1], sum 1 within 1e-6 (use gk_mixture_normalize() for proportions). The same gas listed
+ * twice is accepted here.
+ * @param mix The mixture.
+ * @param[out] out Mean molar mass; written only on GK_OK.
  * @retval GK_OK              @p out written.
  * @retval GK_ERR_ARGUMENT    An argument is NULL, or a component gas is NULL.
- * @retval GK_ERR_COMPOSITION The composition is not valid (see gk_mixture_parse()).
+ * @retval GK_ERR_COMPOSITION The composition is not valid (see above).
  * @retval GK_ERR_DOMAIN      A component's molar mass is not finite or not > 0.
+ * @retval GK_ERR_RANGE       The result underflows to 0 (absurdly small molar masses).
  */
 GK_API gk_status gk_mixture_molar_mass(const gk_mixture *mix, gk_molar_mass *out);
 
