@@ -128,8 +128,10 @@ static void small_liquid_root(void **state) {
     assert_int_equal(n, 3);
     /* backward check in long double: each root is a root of the double-rounded cubic */
     for (int k = 0; k < 3; ++k) {
-        long double x = z[k];
-        long double c2 = -(1.0L - b), c1 = a - b * (2.0 + 3.0 * b), c0 = -b * (a - b * (1.0 + b));
+        long double x = (long double)z[k];
+        /* the double-rounded coefficients the solver was given, held exactly in long double */
+        long double c2 = (long double)(-(1.0 - b)), c1 = (long double)(a - b * (2.0 + 3.0 * b));
+        long double c0 = (long double)(-b * (a - b * (1.0 + b)));
         long double f = ((x + c2) * x + c1) * x + c0;
         long double mag = ((fabsl(x) + fabsl(c2)) * fabsl(x) + fabsl(c1)) * fabsl(x) + fabsl(c0);
         assert_true(fabsl(f) <= (long double)GK_TOL(8e-16, 4e-7) * mag);

@@ -54,8 +54,8 @@ static void ref_ab(gk_eos eos, long double tr, long double pr, long double omega
 static long double backward_error(gk_eos eos, double t, double p, double omega, long double z,
                                   long double *plain) {
     long double a, b, u, w;
-    long double tr = (long double)t / EOS_REF_TC, pr = (long double)p / EOS_REF_PC;
-    ref_ab(eos, tr, pr, omega, &a, &b, &u, &w);
+    long double tr = (long double)t / (long double)EOS_REF_TC, pr = (long double)p / (long double)EOS_REF_PC;
+    ref_ab(eos, tr, pr, (long double)omega, &a, &b, &u, &w);
     long double rep = 1.0L / (z - b), att = a / (z * z + u * b * z + w * b * b);
     long double res = fabsl(rep - att - 1.0L);
     if (plain) *plain = res;
@@ -82,7 +82,7 @@ static void reference_table_all_models(void **state) {
         assert_status(gk_eos_solve(row->eos, &g, p, t, GK_ROOT_STABLE, &r), GK_OK);
         /* backward error of every returned root, everywhere (also at the critical point) */
         for (int k = 0; k < r.root_count; ++k) {
-            long double be = backward_error(row->eos, row->t, row->p, row->omega, r.z_roots[k], NULL);
+            long double be = backward_error(row->eos, row->t, row->p, row->omega, (long double)r.z_roots[k], NULL);
             if ((double)be > bmax) bmax = (double)be;
             if (!((double)be <= btol)) {
                 print_error("row %zu root %d: backward error %.3Lg\n", i, k, be);

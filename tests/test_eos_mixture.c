@@ -25,7 +25,8 @@ static const gk_gas N2 = {"nitrogen", "N2", {(gk_real)0.028013}, {(gk_real)126.2
 
 /* Peng-Robinson a(T), b of a pure gas in SI, long double (constants: check-values.md). */
 static void pr_ab(const gk_gas *g, long double t, long double *a, long double *b) {
-    long double tc = g->critical_temperature.k, pc = g->critical_pressure.pa, w = g->acentric_factor;
+    long double tc = (long double)g->critical_temperature.k, pc = (long double)g->critical_pressure.pa;
+    long double w = (long double)g->acentric_factor;
     long double k = 0.37464L + 1.54226L * w - 0.26992L * w * w;
     long double s = 1.0L + k * (1.0L - sqrtl(t / tc));
     *a = 0.45724L * R_EXACT * R_EXACT * tc * tc / pc * s * s;
@@ -40,7 +41,7 @@ static long double pr_mix_pressure(const gk_mixture *m, const double *kij, long 
     for (size_t i = 0; i < n; ++i) {
         b += (long double)m->mole_fraction[i] * bi[i];
         for (size_t j = 0; j < n; ++j)
-            a += (long double)m->mole_fraction[i] * m->mole_fraction[j] * sqrtl(ai[i] * ai[j]) *
+            a += (long double)m->mole_fraction[i] * (long double)m->mole_fraction[j] * sqrtl(ai[i] * ai[j]) *
                  (1.0L - (kij ? (long double)kij[i * n + j] : 0.0L));
     }
     return R_EXACT * t / (vm - b) - a / (vm * vm + 2.0L * b * vm - b * b);
@@ -98,8 +99,8 @@ static void mixing_rules_independent_check(void **state) {
             gk_eos_result r0, rk;
             assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &m, NULL, p, t, GK_ROOT_STABLE, &r0), GK_OK);
             assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &m, kr, p, t, GK_ROOT_STABLE, &rk), GK_OK);
-            long double p0 = pr_mix_pressure(&m, NULL, T[it], r0.molar_volume.m3_per_mol);
-            long double pk = pr_mix_pressure(&m, kij, T[it], rk.molar_volume.m3_per_mol);
+            long double p0 = pr_mix_pressure(&m, NULL, (long double)T[it], (long double)r0.molar_volume.m3_per_mol);
+            long double pk = pr_mix_pressure(&m, kij, (long double)T[it], (long double)rk.molar_volume.m3_per_mol);
             assert_rel((double)p0, P[ip], GK_TOL(1e-12, 2e-5));
             assert_rel((double)pk, P[ip], GK_TOL(1e-12, 2e-5));
             /* positive k_ij weaken the attraction: Z rises */
