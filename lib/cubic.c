@@ -203,20 +203,29 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
         }
     } else {
         /* f monotonic: one real root (triple at D = 0 and f(s) = 0) */
-        gk_real s = -c2 / GK_LIT(3.0);
+        gk_real s = -c2 * CUBIC_THIRD;
         gk_real fs = cubic_f(&p, s);
-        gk_real ds = c1 - c2 * c2 / GK_LIT(3.0); /* f'(s) = -D/3 >= 0 */
-        gk_real dist = gk_cbrt(gk_fabs(fs));
-        if (ds > GK_LIT(0.0) && gk_fabs(fs) / ds < dist) dist = gk_fabs(fs) / ds;
         if (!cubic_nonzero(fs)) {
             r[0] = s;
-        } else if (fs < GK_LIT(0.0)) {
-            gk_real x0 = s + dist;
-            if (have_hi && hi > s && hi < x0) x0 = hi;
-            r[0] = cubic_newton(&p, x0, s, x0 + dist + GK_LIT(1.0));
+        } else if (fs < GK_LIT(0.0) && have_hi && hi > s) {
+            /* root above s, where f is convex: from above, at the first step from hi or at hi */
+            gk_real x0 = hstep > s ? hstep : hi;
+            r[0] = cubic_newton(&p, x0, s, hi + (hi - s) + GK_LIT(1.0));
+        } else if (fs > GK_LIT(0.0) && lo < s && cubic_f(&p, lo) < GK_LIT(0.0)) {
+            /* root between lo and s, where f is concave: from below, at lo */
+            r[0] = cubic_newton(&p, lo, lo - (s - lo) - GK_LIT(1.0), s);
         } else {
-            gk_real x0 = s - dist;
-            r[0] = cubic_newton(&p, x0, x0 - dist - GK_LIT(1.0), s);
+            /* no bound known: the distance to the root is below cbrt|f(s)| and |f(s)|/f'(s) */
+            gk_real ds = c1 - c2 * c2 * CUBIC_THIRD; /* f'(s) = -D/3 >= 0 */
+            gk_real dist = gk_cbrt(gk_fabs(fs));
+            if (ds > GK_LIT(0.0) && gk_fabs(fs) / ds < dist) dist = gk_fabs(fs) / ds;
+            if (fs < GK_LIT(0.0)) {
+                gk_real x0 = s + dist;
+                r[0] = cubic_newton(&p, x0, s, x0 + dist + GK_LIT(1.0));
+            } else {
+                gk_real x0 = s - dist;
+                r[0] = cubic_newton(&p, x0, x0 - dist - GK_LIT(1.0), s);
+            }
         }
         n = 1;
     }

@@ -251,8 +251,8 @@ gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
 
 gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
                            gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
-    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm;
-    int n, pick;
+    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm, lnphi = GK_LIT(0.0);
+    int n, pick, have_lnphi = 0;
     gk_root branch;
 
     switch (family) {
@@ -283,13 +283,14 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
         gk_real lg = eos_lnphi(family, a, b, zr[n - 1]);
         gk_real ll = eos_lnphi(family, a, b, zr[0]);
         if (ll < lg) {
-            pick = 0; branch = GK_ROOT_LIQUID;
+            pick = 0; branch = GK_ROOT_LIQUID; lnphi = ll;
         } else {
-            pick = n - 1; branch = GK_ROOT_GAS;
+            pick = n - 1; branch = GK_ROOT_GAS; lnphi = lg;
         }
+        have_lnphi = 1;
     }
     zsel = zr[pick];
-    phi = eos_phi(family, a, b, zsel);
+    phi = have_lnphi ? gk_exp(lnphi) : eos_phi(family, a, b, zsel);
     vm = zsel * (GK_R * t / p);
     if (!gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
 
