@@ -160,6 +160,11 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
             if (f1 < GK_LIT(0.0)) {
                 r[0] = rbig; /* one real root */
                 n = 1;
+            } else if (lo > z1 && cubic_f(&p, lo) < GK_LIT(0.0)) {
+                /* three real roots, but f(lo) < 0 right of z1 puts lo between the middle and the
+                   largest root: only the largest is above lo (for an equation of state, B) */
+                r[0] = rbig;
+                n = 1;
             } else {
                 /* 3. three real roots r0 <= z1 <= r1 <= z2 <= r2: the two smaller ones from the
                    deflated quadratic z^2 + (c2 + r2) z - c0/r2 (cancellation-free formula), each
