@@ -22,6 +22,9 @@
 /* Half the unit roundoff is too strict for the stopping test; one epsilon is the rounding level. */
 #define CUBIC_EPS GK_REAL_EPS
 
+/* 1/3 rounded (one rounding more than a division; z1, z2 only isolate the roots). */
+#define CUBIC_THIRD (GK_LIT(1.0) / GK_LIT(3.0))
+
 typedef struct cubic_poly { gk_real c2, c1, c0; } cubic_poly;
 
 /* f(z) by Horner's rule: rounding error below 3u sum |c_i||z|^i (Higham, Accuracy and Stability
@@ -110,13 +113,15 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
     p.c1 = c1;
     p.c0 = c0;
 
-    /* a first Halley step from the caller's upper bound, independent of the isolation below
-       (so a pipelined processor overlaps the two); used only where it lies above z2 */
+    /* a first step from the caller's upper bound, independent of the isolation below (so a
+       pipelined processor overlaps the two); used only where it lies above z2. Householder's
+       order-4 step x - f (f'^2 - f f''/2) / (f'^3 - f f' f'' + f^2 f'''/6), with f''' = 6. */
     if (have_hi) {
         gk_real fh = cubic_f(&p, hi), dh = cubic_df(&p, hi);
         gk_real d2h = GK_LIT(6.0) * hi + GK_LIT(2.0) * c2;
-        gk_real den = dh * dh - GK_LIT(0.5) * fh * d2h;
-        hstep = (fh > GK_LIT(0.0) && dh > GK_LIT(0.0) && den > GK_LIT(0.0)) ? hi - fh * dh / den : hi;
+        gk_real num = fh * (dh * dh - GK_LIT(0.5) * fh * d2h);
+        gk_real den = dh * (dh * dh - fh * d2h) + fh * fh;
+        hstep = (fh > GK_LIT(0.0) && dh > GK_LIT(0.0) && den > GK_LIT(0.0)) ? hi - num / den : hi;
         if (!(hstep <= hi)) hstep = hi;
     }
 
@@ -128,10 +133,10 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
         /* cancellation-free: the root of larger magnitude first, the other from the product */
         t = -(c2 + gk_copysign(sd, c2)); /* = 3 * (root of larger magnitude), |t| >= sd > 0 */
         if (t > GK_LIT(0.0)) {
-            z2 = t / GK_LIT(3.0);
+            z2 = t * CUBIC_THIRD;
             z1 = c1 / t;
         } else {
-            z1 = t / GK_LIT(3.0);
+            z1 = t * CUBIC_THIRD;
             z2 = c1 / t;
         }
         f2 = cubic_f(&p, z2); /* local minimum */
@@ -143,7 +148,12 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
             if (!cubic_nonzero(f2)) {
                 rbig = z2;
             } else {
-                x0 = (have_hi && hi > z2) ? (hstep > z2 ? hstep : hi) : z2 + gk_sqrt(-f2 / sd);
+                if (have_hi) {
+                    x0 = hstep; /* not a select on z2: keeps the iteration off the isolation's path */
+                    if (!(x0 > z2)) x0 = (hi > z2) ? hi : z2 + gk_sqrt(-f2 / sd);
+                } else {
+                    x0 = z2 + gk_sqrt(-f2 / sd);
+                }
                 rbig = cubic_newton(&p, x0, z2, x0 + (x0 - z2) + GK_LIT(1.0));
             }
             f1 = cubic_f(&p, z1); /* local maximum */

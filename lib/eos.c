@@ -204,28 +204,35 @@ static gk_real eos_ln1p_ratio(gk_real x) {
  * and x = 2 sqrt2 B/den (or B/Z), so it stays accurate when B -> 0. ln(1 + x) rounds 1 + x:
  * absolute error about u (A/B) in ln phi, below 1e-14 for the states of the tests.
  */
-static gk_real eos_lnphi(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
-    gk_real lzb = gk_log(z - b);
-    gk_real att;
+static gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
     switch (family) {
     case GK__FAMILY_RK: {
         gk_real x = b / z;
-        att = (x < LN1P_SERIES_MAX) ? (a / z) * eos_ln1p_ratio(x) : (a / b) * gk_log(GK_LIT(1.0) + x);
-        break;
+        return (x < LN1P_SERIES_MAX) ? (a / z) * eos_ln1p_ratio(x) : (a / b) * gk_log(GK_LIT(1.0) + x);
     }
     case GK__FAMILY_PR: {
         gk_real den = z + (GK_LIT(1.0) - GK_SQRT2) * b; /* > 0 since z > b */
         gk_real x = GK_LIT(2.0) * GK_SQRT2 * b / den;
-        att = (x < LN1P_SERIES_MAX) ? (a / den) * eos_ln1p_ratio(x)
-                                    : (a / (GK_LIT(2.0) * GK_SQRT2 * b)) * gk_log(GK_LIT(1.0) + x);
-        break;
+        return (x < LN1P_SERIES_MAX) ? (a / den) * eos_ln1p_ratio(x)
+                                     : (a / (GK_LIT(2.0) * GK_SQRT2 * b)) * gk_log(GK_LIT(1.0) + x);
     }
     case GK__FAMILY_VDW:
     default:
-        att = a / z;
-        break;
+        return a / z;
     }
-    return (z - GK_LIT(1.0)) - lzb - att;
+}
+
+static gk_real eos_lnphi(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
+    return (z - GK_LIT(1.0)) - gk_log(z - b) - eos_attraction(family, a, b, z);
+}
+
+/* phi = exp(Z - 1 - attraction) / (Z - B): one logarithm fewer than exp(ln phi); falls back to
+   exp(ln phi) where the first factor would leave the floating-point range. */
+static gk_real eos_phi(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
+    gk_real e = (z - GK_LIT(1.0)) - eos_attraction(family, a, b, z);
+    gk_real phi = gk_exp(e) / (z - b);
+    if (!(phi > GK_LIT(0.0)) || !gk_finite(phi)) phi = gk_exp(e - gk_log(z - b));
+    return phi;
 }
 
 gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
@@ -244,7 +251,7 @@ gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
 
 gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
                            gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
-    gk_real u, w, c2, c1, c0, zr[3], zsel, lnphi, phi, vm;
+    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm;
     int n, pick;
     gk_root branch;
 
@@ -264,30 +271,27 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
 
     if (n == 1) {
         pick = 0;
-        lnphi = eos_lnphi(family, a, b, zr[0]);
         branch = (zr[0] < vc_over_b * b) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
     } else if (root == GK_ROOT_LIQUID) {
         pick = 0;
-        lnphi = eos_lnphi(family, a, b, zr[0]);
         branch = GK_ROOT_LIQUID;
     } else if (root == GK_ROOT_GAS) {
         pick = n - 1;
-        lnphi = eos_lnphi(family, a, b, zr[n - 1]);
         branch = GK_ROOT_GAS;
     } else {
         /* stable: the lower fugacity (same p, T: the lower Gibbs energy); a tie goes to the gas */
         gk_real lg = eos_lnphi(family, a, b, zr[n - 1]);
         gk_real ll = eos_lnphi(family, a, b, zr[0]);
         if (ll < lg) {
-            pick = 0; lnphi = ll; branch = GK_ROOT_LIQUID;
+            pick = 0; branch = GK_ROOT_LIQUID;
         } else {
-            pick = n - 1; lnphi = lg; branch = GK_ROOT_GAS;
+            pick = n - 1; branch = GK_ROOT_GAS;
         }
     }
     zsel = zr[pick];
-    phi = gk_exp(lnphi);
+    phi = eos_phi(family, a, b, zsel);
     vm = zsel * (GK_R * t / p);
-    if (!gk_finite(lnphi) || !gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
+    if (!gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
 
     out->z = zsel;
     out->molar_volume.m3_per_mol = vm;
