@@ -1,0 +1,238 @@
+/*
+ * cubic.c - real roots of a monic cubic: isolation at the critical points, then Newton's
+ * iteration from monotone starts. Method and error bound: see cubic.h and docs/cubic-solver.md.
+ */
+#include "cubic.h"
+
+#if GK_REAL_IS_FLOAT
+#  define gk_frexp frexpf
+#  define gk_ldexp ldexpf
+/* Scale when |z| could pass 2^16: then z^3 stays inside 2^+-48, far from FLT_MAX (2^128) and
+   from the subnormals (2^-126) (common practice: keep a margin for products of two terms). */
+#  define CUBIC_SCALE_EXP 16
+#  define CUBIC_BIG GK_LIT(65536.0) /* 2^16 */
+#else
+#  define gk_frexp frexp
+#  define gk_ldexp ldexp
+/* Scale when |z| could pass 2^64 (z^3 inside 2^+-192, far from 2^+-1022). */
+#  define CUBIC_SCALE_EXP 64
+#  define CUBIC_BIG GK_LIT(18446744073709551616.0) /* 2^64 */
+#endif
+
+/* Half the unit roundoff is too strict for the stopping test; one epsilon is the rounding level. */
+#define CUBIC_EPS GK_REAL_EPS
+
+/* 1/3 rounded (one rounding more than a division; z1, z2 only isolate the roots). */
+#define CUBIC_THIRD (GK_LIT(1.0) / GK_LIT(3.0))
+
+typedef struct cubic_poly { gk_real c2, c1, c0; } cubic_poly;
+
+/* f(z) by Horner's rule: rounding error below 3u sum |c_i||z|^i (Higham, Accuracy and Stability
+   of Numerical Algorithms, 2nd ed., section 5.1). */
+static gk_real cubic_f(const cubic_poly *p, gk_real z) {
+    return ((z + p->c2) * z + p->c1) * z + p->c0;
+}
+
+/* f'(z) = 3 z^2 + 2 c2 z + c1. */
+static gk_real cubic_df(const cubic_poly *p, gk_real z) {
+    return (GK_LIT(3.0) * z + GK_LIT(2.0) * p->c2) * z + p->c1;
+}
+
+static int cubic_nonzero(gk_real x) { return (x < GK_LIT(0.0) || x > GK_LIT(0.0)) ? 1 : 0; }
+
+/*
+ * Halley's iteration (cubically convergent: x - f f' / (f'^2 - f f''/2)) from x inside (lo, hi),
+ * an interval on which f is monotonic and holds the root. Iterates leaving the interval are
+ * pulled back halfway towards its end. Stops when the predicted remaining error C |dx|^3,
+ * C = (f''/(2 f'))^2 - f'''/(6 f'), is below one epsilon of x; when |f| stops decreasing
+ * (rounding level: the previous point is kept); or after GK_CUBIC_ITER_MAX steps. Near a multiple
+ * root (f' -> 0) the prediction is large and the |f| test ends the iteration.
+ */
+static gk_real cubic_newton(const cubic_poly *p, gk_real x, gk_real lo, gk_real hi) {
+    gk_real fx = cubic_f(p, x);
+    int i;
+    for (i = 0; i < GK_CUBIC_ITER_MAX; ++i) {
+        gk_real d1, d2, den, dx, xn, fn;
+        if (!cubic_nonzero(fx)) break;
+        d1 = cubic_df(p, x);
+        d2 = GK_LIT(6.0) * x + GK_LIT(2.0) * p->c2;
+        den = d1 * d1 - GK_LIT(0.5) * fx * d2;
+        if (!cubic_nonzero(den)) break;
+        dx = fx * d1 / den;
+        xn = x - dx;
+        if (!(xn > lo && xn < hi)) {
+            /* guarded: stay inside the isolating interval */
+            xn = (xn <= lo) ? GK_LIT(0.5) * (x + lo) : GK_LIT(0.5) * (x + hi);
+            if (!(xn > lo && xn < hi)) break;
+        } else if (gk_fabs(dx) * dx * dx * (d2 * d2 + GK_LIT(4.0) * gk_fabs(d1)) <=
+                   GK_LIT(4.0) * CUBIC_EPS * d1 * d1 * gk_fabs(xn)) {
+            x = xn; /* the next correction would be below one rounding unit */
+            break;
+        }
+        fn = cubic_f(p, xn);
+        if (i > 0 && !(gk_fabs(fn) < gk_fabs(fx))) break; /* rounding level reached at x */
+        x = xn;
+        fx = fn;
+    }
+    return x;
+}
+
+/* Scale exponent e with |c2|/2^e, |c1|/2^2e, |c0|/2^3e of order one (only called when needed). */
+static int cubic_scale_exponent(gk_real c2, gk_real c1, gk_real c0) {
+    int e = -10000, k;
+    if (cubic_nonzero(c2)) { (void)gk_frexp(c2, &k); e = k; }
+    if (cubic_nonzero(c1)) { (void)gk_frexp(c1, &k); k = k / 2; if (k > e) e = k; }
+    if (cubic_nonzero(c0)) { (void)gk_frexp(c0, &k); k = k / 3; if (k > e) e = k; }
+    return e == -10000 ? 0 : e;
+}
+
+int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, gk_real z[3]) {
+    cubic_poly p;
+    gk_real r[3];
+    gk_real big = CUBIC_BIG;
+    gk_real a2 = gk_fabs(c2), a1 = gk_fabs(c1), a0 = gk_fabs(c0);
+    gk_real dd, sd, z1, z2, f1, f2, t, hstep = hi;
+    int n = 0, e = 0, i, out;
+    int have_hi = (hi > lo) ? 1 : 0;
+
+    if (!gk_finite(c2) || !gk_finite(c1) || !gk_finite(c0) || isnan(lo) || isnan(hi)) return -1;
+
+    /* 1. scaling by a power of two (exact) when z^3 could over- or underflow */
+    if (a2 > big || a1 > big * big || a0 > big * big * big ||
+        ((a2 < GK_LIT(1.0) / big && a1 < GK_LIT(1.0) / (big * big) &&
+          a0 < GK_LIT(1.0) / (big * big * big)) &&
+         (cubic_nonzero(c2) || cubic_nonzero(c1) || cubic_nonzero(c0)))) {
+        e = cubic_scale_exponent(c2, c1, c0);
+        c2 = gk_ldexp(c2, -e);
+        c1 = gk_ldexp(c1, -2 * e);
+        c0 = gk_ldexp(c0, -3 * e);
+        lo = gk_ldexp(lo, -e);
+        hi = gk_ldexp(hi, -e);
+    }
+    p.c2 = c2;
+    p.c1 = c1;
+    p.c0 = c0;
+
+    /* a first step from the caller's upper bound, independent of the isolation below (so a
+       pipelined processor overlaps the two); used only where it lies above z2. Householder's
+       order-4 step x - f (f'^2 - f f''/2) / (f'^3 - f f' f'' + f^2 f'''/6), with f''' = 6. */
+    if (have_hi) {
+        gk_real fh = cubic_f(&p, hi), dh = cubic_df(&p, hi);
+        gk_real d2h = GK_LIT(6.0) * hi + GK_LIT(2.0) * c2;
+        gk_real num = fh * (dh * dh - GK_LIT(0.5) * fh * d2h);
+        gk_real den = dh * (dh * dh - fh * d2h) + fh * fh;
+        hstep = (fh > GK_LIT(0.0) && dh > GK_LIT(0.0) && den > GK_LIT(0.0)) ? hi - num / den : hi;
+        if (!(hstep <= hi)) hstep = hi;
+    }
+
+    /* 2. critical points: 3 z^2 + 2 c2 z + c1 = 0, z = (-c2 +- sqrt(D)) / 3, D = c2^2 - 3 c1 */
+    dd = c2 * c2 - GK_LIT(3.0) * c1;
+    if (!gk_finite(dd)) return -1;
+    if (dd > GK_LIT(0.0)) {
+        sd = gk_sqrt(dd);
+        /* cancellation-free: the root of larger magnitude first, the other from the product */
+        t = -(c2 + gk_copysign(sd, c2)); /* = 3 * (root of larger magnitude), |t| >= sd > 0 */
+        if (t > GK_LIT(0.0)) {
+            z2 = t * CUBIC_THIRD;
+            z1 = c1 / t;
+        } else {
+            z1 = t * CUBIC_THIRD;
+            z2 = c1 / t;
+        }
+        f2 = cubic_f(&p, z2); /* local minimum */
+        if (f2 <= GK_LIT(0.0)) {
+            /* the largest root r2 >= z2, where f is convex and increasing: start above it, at the
+               caller's bound hi or at z2 + sqrt(-f(z2)/sqrt(D)) (f(z2 + h) = f(z2) + sqrt(D) h^2
+               + h^3 exactly, so that point has f >= 0) */
+            gk_real x0, rbig;
+            if (!cubic_nonzero(f2)) {
+                rbig = z2;
+            } else {
+                if (have_hi) {
+                    x0 = hstep; /* not a select on z2: keeps the iteration off the isolation's path */
+                    if (!(x0 > z2)) x0 = (hi > z2) ? hi : z2 + gk_sqrt(-f2 / sd);
+                } else {
+                    x0 = z2 + gk_sqrt(-f2 / sd);
+                }
+                rbig = cubic_newton(&p, x0, z2, x0 + (x0 - z2) + GK_LIT(1.0));
+            }
+            f1 = cubic_f(&p, z1); /* local maximum */
+            if (f1 < GK_LIT(0.0)) {
+                r[0] = rbig; /* one real root */
+                n = 1;
+            } else {
+                /* 3. three real roots r0 <= z1 <= r1 <= z2 <= r2: the two smaller ones from the
+                   deflated quadratic z^2 + (c2 + r2) z - c0/r2 (cancellation-free formula), each
+                   then polished on the cubic inside its isolating interval */
+                gk_real e1 = c2 + rbig;
+                gk_real e0 = cubic_nonzero(rbig) ? -c0 / rbig : c1;
+                gk_real disc = e1 * e1 - GK_LIT(4.0) * e0;
+                gk_real q, qa, qb, x0l, x0m;
+                if (disc < GK_LIT(0.0)) disc = GK_LIT(0.0);
+                q = GK_LIT(-0.5) * (e1 + gk_copysign(gk_sqrt(disc), e1));
+                qa = q;
+                qb = cubic_nonzero(q) ? e0 / q : q;
+                x0l = qa < qb ? qa : qb;
+                x0m = qa < qb ? qb : qa;
+                r[2] = rbig;
+                if (!cubic_nonzero(f1)) {
+                    r[0] = z1;
+                    r[1] = z1;
+                } else {
+                    if (!(x0l < z1)) x0l = z1 - gk_sqrt(f1 / sd); /* below the smallest root */
+                    r[0] = cubic_newton(&p, x0l, x0l - (z1 - x0l) - GK_LIT(1.0), z1);
+                    if (!cubic_nonzero(f2)) {
+                        r[1] = z2;
+                    } else {
+                        if (!(x0m > z1 && x0m < z2)) x0m = GK_LIT(0.5) * (z1 + z2);
+                        r[1] = cubic_newton(&p, x0m, z1, z2);
+                    }
+                }
+                n = 3;
+            }
+        } else {
+            /* one real root, below z1 (where f is concave and increasing): start below it */
+            f1 = cubic_f(&p, z1);
+            if (z1 <= lo) {
+                n = 0;
+            } else {
+                gk_real x0 = z1 - gk_sqrt(f1 / sd);
+                r[0] = cubic_newton(&p, x0, x0 - (z1 - x0) - GK_LIT(1.0), z1);
+                n = 1;
+            }
+        }
+    } else {
+        /* f monotonic: one real root (triple at D = 0 and f(s) = 0) */
+        gk_real s = -c2 / GK_LIT(3.0);
+        gk_real fs = cubic_f(&p, s);
+        gk_real ds = c1 - c2 * c2 / GK_LIT(3.0); /* f'(s) = -D/3 >= 0 */
+        gk_real dist = gk_cbrt(gk_fabs(fs));
+        if (ds > GK_LIT(0.0) && gk_fabs(fs) / ds < dist) dist = gk_fabs(fs) / ds;
+        if (!cubic_nonzero(fs)) {
+            r[0] = s;
+        } else if (fs < GK_LIT(0.0)) {
+            gk_real x0 = s + dist;
+            if (have_hi && hi > s && hi < x0) x0 = hi;
+            r[0] = cubic_newton(&p, x0, s, x0 + dist + GK_LIT(1.0));
+        } else {
+            gk_real x0 = s - dist;
+            r[0] = cubic_newton(&p, x0, x0 - dist - GK_LIT(1.0), s);
+        }
+        n = 1;
+    }
+
+    /* undo the scaling, keep the roots above lo, drop repeated values */
+    out = 0;
+    {
+        gk_real keep[3] = {GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0)};
+        for (i = 0; i < n; ++i) {
+            gk_real v = r[i];
+            if (!gk_finite(v)) return -1;
+            if (!(v > lo)) continue;
+            if (out > 0 && !(v > keep[out - 1])) continue; /* equal to the previous one */
+            keep[out++] = v;
+        }
+        for (i = 0; i < 3; ++i) z[i] = (e != 0 && i < out) ? gk_ldexp(keep[i], e) : keep[i];
+    }
+    return out;
+}

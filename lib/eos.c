@@ -1,0 +1,382 @@
+/*
+ * eos.c - the cubic equations of state of pure gases: van der Waals, Redlich-Kwong,
+ * Soave-Redlich-Kwong and Peng-Robinson (and the ideal gas through the same entry points).
+ *
+ * Each model is reduced to A, B (dimensionless, see eos_internal.h) in reduced variables
+ * Tr = T/Tc, Pr = p/Pc, so no R^2 Tc^2 product can overflow:
+ *     A = Omega_a alpha(Tr) Pr / Tr^2,   B = Omega_b Pr / Tr.
+ * The cubic in Z is solved by the private solver (cubic.c), which returns every real root
+ * above the covolume B; the root is chosen here (gas, liquid, or the lower fugacity).
+ */
+#include "eos_internal.h"
+#include "cubic.h"
+
+/* ---------------------------------------------------------------- model constants */
+/* Van der Waals (1873): a = 27 R^2 Tc^2 / (64 Pc), b = R Tc / (8 Pc), from the critical
+   conditions dp/dV = d2p/dV2 = 0 (check-values.md, "Cubic equations of state"). */
+#define VDW_OMEGA_A GK_LIT(0.421875) /* 27/64, exact */
+#define VDW_OMEGA_B GK_LIT(0.125)    /* 1/8, exact */
+/* Redlich and Kwong, Chem. Rev. 44 (1949) 233 (journal reference from memory); rounded constants
+   as in check-values.md: a = 0.42748 R^2 Tc^2.5 / Pc with a / sqrt(T), b = 0.08664 R Tc / Pc.
+   Soave, Chem. Eng. Sci. 27 (1972) 1197 (reference from memory) keeps Omega_a, Omega_b. */
+#define RK_OMEGA_A GK_LIT(0.42748)
+#define RK_OMEGA_B GK_LIT(0.08664)
+/* Soave (1972): alpha = (1 + m (1 - sqrt(Tr)))^2, m = 0.480 + 1.574 w - 0.176 w^2 (check-values.md). */
+#define SRK_M0 GK_LIT(0.480)
+#define SRK_M1 GK_LIT(1.574)
+#define SRK_M2 GK_LIT(0.176)
+/* Peng and Robinson, Ind. Eng. Chem. Fundam. 15 (1976) 59 (reference from memory); constants as
+   in check-values.md: a = 0.45724 R^2 Tc^2 / Pc, b = 0.07780 R Tc / Pc,
+   kappa = 0.37464 + 1.54226 w - 0.26992 w^2. */
+#define PR_OMEGA_A GK_LIT(0.45724)
+#define PR_OMEGA_B GK_LIT(0.07780)
+#define PR_K0 GK_LIT(0.37464)
+#define PR_K1 GK_LIT(1.54226)
+#define PR_K2 GK_LIT(0.26992)
+/* Critical compressibility of each model with its exact constants: 3/8 (van der Waals), 1/3
+   (Redlich-Kwong, Soave), 0.30740 (Peng-Robinson 1976); Vc/b = Zc/Omega_b labels a lone root. */
+#define VDW_ZC GK_LIT(0.375)
+#define RK_ZC  GK_LIT(0.333333333333333333)
+#define PR_ZC  GK_LIT(0.30740)
+
+/* sqrt(2) to 20 digits (common practice). */
+#define GK_SQRT2 GK_LIT(1.4142135623730950488)
+
+gk__cubic_family gk__eos_family(gk_eos eos) {
+    switch (eos) {
+    case GK_EOS_REDLICH_KWONG:
+    case GK_EOS_SOAVE_REDLICH_KWONG: return GK__FAMILY_RK;
+    case GK_EOS_PENG_ROBINSON:       return GK__FAMILY_PR;
+    case GK_EOS_IDEAL:
+    case GK_EOS_VAN_DER_WAALS:
+    default:                         return GK__FAMILY_VDW;
+    }
+}
+
+gk_real gk__eos_vc_over_b(gk_eos eos) {
+    switch (eos) {
+    case GK_EOS_REDLICH_KWONG:
+    case GK_EOS_SOAVE_REDLICH_KWONG: return RK_ZC / RK_OMEGA_B;
+    case GK_EOS_PENG_ROBINSON:       return PR_ZC / PR_OMEGA_B;
+    case GK_EOS_IDEAL:
+    case GK_EOS_VAN_DER_WAALS:
+    default:                         return VDW_ZC / VDW_OMEGA_B;
+    }
+}
+
+static int eos_valid(gk_eos eos) {
+    switch (eos) {
+    case GK_EOS_IDEAL:
+    case GK_EOS_VAN_DER_WAALS:
+    case GK_EOS_REDLICH_KWONG:
+    case GK_EOS_SOAVE_REDLICH_KWONG:
+    case GK_EOS_PENG_ROBINSON: return 1;
+    default: return 0;
+    }
+}
+
+static int root_valid(gk_root root) {
+    switch (root) {
+    case GK_ROOT_STABLE:
+    case GK_ROOT_GAS:
+    case GK_ROOT_LIQUID: return 1;
+    default: return 0;
+    }
+}
+
+gk_status gk__eos_check_state(gk_pressure p, gk_temperature t, gk_root root) {
+    if (!root_valid(root)) return GK_ERR_ARGUMENT;
+    if (!gk_positive(p.pa) || !gk_positive(t.k)) return GK_ERR_DOMAIN;
+    return GK_OK;
+}
+
+static int critical_ok(const gk_gas *gas) {
+    return gk_positive(gas->critical_temperature.k) && gk_positive(gas->critical_pressure.pa);
+}
+
+gk_status gk__eos_check_gas(gk_eos eos, const gk_gas *gas) {
+    if (gas == NULL) return GK_ERR_ARGUMENT;
+    switch (eos) {
+    case GK_EOS_IDEAL:
+        return GK_OK;
+    case GK_EOS_VAN_DER_WAALS:
+        if (!gk_finite(gas->vdw_a) || !gk_finite(gas->vdw_b) ||
+            gas->vdw_a < GK_LIT(0.0) || gas->vdw_b < GK_LIT(0.0))
+            return GK_ERR_DOMAIN;
+        /* Tc, Pc are needed only for a constant the gas does not list */
+        if ((!(gas->vdw_a > GK_LIT(0.0)) || !(gas->vdw_b > GK_LIT(0.0))) && !critical_ok(gas))
+            return GK_ERR_DOMAIN;
+        return GK_OK;
+    case GK_EOS_REDLICH_KWONG:
+    case GK_EOS_SOAVE_REDLICH_KWONG:
+    case GK_EOS_PENG_ROBINSON:
+        if (!critical_ok(gas) || !gk_finite(gas->acentric_factor)) return GK_ERR_DOMAIN;
+        return GK_OK;
+    default:
+        return GK_ERR_ARGUMENT;
+    }
+}
+
+/* Temperature function alpha(Tr) of each model (Tr > 0). */
+static gk_real eos_alpha(gk_eos eos, gk_real tr, gk_real omega) {
+    gk_real m, s;
+    switch (eos) {
+    case GK_EOS_REDLICH_KWONG:
+        return GK_LIT(1.0) / gk_sqrt(tr); /* a / sqrt(T), normalised at Tc */
+    case GK_EOS_SOAVE_REDLICH_KWONG:
+        m = SRK_M0 + (SRK_M1 - SRK_M2 * omega) * omega;
+        break;
+    case GK_EOS_PENG_ROBINSON:
+        m = PR_K0 + (PR_K1 - PR_K2 * omega) * omega;
+        break;
+    case GK_EOS_IDEAL:
+    case GK_EOS_VAN_DER_WAALS:
+    default:
+        return GK_LIT(1.0);
+    }
+    s = GK_LIT(1.0) + m * (GK_LIT(1.0) - gk_sqrt(tr));
+    return s * s;
+}
+
+static void eos_omegas(gk_eos eos, gk_real *oa, gk_real *ob) {
+    switch (eos) {
+    case GK_EOS_REDLICH_KWONG:
+    case GK_EOS_SOAVE_REDLICH_KWONG: *oa = RK_OMEGA_A; *ob = RK_OMEGA_B; break;
+    case GK_EOS_PENG_ROBINSON:       *oa = PR_OMEGA_A; *ob = PR_OMEGA_B; break;
+    case GK_EOS_IDEAL:
+    case GK_EOS_VAN_DER_WAALS:
+    default:                         *oa = VDW_OMEGA_A; *ob = VDW_OMEGA_B; break;
+    }
+}
+
+gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *a_out, gk_real *b_out) {
+    gk_real a, b, oa, ob;
+    if (eos == GK_EOS_VAN_DER_WAALS && (gas->vdw_a > GK_LIT(0.0) || gas->vdw_b > GK_LIT(0.0))) {
+        /* handbook constant(s) in SI; the other (if 0) from Tc, Pc */
+        gk_real rt = GK_R * t;
+        gk_real prt = p / rt;
+        if (gas->vdw_a > GK_LIT(0.0)) {
+            a = (gas->vdw_a / rt) * prt;
+        } else {
+            gk_real tr = t / gas->critical_temperature.k, pr = p / gas->critical_pressure.pa;
+            a = VDW_OMEGA_A * pr / (tr * tr);
+        }
+        if (gas->vdw_b > GK_LIT(0.0)) {
+            b = gas->vdw_b * prt;
+        } else {
+            gk_real tr = t / gas->critical_temperature.k, pr = p / gas->critical_pressure.pa;
+            b = VDW_OMEGA_B * pr / tr;
+        }
+    } else {
+        /* three independent divisions (a pipelined processor overlaps them) */
+        gk_real tr = t / gas->critical_temperature.k;
+        gk_real itr = gas->critical_temperature.k / t;
+        gk_real pr = p / gas->critical_pressure.pa;
+        gk_real pitr = pr * itr;
+        eos_omegas(eos, &oa, &ob);
+        a = oa * eos_alpha(eos, tr, gas->acentric_factor) * pitr * itr;
+        b = ob * pitr;
+    }
+    if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
+    if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE; /* underflow: covolume lost */
+    *a_out = a;
+    *b_out = b;
+    return GK_OK;
+}
+
+/* Below this x, ln(1 + x)/x is taken from its series (truncation below x^4/5 < 2e-17). */
+#define LN1P_SERIES_MAX GK_LIT(1e-4)
+
+/* ln(1 + x)/x for x >= 0, accurate also as x -> 0. */
+static gk_real eos_ln1p_ratio(gk_real x) {
+    if (x < LN1P_SERIES_MAX)
+        return GK_LIT(1.0) - x * (GK_LIT(0.5) - x * (GK_LIT(1.0) / GK_LIT(3.0) - x * GK_LIT(0.25)));
+    return gk_log(GK_LIT(1.0) + x) / x;
+}
+
+/*
+ * ln(phi) of a pure fluid (or a one-fluid mixture) at the root Z > B (standard closed forms):
+ *   van der Waals:        ln phi = Z - 1 - ln(Z - B) - A / Z
+ *   RK, SRK:              ln phi = Z - 1 - ln(Z - B) - (A/B) ln(1 + B/Z)
+ *   Peng-Robinson:        ln phi = Z - 1 - ln(Z - B)
+ *                                  - A / (2 sqrt2 B) ln((Z + (1 + sqrt2) B) / (Z + (1 - sqrt2) B))
+ * The last term is written (A/den) L(x) with L(x) = ln(1 + x)/x, den = Z + (1 - sqrt2) B (or Z)
+ * and x = 2 sqrt2 B/den (or B/Z), so it stays accurate when B -> 0. ln(1 + x) rounds 1 + x:
+ * absolute error about u (A/B) in ln phi, below 1e-14 for the states of the tests.
+ */
+static gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
+    switch (family) {
+    case GK__FAMILY_RK: {
+        gk_real x = b / z;
+        return (x < LN1P_SERIES_MAX) ? (a / z) * eos_ln1p_ratio(x) : (a / b) * gk_log(GK_LIT(1.0) + x);
+    }
+    case GK__FAMILY_PR: {
+        gk_real den = z + (GK_LIT(1.0) - GK_SQRT2) * b; /* > 0 since z > b */
+        gk_real x = GK_LIT(2.0) * GK_SQRT2 * b / den;
+        return (x < LN1P_SERIES_MAX) ? (a / den) * eos_ln1p_ratio(x)
+                                     : (a / (GK_LIT(2.0) * GK_SQRT2 * b)) * gk_log(GK_LIT(1.0) + x);
+    }
+    case GK__FAMILY_VDW:
+    default:
+        return a / z;
+    }
+}
+
+static gk_real eos_lnphi(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
+    return (z - GK_LIT(1.0)) - gk_log(z - b) - eos_attraction(family, a, b, z);
+}
+
+/* phi = exp(Z - 1 - attraction) / (Z - B): one logarithm fewer than exp(ln phi); falls back to
+   exp(ln phi) where the first factor would leave the floating-point range. */
+static gk_real eos_phi(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
+    gk_real e = (z - GK_LIT(1.0)) - eos_attraction(family, a, b, z);
+    gk_real phi = gk_exp(e) / (z - b);
+    if (!(phi > GK_LIT(0.0)) || !gk_finite(phi)) phi = gk_exp(e - gk_log(z - b));
+    return phi;
+}
+
+gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
+    gk_real vm = GK_R * t / p;
+    if (!gk_positive(vm)) return GK_ERR_RANGE;
+    out->z = GK_LIT(1.0);
+    out->molar_volume.m3_per_mol = vm;
+    out->fugacity_coefficient = GK_LIT(1.0);
+    out->root_count = 1;
+    out->z_roots[0] = GK_LIT(1.0);
+    out->z_roots[1] = GK_LIT(0.0);
+    out->z_roots[2] = GK_LIT(0.0);
+    out->branch = GK_ROOT_GAS;
+    return GK_OK;
+}
+
+gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
+                           gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
+    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm;
+    int n, pick;
+    gk_root branch;
+
+    switch (family) {
+    case GK__FAMILY_RK: u = GK_LIT(1.0); w = GK_LIT(0.0); break;
+    case GK__FAMILY_PR: u = GK_LIT(2.0); w = GK_LIT(-1.0); break;
+    case GK__FAMILY_VDW:
+    default:            u = GK_LIT(0.0); w = GK_LIT(0.0); break;
+    }
+    c2 = -(GK_LIT(1.0) + b - u * b);
+    c1 = a - b * (u + (u - w) * b);
+    c0 = -b * (a + w * b * (GK_LIT(1.0) + b));
+
+    n = gk__cubic_roots(c2, c1, c0, b, GK_LIT(1.0) + b, zr);
+    if (n < 0) return GK_ERR_RANGE;
+    if (n == 0) return GK_ERR_NO_SOLUTION;
+
+    if (n == 1) {
+        pick = 0;
+        branch = (zr[0] < vc_over_b * b) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
+    } else if (root == GK_ROOT_LIQUID) {
+        pick = 0;
+        branch = GK_ROOT_LIQUID;
+    } else if (root == GK_ROOT_GAS) {
+        pick = n - 1;
+        branch = GK_ROOT_GAS;
+    } else {
+        /* stable: the lower fugacity (same p, T: the lower Gibbs energy); a tie goes to the gas */
+        gk_real lg = eos_lnphi(family, a, b, zr[n - 1]);
+        gk_real ll = eos_lnphi(family, a, b, zr[0]);
+        if (ll < lg) {
+            pick = 0; branch = GK_ROOT_LIQUID;
+        } else {
+            pick = n - 1; branch = GK_ROOT_GAS;
+        }
+    }
+    zsel = zr[pick];
+    phi = eos_phi(family, a, b, zsel);
+    vm = zsel * (GK_R * t / p);
+    if (!gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
+
+    out->z = zsel;
+    out->molar_volume.m3_per_mol = vm;
+    out->fugacity_coefficient = phi;
+    out->root_count = n;
+    out->z_roots[0] = zr[0];
+    out->z_roots[1] = zr[1];
+    out->z_roots[2] = zr[2];
+    out->branch = branch;
+    return GK_OK;
+}
+
+gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
+                       gk_root root, gk_eos_result *out) {
+    gk_eos_result r;
+    gk_real a, b;
+    gk_status st;
+    if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
+    st = gk__eos_check_state(p, t, root);
+    if (st != GK_OK) return st;
+    if (eos == GK_EOS_IDEAL) {
+        st = gk__eos_ideal(p.pa, t.k, &r);
+    } else {
+        st = gk__eos_check_gas(eos, gas);
+        if (st != GK_OK) return st;
+        st = gk__eos_ab(eos, gas, p.pa, t.k, &a, &b);
+        if (st != GK_OK) return st;
+        st = gk__eos_solve_ab(gk__eos_family(eos), gk__eos_vc_over_b(eos), a, b, p.pa, t.k, root, &r);
+    }
+    if (st != GK_OK) return st;
+    *out = r;
+    return GK_OK;
+}
+
+gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_temperature t,
+                          gk_pressure *out) {
+    gk_real v = vm.m3_per_mol, tk = t.k, pa;
+    gk_status st;
+    if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
+    if (!gk_positive(v) || !gk_positive(tk)) return GK_ERR_DOMAIN;
+    st = gk__eos_check_gas(eos, gas);
+    if (st != GK_OK) return st;
+    if (eos == GK_EOS_IDEAL) {
+        pa = GK_R * tk / v;
+    } else if (eos == GK_EOS_VAN_DER_WAALS) {
+        gk_real rtc = GK_R * gas->critical_temperature.k;
+        gk_real a = gas->vdw_a > GK_LIT(0.0) ? gas->vdw_a
+                    : VDW_OMEGA_A * (rtc / gas->critical_pressure.pa) * rtc;
+        gk_real b = gas->vdw_b > GK_LIT(0.0) ? gas->vdw_b
+                    : VDW_OMEGA_B * rtc / gas->critical_pressure.pa;
+        if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
+        if (!(v > b)) return GK_ERR_DOMAIN;
+        pa = GK_R * tk / (v - b) - (a / v) / v;
+    } else {
+        /* reduced form: p/Pc = Tr/(vr - Ob) - Oa alpha / (vr^2 + u Ob vr + w Ob^2), vr = Vm Pc/(R Tc) */
+        gk_real oa, ob, u, w, tr, vr, den;
+        gk__cubic_family fam = gk__eos_family(eos);
+        eos_omegas(eos, &oa, &ob);
+        u = fam == GK__FAMILY_PR ? GK_LIT(2.0) : GK_LIT(1.0);
+        w = fam == GK__FAMILY_PR ? GK_LIT(-1.0) : GK_LIT(0.0);
+        tr = tk / gas->critical_temperature.k;
+        vr = v * (gas->critical_pressure.pa / (GK_R * gas->critical_temperature.k));
+        if (!gk_finite(vr) || !gk_finite(tr)) return GK_ERR_RANGE;
+        if (!(vr > ob)) return GK_ERR_DOMAIN;
+        den = vr * vr + (u * vr + w * ob) * ob;
+        pa = (tr / (vr - ob) - oa * eos_alpha(eos, tr, gas->acentric_factor) / den) *
+             gas->critical_pressure.pa;
+    }
+    if (!gk_finite(pa)) return GK_ERR_RANGE;
+    if (!(pa > GK_LIT(0.0))) return GK_ERR_NO_SOLUTION;
+    out->pa = pa;
+    return GK_OK;
+}
+
+gk_status gk_eos_density(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
+                         gk_density *out) {
+    gk_eos_result r;
+    gk_real rho;
+    gk_status st;
+    if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
+    if (!gk_positive(gas->molar_mass.kg_per_mol)) return GK_ERR_DOMAIN;
+    st = gk_eos_solve(eos, gas, p, t, GK_ROOT_STABLE, &r);
+    if (st != GK_OK) return st;
+    rho = gas->molar_mass.kg_per_mol / r.molar_volume.m3_per_mol;
+    if (!gk_positive(rho)) return GK_ERR_RANGE;
+    out->kg_per_m3 = rho;
+    return GK_OK;
+}

@@ -1,0 +1,55 @@
+/*
+ * eos_internal.h - private interface shared by the equation-of-state modules (eos.c, eos_vdw.c,
+ * eos_mixture.c, eos_batch.c). Never installed.
+ *
+ * Every cubic model is written in the generic two-parameter form
+ *     p = R T / (Vm - b) - a(T) / (Vm^2 + u b Vm + w b^2)
+ * and, with A = a p / (R T)^2, B = b p / (R T), Z = p Vm / (R T), as the cubic in Z
+ *     f(Z) = (Z - 1 - B) D(Z) + A (Z - B) = 0,   D(Z) = Z^2 + u B Z + w B^2
+ *          = Z^3 - (1 + B - u B) Z^2 + (A - B (u + (u - w) B)) Z - B (A + w B (1 + B)).
+ * (u, w) = (0, 0) van der Waals, (1, 0) Redlich-Kwong and Soave, (2, -1) Peng-Robinson.
+ * Since f(B) = -D(B) < 0, f(1 + B) = A > 0 and f > 0 above 1 + B when A >= 0, every real root
+ * above the covolume lies in (B, 1 + B), and there is always at least one.
+ */
+#ifndef GASKIT_EOS_INTERNAL_H
+#define GASKIT_EOS_INTERNAL_H
+
+#include "gk_internal.h"
+
+/* The cubic families: the (u, w) of the denominator and the form of ln(phi). */
+typedef enum gk__cubic_family {
+    GK__FAMILY_VDW, /* u = 0, w = 0 */
+    GK__FAMILY_RK,  /* u = 1, w = 0 (Redlich-Kwong, Soave-Redlich-Kwong) */
+    GK__FAMILY_PR   /* u = 2, w = -1 (Peng-Robinson) */
+} gk__cubic_family;
+
+/* Family of a model (eos must not be GK_EOS_IDEAL). */
+gk__cubic_family gk__eos_family(gk_eos eos);
+
+/* Checks the gas data a model uses: GK_ERR_ARGUMENT for NULL, GK_ERR_DOMAIN for non-physical
+   data (Tc, Pc not finite or not > 0, acentric factor not finite, vdw_a / vdw_b negative or not
+   finite). The ideal gas uses no gas data (only the molar mass, checked by the density paths). */
+gk_status gk__eos_check_gas(gk_eos eos, const gk_gas *gas);
+
+/* Dimensionless A = a(T) p / (R T)^2 and B = b p / (R T) of a pure gas at (p, T). The caller has
+   checked eos (not ideal), gas (gk__eos_check_gas) and p, T (finite, > 0).
+   GK_ERR_RANGE when A or B overflows. */
+gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *a_out, gk_real *b_out);
+
+/* Solves the cubic of a family with the given A >= 0, B > 0 at (p, T) and fills a complete
+   result (into *out only on GK_OK). GK_ERR_NO_SOLUTION without a root above B, GK_ERR_RANGE
+   when a result overflows. */
+gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
+                           gk_real p, gk_real t, gk_root root, gk_eos_result *out);
+
+/* The model's critical Vc / b (Zc / Omega_b), used to label a lone root as liquid (denser than
+   the model's critical density) or gas. */
+gk_real gk__eos_vc_over_b(gk_eos eos);
+
+/* Ideal-gas result at (p, T): Z = 1, phi = 1, one root. GK_ERR_RANGE on overflow. */
+gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out);
+
+/* Validity of p, T and root (shared by the solve paths). */
+gk_status gk__eos_check_state(gk_pressure p, gk_temperature t, gk_root root);
+
+#endif /* GASKIT_EOS_INTERNAL_H */

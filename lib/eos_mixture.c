@@ -1,0 +1,102 @@
+/*
+ * eos_mixture.c - cubic equations of state of a mixture with the van der Waals one-fluid mixing
+ * rules (common practice; e.g. Poling, Prausnitz and O'Connell, The Properties of Gases and
+ * Liquids, 5th ed., chapter 5, from memory):
+ *     a = sum_i sum_j x_i x_j sqrt(a_i a_j) (1 - k_ij),   b = sum_i x_i b_i.
+ * Written in the dimensionless A, B of each component at the same (p, T), the rules are the same
+ * (A_i = a_i p/(R T)^2, B_i = b_i p/(R T)). The mixture is then solved as a pseudo-pure fluid:
+ * the fugacity coefficient reported is that of the pseudo-pure fluid with the mixed A, B (the
+ * coefficient of the mixture as a whole, ln phi = sum_i x_i ln phi_i), not of any component.
+ */
+#include "eos_internal.h"
+
+/* Largest |k_ij| accepted: beyond 1 the cross attraction changes sign (common practice: fitted
+   binary parameters lie well inside [-1, 1]). */
+#define KIJ_MAX GK_LIT(1.0)
+/* Mole fractions must sum to 1 within this (API contract, GK_ERR_COMPOSITION). */
+#define MIX_SUM_TOL GK_LIT(1e-6)
+
+/* Composition check of the contract (until the gases module's gk__mixture_check is merged). */
+static gk_status mixture_check(const gk_mixture *mix) {
+    gk_real sum = GK_LIT(0.0);
+    size_t i;
+    if (mix->count == 0u || mix->count > (size_t)GK_MIXTURE_MAX) return GK_ERR_COMPOSITION;
+    for (i = 0; i < mix->count; ++i) {
+        gk_real x = mix->mole_fraction[i];
+        if (mix->gas[i] == NULL) return GK_ERR_ARGUMENT;
+        if (!gk_finite(x) || x < GK_LIT(0.0) || x > GK_LIT(1.0)) return GK_ERR_COMPOSITION;
+        sum += x;
+    }
+    if (!(gk_fabs(sum - GK_LIT(1.0)) <= MIX_SUM_TOL)) return GK_ERR_COMPOSITION;
+    return GK_OK;
+}
+
+static gk_status kij_check(size_t count, const gk_real *kij) {
+    size_t i, j;
+    if (kij == NULL) return GK_OK;
+    for (i = 0; i < count; ++i) {
+        for (j = 0; j < count; ++j) {
+            gk_real k = kij[i * count + j];
+            if (!gk_finite(k) || gk_fabs(k) > KIJ_MAX) return GK_ERR_DOMAIN;
+            if (i == j && (k < GK_LIT(0.0) || k > GK_LIT(0.0))) return GK_ERR_DOMAIN;
+            if (j < i && (k < kij[j * count + i] || k > kij[j * count + i])) return GK_ERR_DOMAIN;
+        }
+    }
+    return GK_OK;
+}
+
+gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
+                               gk_pressure p, gk_temperature t, gk_root root,
+                               gk_eos_result *out) {
+    gk_real ai[GK_MIXTURE_MAX], sa[GK_MIXTURE_MAX], bi[GK_MIXTURE_MAX];
+    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0);
+    gk_eos_result r;
+    gk_status st;
+    size_t i, j, n;
+
+    if (mix == NULL || out == NULL) return GK_ERR_ARGUMENT;
+    switch (eos) {
+    case GK_EOS_IDEAL:
+    case GK_EOS_VAN_DER_WAALS:
+    case GK_EOS_REDLICH_KWONG:
+    case GK_EOS_SOAVE_REDLICH_KWONG:
+    case GK_EOS_PENG_ROBINSON: break;
+    default: return GK_ERR_ARGUMENT;
+    }
+    st = mixture_check(mix);
+    if (st != GK_OK) return st;
+    st = gk__eos_check_state(p, t, root);
+    if (st != GK_OK) return st;
+    n = mix->count;
+    for (i = 0; i < n; ++i) {
+        st = gk__eos_check_gas(eos, mix->gas[i]);
+        if (st != GK_OK) return st;
+    }
+    st = kij_check(n, kij);
+    if (st != GK_OK) return st;
+
+    if (eos == GK_EOS_IDEAL) {
+        st = gk__eos_ideal(p.pa, t.k, &r);
+    } else {
+        for (i = 0; i < n; ++i) {
+            st = gk__eos_ab(eos, mix->gas[i], p.pa, t.k, &ai[i], &bi[i]);
+            if (st != GK_OK) return st;
+            sa[i] = gk_sqrt(ai[i]);
+        }
+        for (i = 0; i < n; ++i) {
+            gk_real xi = mix->mole_fraction[i], row = GK_LIT(0.0);
+            for (j = 0; j < n; ++j) {
+                gk_real one_minus_k = kij ? GK_LIT(1.0) - kij[i * n + j] : GK_LIT(1.0);
+                row += mix->mole_fraction[j] * sa[j] * one_minus_k;
+            }
+            a += xi * sa[i] * row;
+            b += xi * bi[i];
+        }
+        if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
+        if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE;
+        st = gk__eos_solve_ab(gk__eos_family(eos), gk__eos_vc_over_b(eos), a, b, p.pa, t.k, root, &r);
+    }
+    if (st != GK_OK) return st;
+    *out = r;
+    return GK_OK;
+}

@@ -1,0 +1,280 @@
+/*
+ * test_eos.c - cubic equations of state of pure gases against a 50-digit reference computed with
+ * mpmath (tests/reference/gen_eos_reference.py -> tests/reference/eos_reference.h), and the error
+ * contract of gk_eos_solve, gk_eos_pressure, gk_eos_density and gk_eos_density_batch.
+ *
+ * Accuracy contract checked here (double build):
+ *   - relative error of every root of Z <= 1e-13 away from the critical point
+ *     (|Tr - 1| > 0.01 or |Pr - 1| > 0.01), and the same root count and stable root;
+ *   - everywhere, the backward error of the returned root <= 1e-12: the pressure recomputed from
+ *     the returned molar volume (in long double) minus the input pressure, relative to the
+ *     magnitude of the terms of the equation, |p(V) - p| / (RT/(V - b) + a/D(V)). For a gas root
+ *     the denominator is about p, so this is the plain relative pressure error; for a liquid root
+ *     at low pressure the terms are up to 1e5 times p and even the correctly rounded Z gives a
+ *     plain relative pressure error far above 1e-12 (test reference_liquid_pressure_is_stiff).
+ * Float build: inputs rounded to float shift the reference state by up to 6e-8 relative, which
+ * moves Z by up to the state's condition number times that; the float tolerances (2e-5 on Z,
+ * 1e-5 backward error) hold over the whole grid away from the critical point.
+ */
+#include "gk_test.h"
+#include "reference/eos_reference.h"
+
+#define NREF (sizeof eos_ref_rows / sizeof eos_ref_rows[0])
+
+static gk_gas ref_gas(double omega) {
+    gk_gas g = {"fictional reference gas", "X", {(gk_real)0.030}, {(gk_real)EOS_REF_TC}, {(gk_real)EOS_REF_PC},
+                (gk_real)omega, 0, 0, 0, 0};
+    return g;
+}
+
+/* Model constants (same sources as lib/eos.c: check-values.md) for the long double check. */
+static void ref_ab(gk_eos eos, long double tr, long double pr, long double omega,
+                   long double *a, long double *b, long double *u, long double *w) {
+    long double m, s;
+    switch (eos) {
+    case GK_EOS_VAN_DER_WAALS:
+        *a = 27.0L / 64.0L * pr / (tr * tr); *b = pr / (8.0L * tr); *u = 0; *w = 0; return;
+    case GK_EOS_REDLICH_KWONG:
+        *a = 0.42748L * pr / (tr * tr * sqrtl(tr)); *b = 0.08664L * pr / tr; *u = 1; *w = 0; return;
+    case GK_EOS_SOAVE_REDLICH_KWONG:
+        m = 0.480L + 1.574L * omega - 0.176L * omega * omega;
+        s = 1.0L + m * (1.0L - sqrtl(tr));
+        *a = 0.42748L * s * s * pr / (tr * tr); *b = 0.08664L * pr / tr; *u = 1; *w = 0; return;
+    case GK_EOS_PENG_ROBINSON:
+    default:
+        m = 0.37464L + 1.54226L * omega - 0.26992L * omega * omega;
+        s = 1.0L + m * (1.0L - sqrtl(tr));
+        *a = 0.45724L * s * s * pr / (tr * tr); *b = 0.07780L * pr / tr; *u = 2; *w = -1; return;
+    }
+}
+
+/* Backward error of a root Z (see the header comment), in long double. In Z form the pressure
+   ratio is p(V)/p = 1/(Z - B) - A/D(Z); the terms' magnitude is 1/(Z - B) + A/D(Z). */
+static long double backward_error(gk_eos eos, double t, double p, double omega, long double z,
+                                  long double *plain) {
+    long double a, b, u, w;
+    long double tr = (long double)t / EOS_REF_TC, pr = (long double)p / EOS_REF_PC;
+    ref_ab(eos, tr, pr, omega, &a, &b, &u, &w);
+    long double rep = 1.0L / (z - b), att = a / (z * z + u * b * z + w * b * b);
+    long double res = fabsl(rep - att - 1.0L);
+    if (plain) *plain = res;
+    return res / (rep + att);
+}
+
+static int near_critical(double t, double p) {
+    return fabs(t / EOS_REF_TC - 1.0) <= 0.01 && fabs(p / EOS_REF_PC - 1.0) <= 0.01;
+}
+
+static void reference_table_all_models(void **state) {
+    (void)state;
+    const double ztol = GK_TOL(1e-13, 2e-5);
+    const double btol = GK_TOL(1e-12, 1e-5);
+    const double phitol = GK_TOL(1e-12, 1e-4);
+    double zmax = 0, bmax = 0, phimax = 0;
+    size_t checked = 0;
+    for (size_t i = 0; i < NREF; ++i) {
+        const eos_ref_row *row = &eos_ref_rows[i];
+        gk_gas g = ref_gas(row->omega);
+        gk_eos_result r;
+        gk_pressure p = {(gk_real)row->p};
+        gk_temperature t = {(gk_real)row->t};
+        assert_status(gk_eos_solve(row->eos, &g, p, t, GK_ROOT_STABLE, &r), GK_OK);
+        /* backward error of every returned root, everywhere (also at the critical point) */
+        for (int k = 0; k < r.root_count; ++k) {
+            long double be = backward_error(row->eos, row->t, row->p, row->omega, r.z_roots[k], NULL);
+            if ((double)be > bmax) bmax = (double)be;
+            if (!((double)be <= btol)) {
+                print_error("row %zu root %d: backward error %.3Lg\n", i, k, be);
+                fail();
+            }
+        }
+        if (near_critical(row->t, row->p)) continue;
+        ++checked;
+        if (r.root_count != row->n) {
+            print_error("row %zu (T %.17g p %.17g w %g): %d roots, reference %d\n", i, row->t,
+                        row->p, row->omega, r.root_count, row->n);
+            fail();
+        }
+        for (int k = 0; k < row->n; ++k) {
+            double e = fabs((double)r.z_roots[k] - row->z[k]) / row->z[k];
+            if (e > zmax) zmax = e;
+            if (!(e <= ztol)) {
+                print_error("row %zu (T %.17g p %.17g w %g) root %d: Z %.17g ref %.17g rel %.3g\n",
+                            i, row->t, row->p, row->omega, k, (double)r.z_roots[k], row->z[k], e);
+                fail();
+            }
+        }
+        /* root choice: the stable root of the reference (chosen by fugacity in mpmath) */
+        assert_rel(r.z, row->z[row->stable], ztol);
+        assert_int_equal(r.branch, row->n == 1 ? r.branch
+                                   : (row->stable == 0 ? GK_ROOT_LIQUID : GK_ROOT_GAS));
+        double pe = fabs((double)r.fugacity_coefficient - row->phi) / row->phi;
+        if (pe > phimax) phimax = pe;
+        assert_rel(r.fugacity_coefficient, row->phi, phitol);
+        /* molar volume consistent with Z */
+        assert_rel(r.molar_volume.m3_per_mol, (double)r.z * 8.314462618 * row->t / row->p, GK_TOL(1e-15, 5e-7));
+    }
+    print_message("reference (mpmath 50 digits): %zu rows, %zu away from the critical point; "
+                  "max rel err Z %.3g, max backward error %.3g, max rel err phi %.3g\n",
+                  (size_t)NREF, checked, zmax, bmax, phimax);
+}
+
+/* Why the backward error is measured relative to the terms: for a liquid root at low pressure
+   even the correctly rounded reference Z gives a large plain pressure error (stiff liquid). */
+static void reference_liquid_pressure_is_stiff(void **state) {
+    (void)state;
+    /* first row: van der Waals, Tr = 0.3, Pr = 0.001, liquid root 4.62e-4 (mpmath) */
+    const eos_ref_row *row = &eos_ref_rows[0];
+    long double plain;
+    assert_int_equal(row->n, 3);
+    long double be = backward_error(row->eos, row->t, row->p, row->omega, (long double)row->z[0], &plain);
+    assert_true(be < 1e-15L);
+    assert_true(plain > 1e-13L); /* double-rounded exact root: plain pressure error ~ 1e-12 */
+}
+
+static void contract_solve(void **state) {
+    (void)state;
+    gk_gas g = ref_gas(0.2);
+    gk_eos_result r, keep;
+    for (int k = 0; k < 3; ++k) r.z_roots[k] = GK_SENTINEL;
+    r.z = GK_SENTINEL; r.molar_volume.m3_per_mol = GK_SENTINEL; r.fugacity_coefficient = GK_SENTINEL;
+    r.root_count = -7; r.branch = GK_ROOT_STABLE;
+    keep = r;
+    gk_pressure p = {1.0e6};
+    gk_temperature t = {300.0};
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, NULL, p, t, GK_ROOT_STABLE, &r), GK_ERR_ARGUMENT);
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, &g, p, t, GK_ROOT_STABLE, NULL), GK_ERR_ARGUMENT);
+    assert_status(gk_eos_solve((gk_eos)99, &g, p, t, GK_ROOT_STABLE, &r), GK_ERR_ARGUMENT);
+    assert_status(gk_eos_solve((gk_eos)-1, &g, p, t, GK_ROOT_STABLE, &r), GK_ERR_ARGUMENT);
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, &g, p, t, (gk_root)3, &r), GK_ERR_ARGUMENT);
+    const gk_real bad[] = {0, -1, (gk_real)NAN, (gk_real)INFINITY, -(gk_real)INFINITY};
+    for (size_t i = 0; i < sizeof bad / sizeof bad[0]; ++i) {
+        gk_pressure pb = {bad[i]};
+        gk_temperature tb = {bad[i]};
+        for (int e = GK_EOS_IDEAL; e <= GK_EOS_PENG_ROBINSON; ++e) {
+            assert_status(gk_eos_solve((gk_eos)e, &g, pb, t, GK_ROOT_STABLE, &r), GK_ERR_DOMAIN);
+            assert_status(gk_eos_solve((gk_eos)e, &g, p, tb, GK_ROOT_GAS, &r), GK_ERR_DOMAIN);
+        }
+        gk_gas gb = g;
+        gb.critical_temperature.k = bad[i];
+        for (int e = GK_EOS_VAN_DER_WAALS; e <= GK_EOS_PENG_ROBINSON; ++e)
+            assert_status(gk_eos_solve((gk_eos)e, &gb, p, t, GK_ROOT_STABLE, &r), GK_ERR_DOMAIN);
+        gb = g;
+        gb.critical_pressure.pa = bad[i];
+        for (int e = GK_EOS_VAN_DER_WAALS; e <= GK_EOS_PENG_ROBINSON; ++e)
+            assert_status(gk_eos_solve((gk_eos)e, &gb, p, t, GK_ROOT_STABLE, &r), GK_ERR_DOMAIN);
+    }
+    gk_gas gw = g;
+    gw.acentric_factor = (gk_real)NAN;
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, &gw, p, t, GK_ROOT_STABLE, &r), GK_ERR_DOMAIN);
+    assert_status(gk_eos_solve(GK_EOS_SOAVE_REDLICH_KWONG, &gw, p, t, GK_ROOT_STABLE, &r), GK_ERR_DOMAIN);
+    gw = g;
+    gw.vdw_a = -1;
+    assert_status(gk_eos_solve(GK_EOS_VAN_DER_WAALS, &gw, p, t, GK_ROOT_STABLE, &r), GK_ERR_DOMAIN);
+    gw = g;
+    gw.vdw_b = (gk_real)NAN;
+    assert_status(gk_eos_solve(GK_EOS_VAN_DER_WAALS, &gw, p, t, GK_ROOT_STABLE, &r), GK_ERR_DOMAIN);
+    /* overflow: a pressure near the top of the range makes A, B overflow */
+    gk_pressure huge = {(gk_real)GK_TOL(1e300, 1e37)};
+    gk_temperature cold = {(gk_real)GK_TOL(1e-300, 1e-30)};
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, &g, huge, cold, GK_ROOT_STABLE, &r), GK_ERR_RANGE);
+    assert_memory_equal(&r, &keep, sizeof r);
+    /* ideal gas: Z = 1 exactly */
+    assert_status(gk_eos_solve(GK_EOS_IDEAL, &g, p, t, GK_ROOT_LIQUID, &r), GK_OK);
+    assert_rel(r.z, 1.0, 0.0);
+    assert_int_equal(r.root_count, 1);
+    assert_rel(r.molar_volume.m3_per_mol, 8.314462618 * 300.0 / 1.0e6, GK_TOL(1e-15, 1e-6));
+}
+
+static void contract_pressure_density(void **state) {
+    (void)state;
+    gk_gas g = ref_gas(0.2);
+    gk_pressure ps = {GK_SENTINEL};
+    gk_density ds = {GK_SENTINEL};
+    gk_molar_volume vm = {(gk_real)1e-3};
+    gk_temperature t = {300.0};
+    gk_pressure p = {1e6};
+    assert_status(gk_eos_pressure(GK_EOS_PENG_ROBINSON, NULL, vm, t, &ps), GK_ERR_ARGUMENT);
+    assert_status(gk_eos_pressure(GK_EOS_PENG_ROBINSON, &g, vm, t, NULL), GK_ERR_ARGUMENT);
+    assert_status(gk_eos_pressure((gk_eos)7, &g, vm, t, &ps), GK_ERR_ARGUMENT);
+    gk_molar_volume vbad = {(gk_real)-1e-3};
+    assert_status(gk_eos_pressure(GK_EOS_PENG_ROBINSON, &g, vbad, t, &ps), GK_ERR_DOMAIN);
+    gk_temperature tbad = {(gk_real)NAN};
+    assert_status(gk_eos_pressure(GK_EOS_PENG_ROBINSON, &g, vm, tbad, &ps), GK_ERR_DOMAIN);
+    /* at or below the covolume b = 0.0778 R Tc / Pc = 4.04e-5 m3/mol */
+    gk_molar_volume vlow = {(gk_real)4.0e-5};
+    assert_status(gk_eos_pressure(GK_EOS_PENG_ROBINSON, &g, vlow, t, &ps), GK_ERR_DOMAIN);
+    /* a liquid-like volume at low T where the model pressure is negative */
+    gk_molar_volume vneg = {(gk_real)8.0e-5};
+    gk_temperature tlow = {100.0};
+    assert_status(gk_eos_pressure(GK_EOS_PENG_ROBINSON, &g, vneg, tlow, &ps), GK_ERR_NO_SOLUTION);
+    assert_rel(ps.pa, GK_SENTINEL, 0.0);
+    /* round trip: solve at p, T then recompute p from Vm */
+    for (int e = GK_EOS_IDEAL; e <= GK_EOS_PENG_ROBINSON; ++e) {
+        gk_eos_result r;
+        assert_status(gk_eos_solve((gk_eos)e, &g, p, t, GK_ROOT_STABLE, &r), GK_OK);
+        assert_status(gk_eos_pressure((gk_eos)e, &g, r.molar_volume, t, &ps), GK_OK);
+        assert_rel(ps.pa, p.pa, GK_TOL(1e-13, 2e-5));
+    }
+    /* density: M / Vm of the stable root */
+    assert_status(gk_eos_density(GK_EOS_PENG_ROBINSON, NULL, p, t, &ds), GK_ERR_ARGUMENT);
+    assert_status(gk_eos_density(GK_EOS_PENG_ROBINSON, &g, p, t, NULL), GK_ERR_ARGUMENT);
+    gk_gas gm = g;
+    gm.molar_mass.kg_per_mol = 0;
+    assert_status(gk_eos_density(GK_EOS_PENG_ROBINSON, &gm, p, t, &ds), GK_ERR_DOMAIN);
+    gk_pressure pbad = {0};
+    assert_status(gk_eos_density(GK_EOS_PENG_ROBINSON, &g, pbad, t, &ds), GK_ERR_DOMAIN);
+    assert_rel(ds.kg_per_m3, GK_SENTINEL, 0.0);
+    gk_eos_result r;
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, &g, p, t, GK_ROOT_STABLE, &r), GK_OK);
+    assert_status(gk_eos_density(GK_EOS_PENG_ROBINSON, &g, p, t, &ds), GK_OK);
+    assert_rel(ds.kg_per_m3, 0.030 / (double)r.molar_volume.m3_per_mol, GK_TOL(1e-15, 1e-6));
+}
+
+static void batch_matches_scalar(void **state) {
+    (void)state;
+    gk_gas g = ref_gas(0.1);
+    gk_real pp[5] = {1e5, 2e6, -1, 5e6, (gk_real)NAN};
+    gk_real tt[5] = {300, 200, 300, 120, 300};
+    gk_real out[5];
+    gk_status st[5];
+    size_t ok = gk_eos_density_batch(GK_EOS_PENG_ROBINSON, &g, 5, pp, tt, out, st);
+    assert_int_equal(ok, 3);
+    for (int i = 0; i < 5; ++i) {
+        gk_density d = {GK_SENTINEL};
+        gk_pressure p = {pp[i]};
+        gk_temperature t = {tt[i]};
+        gk_status s = gk_eos_density(GK_EOS_PENG_ROBINSON, &g, p, t, &d);
+        assert_int_equal(st[i], s);
+        if (s == GK_OK) assert_rel(out[i], d.kg_per_m3, 0.0);
+        else assert_true(isnan(out[i]));
+    }
+    assert_int_equal(st[2], GK_ERR_DOMAIN);
+    /* count 0: nothing touched */
+    out[0] = GK_SENTINEL;
+    assert_int_equal(gk_eos_density_batch(GK_EOS_PENG_ROBINSON, &g, 0, NULL, NULL, out, NULL), 0);
+    assert_rel(out[0], GK_SENTINEL, 0.0);
+    /* NULL arrays with count > 0 fail every element */
+    assert_int_equal(gk_eos_density_batch(GK_EOS_PENG_ROBINSON, &g, 2, NULL, tt, out, st), 0);
+    assert_int_equal(st[0], GK_ERR_ARGUMENT);
+    assert_int_equal(st[1], GK_ERR_ARGUMENT);
+    assert_true(isnan(out[0]) && isnan(out[1]));
+    st[0] = GK_OK;
+    assert_int_equal(gk_eos_density_batch(GK_EOS_PENG_ROBINSON, &g, 1, pp, tt, NULL, st), 0);
+    assert_int_equal(st[0], GK_ERR_ARGUMENT);
+    assert_int_equal(gk_eos_density_batch(GK_EOS_PENG_ROBINSON, NULL, 2, pp, tt, out, st), 0);
+    assert_int_equal(st[1], GK_ERR_ARGUMENT);
+    assert_int_equal(gk_eos_density_batch((gk_eos)42, &g, 1, pp, tt, out, NULL), 0);
+    assert_true(isnan(out[0]));
+}
+
+int main(void) {
+    const struct CMUnitTest tests[] = {
+        cmocka_unit_test(reference_table_all_models),
+        cmocka_unit_test(reference_liquid_pressure_is_stiff),
+        cmocka_unit_test(contract_solve),
+        cmocka_unit_test(contract_pressure_density),
+        cmocka_unit_test(batch_matches_scalar),
+    };
+    return cmocka_run_group_tests_name("eos", tests, NULL, NULL);
+}
