@@ -21,6 +21,17 @@ extern "C" {
 
 /**
  * @brief gk_ideal_density() over arrays: out[i] = p[i] M / (R t[i]).
+ *
+ * Each element goes through gk_ideal_density(), so results and statuses are identical to the
+ * scalar call: GK_ERR_DOMAIN for p[i] or t[i] not finite or not > 0 (or an invalid @p m, which
+ * fails every element), GK_ERR_RANGE for overflow or underflow, GK_ERR_ARGUMENT for every
+ * element when @p p_pa, @p t_k or @p out_kg_per_m3 is NULL.
+ * @param count Number of elements (0 is fine: nothing is read or written).
+ * @param p_pa Absolute pressures in Pa.
+ * @param t_k Temperatures in K.
+ * @param m Molar mass of the gas.
+ * @param[out] out_kg_per_m3 Densities in kg/m3; NaN where an element failed.
+ * @param[out] status_out Status per element, or NULL.
  * @return Number of elements with status GK_OK.
  */
 GK_API size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk_real *t_k,

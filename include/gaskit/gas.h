@@ -28,7 +28,7 @@ typedef struct gk_gas {
     gk_real vdw_a;                        /**< van der Waals a, Pa m^6 mol^-2, handbook value; 0 = derive from Tc, Pc */
     gk_real vdw_b;                        /**< van der Waals b, m^3 mol^-1; 0 = derive from Tc, Pc */
     gk_real heat_capacity_ratio;          /**< ideal-gas cp/cv near 298 K; 0 = not known */
-    gk_real collision_diameter;           /**< hard-sphere collision diameter, m; 0 = not known */
+    gk_real collision_diameter;           /**< collision diameter (Lennard-Jones sigma from viscosity, used as a hard-sphere diameter), m; 0 = not known */
 } gk_gas;
 
 /**

@@ -18,8 +18,11 @@ extern "C" {
 
 /** @defgroup ideal Ideal gas and changes of state
  *  Every function here returns GK_ERR_ARGUMENT for a NULL output, GK_ERR_DOMAIN for an input
- *  that is not finite or not > 0, and GK_ERR_RANGE where the result would overflow; outputs
- *  are written only on GK_OK.
+ *  that is not finite or not > 0, and GK_ERR_RANGE where the result would overflow or fall
+ *  below the smallest normal number (a subnormal or zero result of positive inputs); outputs
+ *  are written only on GK_OK. Intermediate products never overflow on their own: a result
+ *  that is representable is returned (n = 1e200 mol, T = 1e200 K, V = 1e300 m3 is fine).
+ *  All quantities in SI (Pa, m3, K, mol, kg/mol, kg/m3).
  *  @{ */
 
 /**
@@ -84,8 +87,11 @@ typedef enum gk_variable {
  * other three fields of @p after; that field's old value is ignored. Holding fields equal
  * gives Boyle's law (constant n, T), Charles's law (constant n, p), Gay-Lussac's law
  * (constant n, V) and Avogadro's law (constant p, T).
+ * The result is computed as a product of ratios of like quantities (V1/V2, n2/n1, ...), so a
+ * field held equal contributes exactly 1.
  * @param before The known first state (all four fields > 0 and finite).
- * @param[in,out] after The second state; three fields are read, the unknown one written.
+ * @param[in,out] after The second state; three fields are read (each > 0 and finite), the
+ *        unknown one written (its old value may be anything, NaN included).
  * @param unknown Which field of @p after to compute.
  * @retval GK_OK           The unknown field of @p after written, nothing else changed.
  * @retval GK_ERR_ARGUMENT @p before or @p after is NULL, or @p unknown is out of range.
@@ -103,6 +109,8 @@ GK_API gk_status gk_state_change(const gk_state *before, gk_state *after, gk_var
  * @retval GK_ERR_ARGUMENT @p out is NULL.
  * @retval GK_ERR_DOMAIN   An input is not finite, @p total is not > 0, or the fraction is
  *                         outside [0, 1].
+ * @retval GK_ERR_RANGE    A fraction > 0 gives a partial pressure below the smallest normal
+ *                         number (underflow).
  */
 GK_API gk_status gk_partial_pressure(gk_pressure total, gk_real mole_fraction, gk_pressure *out);
 

@@ -5,7 +5,15 @@
  *
  * Results are engineering estimates from the chosen model; they are not a substitute for
  * pressure-equipment codes, custody-transfer standards or gas suppliers' data (see the README's
- * safety section).
+ * safety section). Methods, validity ranges and measured model errors: docs/instruments.md.
+ *
+ * Liquid states. The functions that need a gas (all but gk_fluid_z() and gk_humid_mixture())
+ * return GK_ERR_RANGE when the stable state of the model, at the line state or at the
+ * reference condition, is liquid: the stable root of two or three is the liquid branch, or a
+ * lone root below the critical temperature (for a mixture the pseudo-critical sum x_i Tc_i) is
+ * denser than the model's critical point. At or above Tc nothing is liquid (dense gases are
+ * computed). A two-phase mixture between its dew and bubble points is not detected. The ideal
+ * gas has no liquid.
  */
 #ifndef GASKIT_INSTRUMENT_H
 #define GASKIT_INSTRUMENT_H
@@ -29,6 +37,8 @@ typedef struct gk_fluid {
 
 /**
  * @brief Compressibility factor Z of the stable root of @p eos for a gas or mixture.
+ *
+ * The stable root is returned whether it is gas or liquid (no liquid check here).
  * @retval GK_OK           @p z written.
  * @retval GK_ERR_ARGUMENT @p z is NULL, @p eos out of range, or not exactly one of gas and mixture.
  * @retval Others          As gk_eos_solve() / gk_mixture_eos_solve().
@@ -37,15 +47,19 @@ GK_API gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temper
 
 /**
  * @brief Actual volume flow at p, T to the volume flow at a reference condition, with Z from
- *        @p eos at both conditions.
- * @retval As gk_fluid_z(); GK_ERR_DOMAIN for a flow that is not finite; GK_ERR_RANGE for a
- *         stable state that is liquid at either condition.
+ *        @p eos at both conditions: q_ref = q (p / p_ref)(T_ref / T)(Z_ref / Z).
+ *
+ * Any finite flow converts, also zero and negative (reverse) flow.
+ * @retval As gk_fluid_z(); GK_ERR_DOMAIN for a flow that is not finite or a reference p, T not
+ *         finite or not > 0; GK_ERR_RANGE for a stable state that is liquid at either
+ *         condition, or a result that overflows.
  */
 GK_API gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
                                       gk_temperature t, gk_reference ref, gk_volume_flow *out);
 
 /**
- * @brief Volume flow at a reference condition to the actual volume flow at p, T.
+ * @brief Volume flow at a reference condition to the actual volume flow at p, T (the inverse of
+ *        gk_flow_to_reference()).
  * @retval As gk_flow_to_reference().
  */
 GK_API gk_status gk_flow_from_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow at_reference,
@@ -61,7 +75,8 @@ GK_API gk_status gk_flow_from_reference(gk_eos eos, gk_fluid fluid, gk_volume_fl
  * gk_mass_flow() below keeps the contract's call syntax working from C and C++ source (it
  * expands only where the name is followed by '(', so the type name is unaffected).
  * Foreign callers bind the symbol gk_flow_to_mass.
- * @retval As gk_flow_to_reference().
+ * Density rho = p M / (Z R T) with M the molar mass of the gas or the mixture.
+ * @retval As gk_flow_to_reference() (liquid at p, T: GK_ERR_RANGE).
  */
 GK_API gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
                                  gk_temperature t, gk_mass_flow *out);
@@ -80,10 +95,12 @@ typedef struct gk_contents {
 /**
  * @brief Contents of a vessel of internal volume @p vessel at pressure @p p and temperature @p t.
  *
+ * amount n = p V / (Z R T), mass n M, reference_volume n Z_ref R T_ref / p_ref, z = Z.
  * Where the stable state in the vessel is liquid (a liquefied-gas cylinder), the contents do not
  * follow from pressure: GK_ERR_RANGE; such containers are weighed.
- * @retval As gk_fluid_z(); GK_ERR_DOMAIN for a vessel volume not > 0; GK_ERR_RANGE for a
- *         liquid stable state.
+ * @retval As gk_fluid_z(); GK_ERR_DOMAIN for a vessel volume (or a reference p, T) not finite
+ *         or not > 0; GK_ERR_RANGE for a liquid stable state in the vessel or at the
+ *         reference condition, or a result that overflows.
  */
 GK_API gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel, gk_pressure p,
                                     gk_temperature t, gk_reference ref, gk_contents *out);
@@ -98,6 +115,11 @@ typedef struct gk_leak {
 /**
  * @brief Leak rate of a closed test volume from a pressure-decay test, temperature-compensated
  *        through the amount n = p V / (Z R T) at start and end.
+ *
+ * mol_per_s = (n_start - n_end) / elapsed_s, mass_flow = mol_per_s M, reference_flow =
+ * mol_per_s Z_ref R T_ref / p_ref. An unchanged state gives a zero leak. The small difference
+ * of the two amounts is formed from the differences of the readings (see docs/instruments.md
+ * for its accuracy in a float build).
  * @retval GK_OK              @p out written.
  * @retval GK_ERR_NO_SOLUTION The end state holds more gas than the start (gas flowed in, or
  *                            the temperature reading is wrong).
@@ -111,8 +133,9 @@ GK_API gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volu
                                              gk_real elapsed_s, gk_reference ref, gk_leak *out);
 
 /**
- * @brief Density of a gas or mixture relative to dry air at the same pressure and temperature.
- * @retval As gk_fluid_z().
+ * @brief Density of a gas or mixture relative to dry air at the same pressure and temperature:
+ *        d = (M / M_air)(Z_air / Z), both Z from @p eos; dry air is the gas table's "air".
+ * @retval As gk_fluid_z(); GK_ERR_RANGE where the fluid or air is liquid in the model.
  */
 GK_API gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t,
                                      gk_real *out);
@@ -120,6 +143,9 @@ GK_API gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, 
 /**
  * @brief Adds water vapour at relative humidity @p relative_humidity (fraction in [0, 1]) to a
  *        dry mixture at p, T: x_w = RH p_ws(T) / p, other fractions scaled by (1 - x_w).
+ * Water is the table's "H2O", appended as the last component (also at RH 0, with fraction 0)
+ * or added to a component already present whose formula is "H2O". Below 273.16 K the vapour
+ * pressure is over ice (RH with respect to ice). @p wet may be the same object as @p dry.
  * @retval GK_OK              @p wet written (water appended, or added to an existing H2O component).
  * @retval GK_ERR_ARGUMENT    An argument is NULL.
  * @retval GK_ERR_COMPOSITION @p dry is not valid, or already holds GK_MIXTURE_MAX components.

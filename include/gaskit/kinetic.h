@@ -19,7 +19,15 @@ extern "C" {
 /** @defgroup kinetic Kinetic theory
  *  Every function here returns GK_ERR_ARGUMENT for a NULL output, GK_ERR_DOMAIN for an input
  *  that is not finite or not > 0 (unless stated otherwise), and GK_ERR_RANGE where the result
- *  would overflow; outputs are written only on GK_OK.
+ *  would overflow or fall below the smallest normal number; outputs are written only on GK_OK.
+ *  Speeds in m/s, T in K, M in kg/mol, p in Pa. Square roots are taken factor by factor, so
+ *  no intermediate overflows while the result is representable.
+ *
+ *  The heat-capacity ratio of gk_speed_of_sound_ideal() must lie in (1, 1.67]: 5/3 for a
+ *  monatomic gas (a printed 1.667 or 1.67 is accepted), 1.4 for air
+ *  and diatomic gases near room temperature. gk_mean_free_path() uses k = GK_BOLTZMANN;
+ *  collision diameters are a few 1e-10 m; it holds while the gas is dilute (mean free path
+ *  much larger than the diameter).
  *  @{ */
 
 /** @brief Root-mean-square speed sqrt(3 R T / M).
@@ -36,9 +44,10 @@ GK_API gk_status gk_speed_most_probable(gk_temperature t, gk_molar_mass m, gk_sp
 
 /**
  * @brief Speed of sound in an ideal gas, sqrt(gamma R T / M).
- * @param heat_capacity_ratio gamma = cp/cv; must be finite and in (1, 5/3].
+ * @param heat_capacity_ratio gamma = cp/cv; must be finite and in (1, 1.67] (5/3 for a monatomic ideal gas,
+ *        with room for its rounded printed forms).
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_RANGE (see the group).
- * @retval GK_ERR_DOMAIN An input is not finite, T or M not > 0, or gamma outside (1, 5/3].
+ * @retval GK_ERR_DOMAIN An input is not finite, T or M not > 0, or gamma outside (1, 1.67].
  */
 GK_API gk_status gk_speed_of_sound_ideal(gk_temperature t, gk_molar_mass m,
                                          gk_real heat_capacity_ratio, gk_speed *out);

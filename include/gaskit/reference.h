@@ -27,7 +27,8 @@ typedef enum gk_reference_id {
     GK_REF_15C_101325PA,  /**< 15 degC, 101.325 kPa (ISO 13443 natural gas) */
     GK_REF_20C_101325PA,  /**< 20 degC, 101.325 kPa */
     GK_REF_25C_101325PA,  /**< 25 degC, 101.325 kPa */
-    GK_REF_60F_14696PSI   /**< 60 degF, 14.696 psia (U.S. gas industry, common practice) */
+    GK_REF_60F_14696PSI   /**< 60 degF, 14.696 psia (U.S. gas industry, common practice):
+                               288.705556 K, 101325.353 Pa with the NIST SP 811 factors */
 } gk_reference_id;
 
 /**

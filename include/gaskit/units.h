@@ -89,15 +89,20 @@ typedef enum gk_unit {
  * @brief Converts a value between two units of the same dimension.
  *
  * Temperatures are converted as temperatures (with the offsets of the Celsius and Fahrenheit
- * scales), not as differences.
+ * scales), not as differences. Other values may be zero or negative (pressure differences,
+ * gauge readings); only the typed functions below require absolute quantities to be > 0.
+ * Factors: NIST SP 811 (2008) Appendix B, as exact ratios where SP 811 rests on an exact
+ * definition (see lib/units.c).
  * @param value Value in unit @p from; must be finite.
  * @param from  Unit of @p value.
  * @param to    Unit wanted.
  * @param[out] out Converted value.
  * @retval GK_OK            @p out written.
  * @retval GK_ERR_ARGUMENT  @p out is NULL, a unit is out of range, or the units differ in dimension.
- * @retval GK_ERR_DOMAIN    @p value is not finite, or is a temperature below absolute zero.
- * @retval GK_ERR_RANGE     The result overflows.
+ * @retval GK_ERR_DOMAIN    @p value is not finite, or is a temperature below absolute zero
+ *                          (0 K itself converts).
+ * @retval GK_ERR_RANGE     The result overflows, or a non-zero value falls below the smallest
+ *                          normal number (underflow).
  */
 GK_API gk_status gk_convert(gk_real value, gk_unit from, gk_unit to, gk_real *out);
 
@@ -108,8 +113,15 @@ GK_API gk_status gk_convert(gk_real value, gk_unit from, gk_unit to, gk_real *ou
  * "bar", "mbar", "hPa", "atm", "at", "Torr", "mmHg", "inHg", "psi", "K", "degC", "°C" (UTF-8),
  * "degF", "°F", "degR", "m3", "L", "mL", "ft3", "gal", "mol", "kmol", "lbmol", "g/mol",
  * "kg/m3", "g/L", "m/s", "km/h", "kg", "g", "lb", "m3/h", "L/min", "mL/min", "kg/h".
- * The match is exact (case matters: "mbar" is not "Mbar"). Reads @p symbol only up to its
- * terminating NUL.
+ * The match is exact (case matters: "mbar" is not "Mbar"; no spaces, no prefixes). Reads
+ * @p symbol only up to its terminating NUL.
+ *
+ * Every symbol returned by gk_unit_symbol() is accepted, and these aliases:
+ * "torr" (Torr), "kgf/cm2" (at), "psia" and "lbf/in2" (psi), "°C" and "℃" (degC),
+ * "°F" and "℉" (degF), "°R" (degR), "l" (L), "dm3" (L), "ml" and "cm3" (mL), "m^3", "ft^3",
+ * "in^3", "gal_US" (gal), "l/mol", "m^3/mol", "cm^3/mol", "kg/m^3", "g/l", "g/cm^3",
+ * "lb/ft^3", "m^3/s", "m^3/h", "l/min", "ml/min", "ft^3/min" and "cfm" (ft3/min). The
+ * UTF-8 forms are U+00B0 DEGREE SIGN followed by C, F or R, U+2103 and U+2109.
  * @param symbol NUL-terminated text.
  * @param[out] out The unit.
  * @retval GK_OK            @p out written.
@@ -120,6 +132,11 @@ GK_API gk_status gk_unit_parse(const char *symbol, gk_unit *out);
 
 /**
  * @brief The symbol of a unit.
+ *
+ * The symbols: Pa hPa kPa MPa bar mbar atm at Torr mmHg inHg psi | K degC degF degR |
+ * m3 L mL ft3 in3 gal | mol mmol kmol lbmol | kg/mol g/mol | m3/mol L/mol cm3/mol |
+ * kg/m3 g/L g/cm3 lb/ft3 | m/s km/h ft/s | kg g lb | m3/s m3/h L/min mL/min ft3/min |
+ * kg/s kg/h g/min lb/h.
  * @return Static ASCII text such as "kPa" or "degC"; "?" for a value out of range; never NULL.
  */
 GK_API const char *gk_unit_symbol(gk_unit unit);
@@ -132,7 +149,8 @@ GK_API const char *gk_unit_symbol(gk_unit unit);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a pressure unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0 Pa (absolute).
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_pressure_from(gk_real value, gk_unit unit, gk_pressure *out);
 
@@ -144,7 +162,8 @@ GK_API gk_status gk_pressure_from(gk_real value, gk_unit unit, gk_pressure *out)
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a pressure unit.
  * @retval GK_ERR_DOMAIN   The absolute pressure is not finite or not > 0 Pa (absolute).
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_pressure_to(gk_pressure p, gk_unit unit, gk_real *out);
 
@@ -158,6 +177,7 @@ GK_API gk_status gk_pressure_to(gk_pressure p, gk_unit unit, gk_real *out);
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a pressure unit.
  * @retval GK_ERR_DOMAIN   An input is not finite, @p ambient is not > 0, or the absolute
  *                         pressure would not be > 0.
+ * @retval GK_ERR_RANGE    The reading overflows in Pa (or underflows below the normal range).
  */
 GK_API gk_status gk_pressure_from_gauge(gk_real value, gk_unit unit, gk_pressure ambient,
                                         gk_pressure *out);
@@ -170,7 +190,8 @@ GK_API gk_status gk_pressure_from_gauge(gk_real value, gk_unit unit, gk_pressure
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a temperature unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite or below absolute zero (not > 0 K).
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_temperature_from(gk_real value, gk_unit unit, gk_temperature *out);
 
@@ -182,7 +203,8 @@ GK_API gk_status gk_temperature_from(gk_real value, gk_unit unit, gk_temperature
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a temperature unit.
  * @retval GK_ERR_DOMAIN   The thermodynamic temperature is not finite or below absolute zero (not > 0 K).
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_temperature_to(gk_temperature t, gk_unit unit, gk_real *out);
 
@@ -194,7 +216,8 @@ GK_API gk_status gk_temperature_to(gk_temperature t, gk_unit unit, gk_real *out)
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_volume_from(gk_real value, gk_unit unit, gk_volume *out);
 
@@ -206,7 +229,8 @@ GK_API gk_status gk_volume_from(gk_real value, gk_unit unit, gk_volume *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume unit.
  * @retval GK_ERR_DOMAIN   The volume is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_volume_to(gk_volume v, gk_unit unit, gk_real *out);
 
@@ -218,7 +242,8 @@ GK_API gk_status gk_volume_to(gk_volume v, gk_unit unit, gk_real *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a amount unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_amount_from(gk_real value, gk_unit unit, gk_amount *out);
 
@@ -230,7 +255,8 @@ GK_API gk_status gk_amount_from(gk_real value, gk_unit unit, gk_amount *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a amount unit.
  * @retval GK_ERR_DOMAIN   The amount of substance is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_amount_to(gk_amount n, gk_unit unit, gk_real *out);
 
@@ -242,7 +268,8 @@ GK_API gk_status gk_amount_to(gk_amount n, gk_unit unit, gk_real *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar mass unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_molar_mass_from(gk_real value, gk_unit unit, gk_molar_mass *out);
 
@@ -254,7 +281,8 @@ GK_API gk_status gk_molar_mass_from(gk_real value, gk_unit unit, gk_molar_mass *
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar mass unit.
  * @retval GK_ERR_DOMAIN   The molar mass is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_molar_mass_to(gk_molar_mass m, gk_unit unit, gk_real *out);
 
@@ -266,7 +294,8 @@ GK_API gk_status gk_molar_mass_to(gk_molar_mass m, gk_unit unit, gk_real *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar volume unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_molar_volume_from(gk_real value, gk_unit unit, gk_molar_volume *out);
 
@@ -278,7 +307,8 @@ GK_API gk_status gk_molar_volume_from(gk_real value, gk_unit unit, gk_molar_volu
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar volume unit.
  * @retval GK_ERR_DOMAIN   The molar volume is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_molar_volume_to(gk_molar_volume vm, gk_unit unit, gk_real *out);
 
@@ -290,7 +320,8 @@ GK_API gk_status gk_molar_volume_to(gk_molar_volume vm, gk_unit unit, gk_real *o
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a density unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_density_from(gk_real value, gk_unit unit, gk_density *out);
 
@@ -302,7 +333,8 @@ GK_API gk_status gk_density_from(gk_real value, gk_unit unit, gk_density *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a density unit.
  * @retval GK_ERR_DOMAIN   The mass density is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_density_to(gk_density rho, gk_unit unit, gk_real *out);
 
@@ -314,7 +346,8 @@ GK_API gk_status gk_density_to(gk_density rho, gk_unit unit, gk_real *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a speed unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite.
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_speed_from(gk_real value, gk_unit unit, gk_speed *out);
 
@@ -326,7 +359,8 @@ GK_API gk_status gk_speed_from(gk_real value, gk_unit unit, gk_speed *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a speed unit.
  * @retval GK_ERR_DOMAIN   The speed is not finite.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_speed_to(gk_speed u, gk_unit unit, gk_real *out);
 
@@ -338,7 +372,8 @@ GK_API gk_status gk_speed_to(gk_speed u, gk_unit unit, gk_real *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_mass_from(gk_real value, gk_unit unit, gk_mass *out);
 
@@ -350,7 +385,8 @@ GK_API gk_status gk_mass_from(gk_real value, gk_unit unit, gk_mass *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass unit.
  * @retval GK_ERR_DOMAIN   The mass is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_mass_to(gk_mass mass, gk_unit unit, gk_real *out);
 
@@ -362,7 +398,8 @@ GK_API gk_status gk_mass_to(gk_mass mass, gk_unit unit, gk_real *out);
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume flow unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite.
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_volume_flow_from(gk_real value, gk_unit unit, gk_volume_flow *out);
 
@@ -374,7 +411,8 @@ GK_API gk_status gk_volume_flow_from(gk_real value, gk_unit unit, gk_volume_flow
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume flow unit.
  * @retval GK_ERR_DOMAIN   The volume flow rate is not finite.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_volume_flow_to(gk_volume_flow q, gk_unit unit, gk_real *out);
 
@@ -386,7 +424,8 @@ GK_API gk_status gk_volume_flow_to(gk_volume_flow q, gk_unit unit, gk_real *out)
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass flow unit.
  * @retval GK_ERR_DOMAIN   @p value is not finite.
- * @retval GK_ERR_RANGE    The SI value overflows.
+ * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_mass_flow_from(gk_real value, gk_unit unit, gk_mass_flow *out);
 
@@ -398,7 +437,8 @@ GK_API gk_status gk_mass_flow_from(gk_real value, gk_unit unit, gk_mass_flow *ou
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass flow unit.
  * @retval GK_ERR_DOMAIN   The mass flow rate is not finite.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
+ *                         smallest normal number.
  */
 GK_API gk_status gk_mass_flow_to(gk_mass_flow w, gk_unit unit, gk_real *out);
 

@@ -5,6 +5,9 @@
  * Over liquid water: the saturation line of IAPWS-IF97 (region 4), 273.15 K to 647.096 K.
  * Over ice: the sublimation equation of IAPWS R14-08 (2011), 200 K to 273.16 K in gaskit.
  * The two curves meet at the triple point, 273.16 K and 611.657 Pa.
+ * Accuracy against the published equations (measured over the whole range): double builds
+ * ~1e-14 relative; float builds 4.4e-6 in pressure and 1.2e-6 in temperature (see
+ * docs/instruments.md).
  */
 #ifndef GASKIT_WATER_H
 #define GASKIT_WATER_H
