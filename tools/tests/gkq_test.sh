@@ -174,6 +174,14 @@ case_water() {
     near "dry-gas pressure" "$(kv p_dry "$OUT")" "$(awk 'BEGIN{printf "%.10g", 101325-3536.58941}')" "$LOOSE"
     run dew 1atm 300K 0.5; ok dew
     near "water at 50 %" "$(kv p_water "$OUT")" 1768.294705 "$LOOSE"
+    # over ice below the triple point: IAPWS R14-08 (2011) sublimation equation, evaluated here
+    # from its published coefficients (check-values.md)
+    run water -10degC; ok water
+    [ "$(kv phase "$OUT")" = ice ] || fail "phase at -10 degC: $(kv phase "$OUT")"
+    near "p_subl(263.15 K)" "$(kv p_sat "$OUT")" "$(awk 'BEGIN {
+        th = 263.15 / 273.16;
+        s = -0.212144006e2 * th^0.333333333e-2 + 0.273203819e2 * th^0.120666667e1 - 0.610598130e1 * th^0.170333333e1;
+        printf "%.12g", 611.657 * exp(s / th) }')" "$LOOSE"
     must_fail 1 "validity range" water 700K
     must_fail 1 "outside the physical domain" dew 1atm 20degC 150%
 }
@@ -196,6 +204,9 @@ case_contents() {
     run -m ideal -R 15C contents N2 50L 200bar 15degC; ok contents
     near "volume at 15 degC" "$(kv reference_volume "$OUT")" \
         "$(awk 'BEGIN{printf "%.12g", 0.05*200e5/101325}')" "$REL"
+    # a reference condition given as PRESSURE@TEMPERATURE, and the explicit absolute mark _a
+    run -m ideal -R 1bar@20degC contents N2 50L 200bar_a 20degC; ok contents
+    near "volume at 1 bar, 20 degC" "$(kv reference_volume "$OUT")" 10 "$REL"
     # gauge pressure with a stated barometer
     run -m ideal -b 1000hPa contents N2 10L 1bar_g 0degC; ok contents
     near "gauge contents" "$(kv p "$OUT")" 200000 "$REL"
