@@ -536,6 +536,53 @@ static void domain_errors(void **state) {
     assert_untouched(l.reference_flow.m3_per_s);
 }
 
+/* Wide-range sweep (deterministic pseudo-random states, 10 Pa ... 1e9 Pa, 1 K ... 3000 K, every
+   model, gas and mixture): a GK_OK result is always finite and positive, and any other status
+   is one of the documented ones. */
+static unsigned long lcg_state = 12345u;
+static double lcg_uniform(void) {
+    /* Numerical Recipes' 32-bit LCG constants (common practice); good enough for a sweep */
+    lcg_state = (lcg_state * 1664525u + 1013904223u) & 0xffffffffu;
+    return (double)lcg_state / 4294967296.0;
+}
+
+static void wide_range_sweep(void **state) {
+    (void)state;
+    gk_mixture m;
+    assert_status(gk_mixture_parse("CH4=0.9, C2H6=0.05, CO2=0.02, N2=0.03", &m), GK_OK);
+    const gk_fluid fluids[] = {pure("N2"), pure("CO2"), pure("H2O"), pure("He"), {NULL, &m, NULL}};
+    const gk_reference ref = ref_of(GK_REF_15C_101325PA);
+    for (int i = 0; i < 400; ++i) {
+        const gk_pressure p = PA(pow(10.0, 1.0 + 8.0 * lcg_uniform()));
+        const gk_pressure p2 = PA((double)p.pa * (0.9 + 0.1 * lcg_uniform()));
+        const gk_temperature t = KEL(pow(10.0, 3.5 * lcg_uniform()));
+        for (size_t k = 0; k < sizeof fluids / sizeof fluids[0]; ++k) {
+            for (int e = (int)GK_EOS_IDEAL; e <= (int)GK_EOS_PENG_ROBINSON; ++e) {
+                gk_contents c;
+                gk_status s = gk_vessel_contents((gk_eos)e, fluids[k], M3(0.05), p, t, ref, &c);
+                assert_true(s == GK_OK || s == GK_ERR_RANGE || s == GK_ERR_NO_SOLUTION);
+                if (s == GK_OK) {
+                    assert_true(isfinite(c.amount.mol) && c.amount.mol > 0);
+                    assert_true(isfinite(c.mass.kg) && c.mass.kg > 0);
+                    assert_true(isfinite(c.reference_volume.m3) && c.reference_volume.m3 > 0);
+                    assert_true(isfinite(c.z) && c.z > 0);
+                }
+                gk_leak l;
+                s = gk_leak_rate_pressure_decay((gk_eos)e, fluids[k], M3(0.05), p, t, p2, t, RV(10.0), ref, &l);
+                assert_true(s == GK_OK || s == GK_ERR_RANGE || s == GK_ERR_NO_SOLUTION);
+                if (s == GK_OK) {
+                    assert_true(isfinite(l.mol_per_s) && l.mol_per_s >= 0);
+                    assert_true(isfinite(l.mass_flow.kg_per_s) && isfinite(l.reference_flow.m3_per_s));
+                }
+                gk_real d;
+                s = gk_relative_density((gk_eos)e, fluids[k], p, t, &d);
+                assert_true(s == GK_OK || s == GK_ERR_RANGE || s == GK_ERR_NO_SOLUTION);
+                if (s == GK_OK) assert_true(isfinite(d) && d > 0);
+            }
+        }
+    }
+}
+
 int main(void) {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(fluid_z_values),
@@ -554,6 +601,7 @@ int main(void) {
         cmocka_unit_test(humid_mixture_errors),
         cmocka_unit_test(fluid_argument_errors),
         cmocka_unit_test(domain_errors),
+        cmocka_unit_test(wide_range_sweep),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
