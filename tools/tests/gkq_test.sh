@@ -308,6 +308,16 @@ case_robust() {
     [ "$outrows" -eq $((rows - skipped)) ] || fail "robust batch: $outrows rows out of $rows in ($skipped skipped)"
     grep -q '^1,parse,"*line too long' "$TMP/out" || fail "overlong line not reported as parse error"
     grep -q '^203,ok,' "$TMP/out" || fail "good row after garbage lost"
+    # a NUL byte inside a line: that row is a parse error, the next row is kept
+    printf 'N2,1\000bar,20degC\nN2,1bar,20degC\n' | "$GKQ" batch state >"$TMP/out" 2>/dev/null
+    grep -q '^1,parse,' "$TMP/out" || fail "NUL byte row not reported"
+    grep -q '^2,ok,' "$TMP/out" || fail "row after a NUL byte lost"
+    # a line of exactly 1024 bytes is read; 1025 bytes is too long, and the next row survives
+    awk 'BEGIN { s = "N2,1bar,20degC,"; while (length(s) < 1024) s = s " "; print s;
+                 print s "x"; print "N2,1bar,20degC" }' | "$GKQ" batch state >"$TMP/out" 2>/dev/null
+    grep -q '^1,ok,' "$TMP/out" || fail "1024-byte line not read"
+    grep -q '^2,parse,"*line too long' "$TMP/out" || fail "1025-byte line not reported"
+    grep -q '^3,ok,' "$TMP/out" || fail "row after an overlong line lost"
     # overlong arguments on the command line
     long=$(awk 'BEGIN { s = ""; for (i = 0; i < 5000; i++) s = s "x"; print s }')
     "$GKQ" state "$long" 1bar 20degC >/dev/null 2>&1; rc=$?
