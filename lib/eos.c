@@ -249,10 +249,14 @@ gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
     return GK_OK;
 }
 
+/* Largest A and B for the series start of the gas root (its error, ~A (A + B)^2, then stays
+   below ~1e-3, inside the region where one or two Halley steps reach full precision). */
+#define EOS_GUESS_MAX GK_LIT(0.1)
+
 gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
                            gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
-    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm;
-    int n, pick;
+    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm, guess, lnphi = GK_LIT(0.0);
+    int n, pick, have_lnphi = 0;
     gk_root branch;
 
     switch (family) {
@@ -265,7 +269,12 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
     c1 = a - b * (u + (u - w) * b);
     c0 = -b * (a + w * b * (GK_LIT(1.0) + b));
 
-    n = gk__cubic_roots(c2, c1, c0, b, GK_LIT(1.0) + b, zr);
+    /* small A and B: Z = 1 + B - A - A^2 + A B (2 + u) + O(A (A + B)^2) (expansion of
+       Z = 1 + B - A (Z - B)/D(Z) about Z = 1) is a start for the gas root without a division */
+    guess = (a < EOS_GUESS_MAX && b < EOS_GUESS_MAX)
+                ? GK_LIT(1.0) + b - a * (GK_LIT(1.0) + a) + a * b * (GK_LIT(2.0) + u)
+                : GK_LIT(0.0);
+    n = gk__cubic_roots(c2, c1, c0, b, GK_LIT(1.0) + b, guess, zr);
     if (n < 0) return GK_ERR_RANGE;
     if (n == 0) return GK_ERR_NO_SOLUTION;
 
@@ -283,13 +292,14 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
         gk_real lg = eos_lnphi(family, a, b, zr[n - 1]);
         gk_real ll = eos_lnphi(family, a, b, zr[0]);
         if (ll < lg) {
-            pick = 0; branch = GK_ROOT_LIQUID;
+            pick = 0; branch = GK_ROOT_LIQUID; lnphi = ll;
         } else {
-            pick = n - 1; branch = GK_ROOT_GAS;
+            pick = n - 1; branch = GK_ROOT_GAS; lnphi = lg;
         }
+        have_lnphi = 1;
     }
     zsel = zr[pick];
-    phi = eos_phi(family, a, b, zsel);
+    phi = have_lnphi ? gk_exp(lnphi) : eos_phi(family, a, b, zsel);
     vm = zsel * (GK_R * t / p);
     if (!gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
 

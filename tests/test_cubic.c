@@ -42,7 +42,7 @@ static void known_roots(void **state) {
         double c0 = -k->r[0] * k->r[1] * k->r[2];
         gk_real z[3] = {GK_SENTINEL, GK_SENTINEL, GK_SENTINEL};
         int n = gk__cubic_roots((gk_real)c2, (gk_real)c1, (gk_real)c0, (gk_real)k->lo,
-                                (gk_real)k->lo, z);
+                                (gk_real)k->lo, 0, z);
         assert_int_equal(n, k->count);
         int first = 3 - k->count;
         for (int j = 0; j < k->count; ++j)
@@ -55,14 +55,14 @@ static void known_roots(void **state) {
 static void one_real_root(void **state) {
     (void)state;
     gk_real z[3];
-    assert_int_equal(gk__cubic_roots(-2, 1, -2, -10, -10, z), 1);
+    assert_int_equal(gk__cubic_roots(-2, 1, -2, -10, -10, 0, z), 1);
     assert_rel(z[0], 2.0, GK_TOL(4e-16, 2e-7));
-    assert_int_equal(gk__cubic_roots(0, 0, -1, -10, -10, z), 1);
+    assert_int_equal(gk__cubic_roots(0, 0, -1, -10, -10, 0, z), 1);
     assert_rel(z[0], 1.0, GK_TOL(4e-16, 2e-7));
-    assert_int_equal(gk__cubic_roots((gk_real)0.5, (gk_real)0.5, (gk_real)-0.5, 0, 0, z), 1);
+    assert_int_equal(gk__cubic_roots((gk_real)0.5, (gk_real)0.5, (gk_real)-0.5, 0, 0, 0, z), 1);
     assert_rel(z[0], 0.5, GK_TOL(4e-16, 2e-7));
     /* with a known upper bound hi: the same answers */
-    assert_int_equal(gk__cubic_roots(-2, 1, -2, 0, 5, z), 1);
+    assert_int_equal(gk__cubic_roots(-2, 1, -2, 0, 5, 0, z), 1);
     assert_rel(z[0], 2.0, GK_TOL(4e-16, 2e-7));
 }
 
@@ -71,23 +71,23 @@ static void one_real_root(void **state) {
 static void triple_and_double_roots(void **state) {
     (void)state;
     gk_real z[3];
-    int n = gk__cubic_roots((gk_real)-1.125, (gk_real)0.421875, (gk_real)-0.052734375, 0, 0, z);
+    int n = gk__cubic_roots((gk_real)-1.125, (gk_real)0.421875, (gk_real)-0.052734375, 0, 0, 0, z);
     assert_int_equal(n, 1);
     assert_rel(z[0], 0.375, GK_TOL(1e-15, 1e-6)); /* exact data: the inflection point is the root */
     /* perturbed triple root: (z - 3/8)^3 - 1e-12 has one real root 3/8 + 1e-4. Its condition:
        f'(root) = 3e-8 while f is evaluated to about u * 0.2, so about 1e-9 relative is the limit
        (float: c0 cannot hold the perturbation; the root moves by up to cbrt(3e-9) ~ 1.4e-3). */
-    n = gk__cubic_roots((gk_real)-1.125, (gk_real)0.421875, (gk_real)(-0.052734375 - 1e-12), 0, 1, z);
+    n = gk__cubic_roots((gk_real)-1.125, (gk_real)0.421875, (gk_real)(-0.052734375 - 1e-12), 0, 1, 0, z);
     assert_int_equal(n, 1);
     assert_rel(z[0], 0.375 + 1e-4, GK_TOL(3e-9, 1e-2));
     /* (z - 1)^2 (z - 2) = z^3 - 4 z^2 + 5 z - 2: the double root is found exactly here (f is 0 at
        the critical point 1), so the count is 2 */
-    n = gk__cubic_roots(-4, 5, -2, 0, 0, z);
+    n = gk__cubic_roots(-4, 5, -2, 0, 0, 0, z);
     assert_int_equal(n, 2);
     assert_rel(z[0], 1.0, GK_TOL(1.5e-8, 1e-3));
     assert_rel(z[1], 2.0, GK_TOL(4e-16, 2e-7));
     /* (z - 0.5)(z - 2)^2: double root on the large side */
-    n = gk__cubic_roots(-4.5, 6, -2, 0, 0, z);
+    n = gk__cubic_roots(-4.5, 6, -2, 0, 0, 0, z);
     assert_int_equal(n, 2);
     assert_rel(z[0], 0.5, GK_TOL(4e-16, 2e-7));
     assert_rel(z[1], 2.0, GK_TOL(1.5e-8, 1e-3));
@@ -100,13 +100,13 @@ static void scaled_inputs(void **state) {
     const double s = GK_TOL(0x1p100, 0x1p30); /* 2^100 (double) or 2^30 (float) */
     const double t = 1.0 / s;
     /* roots s, 2s, 3s */
-    int n = gk__cubic_roots((gk_real)(-6 * s), (gk_real)(11 * s * s), (gk_real)(-6 * s * s * s), 0, 0, z);
+    int n = gk__cubic_roots((gk_real)(-6 * s), (gk_real)(11 * s * s), (gk_real)(-6 * s * s * s), 0, 0, 0, z);
     assert_int_equal(n, 3);
     assert_rel(z[0], s, GK_TOL(4e-16, 2e-6));
     assert_rel(z[1], 2 * s, GK_TOL(4e-16, 2e-6));
     assert_rel(z[2], 3 * s, GK_TOL(4e-16, 2e-6));
     /* roots t, 2t, 3t */
-    n = gk__cubic_roots((gk_real)(-6 * t), (gk_real)(11 * t * t), (gk_real)(-6 * t * t * t), 0, 0, z);
+    n = gk__cubic_roots((gk_real)(-6 * t), (gk_real)(11 * t * t), (gk_real)(-6 * t * t * t), 0, 0, 0, z);
     assert_int_equal(n, 3);
     assert_rel(z[0], t, GK_TOL(4e-16, 2e-6));
     assert_rel(z[2], 3 * t, GK_TOL(4e-16, 2e-6));
@@ -124,7 +124,7 @@ static void small_liquid_root(void **state) {
     double a = 0.45724 * s * s * pr / (tr * tr), b = 0.0778 * pr / tr;
     gk_real z[3];
     int n = gk__cubic_roots((gk_real)(-(1.0 - b)), (gk_real)(a - b * (2.0 + 3.0 * b)),
-                            (gk_real)(-b * (a - b * (1.0 + b))), (gk_real)b, (gk_real)(1.0 + b), z);
+                            (gk_real)(-b * (a - b * (1.0 + b))), (gk_real)b, (gk_real)(1.0 + b), 0, z);
     assert_int_equal(n, 3);
     /* backward check in long double: each root is a root of the double-rounded cubic */
     for (int k = 0; k < 3; ++k) {
@@ -142,9 +142,9 @@ static void small_liquid_root(void **state) {
 static void invalid_inputs(void **state) {
     (void)state;
     gk_real z[3] = {GK_SENTINEL, GK_SENTINEL, GK_SENTINEL};
-    assert_int_equal(gk__cubic_roots((gk_real)NAN, 1, 1, 0, 0, z), -1);
-    assert_int_equal(gk__cubic_roots(1, (gk_real)INFINITY, 1, 0, 0, z), -1);
-    assert_int_equal(gk__cubic_roots(1, 1, 1, (gk_real)NAN, 0, z), -1);
+    assert_int_equal(gk__cubic_roots((gk_real)NAN, 1, 1, 0, 0, 0, z), -1);
+    assert_int_equal(gk__cubic_roots(1, (gk_real)INFINITY, 1, 0, 0, 0, z), -1);
+    assert_int_equal(gk__cubic_roots(1, 1, 1, (gk_real)NAN, 0, 0, z), -1);
     assert_rel(z[0], GK_SENTINEL, 0.0);
     assert_rel(z[2], GK_SENTINEL, 0.0);
 }

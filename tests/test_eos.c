@@ -130,7 +130,9 @@ static void reference_liquid_pressure_is_stiff(void **state) {
     assert_int_equal(row->n, 3);
     long double be = backward_error(row->eos, row->t, row->p, row->omega, (long double)row->z[0], &plain);
     assert_true(be < 1e-15L);
-    assert_true(plain > 1e-13L); /* double-rounded exact root: plain pressure error ~ 1e-12 */
+    /* the correctly rounded root gives a plain pressure error of 8.1e-12 (mpmath): |V dp/dV|/p is
+       1.8e5 for this liquid, so one rounding of Z moves p by ~ 1e-11 */
+    assert_true(plain > 1e-12L);
 }
 
 /* Published worked example: n-butane at 350 K and 9.4573 bar (its vapour pressure), saturated
