@@ -15,12 +15,8 @@
 #include <stdlib.h>
 #include <string.h>
 #include "gaskit/gaskit.h"
-#include "gk_available.h"
 
 int LLVMFuzzerTestOneInput(const uint8_t *data, size_t size);
-
-/* Helpers some targets use only once the matching module is in lib/. */
-#define FZ_UNUSED __attribute__((unused))
 
 static inline void fz_fail(const char *what, const char *file, int line) {
     fprintf(stderr, "gaskit fuzz finding at %s:%d: %s\n", file, line, what);

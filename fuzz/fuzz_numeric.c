@@ -6,7 +6,7 @@
  * are raw gk_real bit patterns (NaN, Inf, subnormals, negative zero, huge values ...).
  * Every GK_OK result must be finite and physical (pressures, temperatures, volumes, amounts,
  * densities, speeds, Z and fugacity coefficients > 0); every failure must leave the output
- * untouched. Families whose functions lib/ does not implement yet are skipped (gk_available.h).
+ * untouched.
  */
 #include "fuzz_common.h"
 
@@ -15,7 +15,7 @@
 
 #define SENT GK_REAL_C(-7777.0)
 /* Output untouched after a failure. */
-FZ_UNUSED static int fz_untouched(gk_real x) {
+static int fz_untouched(gk_real x) {
     gk_real sentinel = SENT;
     return memcmp(&x, &sentinel, sizeof sentinel) == 0;
 }
@@ -31,18 +31,13 @@ FZ_UNUSED static int fz_untouched(gk_real x) {
         else { FZ_UNTOUCHED(out.field); }                \
     } while (0)
 
-FZ_UNUSED static const gk_gas *pick_gas(fz_reader *r) {
-#if GK_HAVE_GK_GAS_AT && GK_HAVE_GK_GAS_COUNT
+static const gk_gas *pick_gas(fz_reader *r) {
     size_t n = gk_gas_count();
     unsigned b = fz_byte(r);
     return n > 0 ? gk_gas_at((size_t)b % n) : NULL;
-#else
-    (void)r;
-    return NULL;
-#endif
 }
 
-FZ_UNUSED static void check_eos_result(gk_status s, const gk_eos_result *res, const gk_eos_result *before) {
+static void check_eos_result(gk_status s, const gk_eos_result *res, const gk_eos_result *before) {
     FZ_STATUS(s);
     if (s != GK_OK) {
         FZ_REQUIRE(memcmp(res, before, sizeof *res) == 0);
@@ -60,11 +55,7 @@ static void fuzz_units(fz_reader *r) {
     gk_unit a = FZ_ENUM(r, gk_unit, GK_UNIT_COUNT - 1);
     gk_unit b = FZ_ENUM(r, gk_unit, GK_UNIT_COUNT - 1);
     gk_real v = fz_real(r);
-    (void)a; (void)b; (void)v;
-#if GK_HAVE_GK_CONVERT
     { struct { gk_real x; } o; FZ_CALL(gk_convert(v, a, b, &o.x), o, x, FZ_FINITE); }
-#endif
-#if GK_HAVE_GK_PRESSURE_FROM
     { gk_pressure o; FZ_CALL(gk_pressure_from(v, a, &o), o, pa, FZ_POSITIVE); }
     { gk_temperature o; FZ_CALL(gk_temperature_from(v, a, &o), o, k, FZ_POSITIVE); }
     { gk_volume o; FZ_CALL(gk_volume_from(v, a, &o), o, m3, FZ_POSITIVE); }
@@ -81,8 +72,6 @@ static void fuzz_units(fz_reader *r) {
         gk_pressure o;
         FZ_CALL(gk_pressure_from_gauge(v, a, amb, &o), o, pa, FZ_POSITIVE);
     }
-#endif
-#if GK_HAVE_GK_PRESSURE_TO
     {
         struct { gk_real x; } o;
         gk_pressure p = { v };
@@ -92,7 +81,6 @@ static void fuzz_units(fz_reader *r) {
         FZ_CALL(gk_temperature_to(t, b, &o.x), o, x, FZ_FINITE);
         FZ_CALL(gk_volume_to(vol, b, &o.x), o, x, FZ_POSITIVE);
     }
-#endif
 }
 
 static void fuzz_ideal(fz_reader *r) {
@@ -102,8 +90,6 @@ static void fuzz_ideal(fz_reader *r) {
     gk_amount n = { fz_real(r) };
     gk_molar_mass m = { fz_real(r) };
     gk_real x = fz_real(r);
-    (void)p; (void)t; (void)v; (void)n; (void)m; (void)x;
-#if GK_HAVE_GK_IDEAL_PRESSURE
     { gk_pressure o; FZ_CALL(gk_ideal_pressure(n, t, v, &o), o, pa, FZ_POSITIVE); }
     { gk_volume o; FZ_CALL(gk_ideal_volume(n, t, p, &o), o, m3, FZ_POSITIVE); }
     { gk_amount o; FZ_CALL(gk_ideal_amount(p, v, t, &o), o, mol, FZ_POSITIVE); }
@@ -115,11 +101,7 @@ static void fuzz_ideal(fz_reader *r) {
         gk_molar_mass o;
         FZ_CALL(gk_ideal_molar_mass(rho, p, t, &o), o, kg_per_mol, FZ_POSITIVE);
     }
-#endif
-#if GK_HAVE_GK_PARTIAL_PRESSURE
     { gk_pressure o; FZ_CALL(gk_partial_pressure(p, x, &o), o, pa, FZ_NONNEG); }
-#endif
-#if GK_HAVE_GK_STATE_CHANGE
     {
         gk_state before = { p, v, t, n };
         gk_state after = { { fz_real(r) }, { fz_real(r) }, { fz_real(r) }, { fz_real(r) } };
@@ -136,7 +118,6 @@ static void fuzz_ideal(fz_reader *r) {
             FZ_REQUIRE(memcmp(&after, &copy, sizeof after) == 0);
         }
     }
-#endif
 }
 
 static void fuzz_kinetic(fz_reader *r) {
@@ -145,8 +126,6 @@ static void fuzz_kinetic(fz_reader *r) {
     gk_molar_mass m2 = { fz_real(r) };
     gk_pressure p = { fz_real(r) };
     gk_real x = fz_real(r);
-    (void)t; (void)m; (void)m2; (void)p; (void)x;
-#if GK_HAVE_GK_SPEED_RMS
     { gk_speed o; FZ_CALL(gk_speed_rms(t, m, &o), o, m_per_s, FZ_POSITIVE); }
     { gk_speed o; FZ_CALL(gk_speed_mean(t, m, &o), o, m_per_s, FZ_POSITIVE); }
     { gk_speed o; FZ_CALL(gk_speed_most_probable(t, m, &o), o, m_per_s, FZ_POSITIVE); }
@@ -155,7 +134,6 @@ static void fuzz_kinetic(fz_reader *r) {
     { gk_molar_mass o; FZ_CALL(gk_effusion_molar_mass(m, x, &o), o, kg_per_mol, FZ_POSITIVE); }
     { struct { gk_real v; } o; FZ_CALL(gk_mean_free_path(p, t, x, &o.v), o, v, FZ_POSITIVE); }
     { struct { gk_real v; } o; FZ_CALL(gk_wall_flux(p, t, m, &o.v), o, v, FZ_POSITIVE); }
-#endif
 }
 
 static void fuzz_vdw(fz_reader *r) {
@@ -165,8 +143,6 @@ static void fuzz_vdw(fz_reader *r) {
     gk_temperature t = { fz_real(r) };
     gk_pressure p = { fz_real(r) };
     gk_root root = FZ_ENUM(r, gk_root, GK_ROOT_LIQUID);
-    (void)c; (void)n; (void)v; (void)t; (void)p; (void)root;
-#if GK_HAVE_GK_VDW_FROM_CRITICAL
     {
         gk_vdw o = { SENT, SENT };
         gk_status s = gk_vdw_from_critical(t, p, &o);
@@ -180,7 +156,6 @@ static void fuzz_vdw(fz_reader *r) {
         gk_volume o;
         FZ_CALL(gk_vdw_volume(c, n, p, t, root, &o), o, m3, FZ_POSITIVE);
     }
-#endif
 }
 
 static void fuzz_eos(fz_reader *r) {
@@ -190,8 +165,6 @@ static void fuzz_eos(fz_reader *r) {
     gk_pressure p = { fz_real(r) };
     gk_temperature t = { fz_real(r) };
     gk_molar_volume vm = { fz_real(r) };
-    (void)eos; (void)root; (void)gas; (void)p; (void)t; (void)vm;
-#if GK_HAVE_GK_EOS_SOLVE
     {
         gk_eos_result res, before;
         memset(&res, 0x5A, sizeof res);
@@ -200,8 +173,6 @@ static void fuzz_eos(fz_reader *r) {
     }
     { gk_pressure o; FZ_CALL(gk_eos_pressure(eos, gas, vm, t, &o), o, pa, FZ_POSITIVE); }
     { gk_density o; FZ_CALL(gk_eos_density(eos, gas, p, t, &o), o, kg_per_m3, FZ_POSITIVE); }
-#endif
-#if GK_HAVE_GK_EOS_DENSITY_BATCH
     {
         gk_real ps[4], ts[4], out[4];
         gk_status st[4];
@@ -215,7 +186,6 @@ static void fuzz_eos(fz_reader *r) {
         }
         FZ_REQUIRE(ok == counted);
     }
-#endif
 }
 
 static void fuzz_mixture(fz_reader *r) {
@@ -223,8 +193,6 @@ static void fuzz_mixture(fz_reader *r) {
     gk_root root = FZ_ENUM(r, gk_root, GK_ROOT_LIQUID);
     gk_pressure p = { fz_real(r) };
     gk_temperature t = { fz_real(r) };
-    (void)eos; (void)root; (void)p; (void)t;
-#if GK_HAVE_GK_GAS_AT && GK_HAVE_GK_GAS_COUNT && GK_HAVE_GK_MIXTURE_EOS_SOLVE
     {
         /* Up to 4 components from the table with raw fractions (normalised or not). */
         gk_mixture mix;
@@ -234,14 +202,12 @@ static void fuzz_mixture(fz_reader *r) {
             mix.gas[i] = pick_gas(r);
             mix.mole_fraction[i] = fz_real(r);
         }
-#if GK_HAVE_GK_MIXTURE_NORMALIZE
         if (fz_byte(r) & 1u) {
             gk_mixture copy = mix;
             gk_status s = gk_mixture_normalize(&mix);
             FZ_STATUS(s);
             if (s != GK_OK) FZ_REQUIRE(memcmp(&mix, &copy, sizeof mix) == 0);
         }
-#endif
         gk_real kij[16];
         int use_kij = (int)(fz_byte(r) & 1u);
         for (int i = 0; i < 16; ++i) kij[i] = fz_real(r);
@@ -250,38 +216,23 @@ static void fuzz_mixture(fz_reader *r) {
         before = res;
         check_eos_result(gk_mixture_eos_solve(eos, &mix, use_kij ? kij : NULL, p, t, root, &res),
                          &res, &before);
-#if GK_HAVE_GK_MIXTURE_MOLAR_MASS
         { gk_molar_mass o; FZ_CALL(gk_mixture_molar_mass(&mix, &o), o, kg_per_mol, FZ_POSITIVE); }
-#endif
-#if GK_HAVE_GK_FLUID_Z
         {
             gk_fluid fluid = { NULL, &mix, use_kij ? kij : NULL };
             struct { gk_real z; } o;
             FZ_CALL(gk_fluid_z(eos, fluid, p, t, &o.z), o, z, FZ_POSITIVE);
         }
-#endif
     }
-#endif
 }
 
 static void fuzz_water(fz_reader *r) {
     gk_temperature t = { fz_real(r) };
     gk_pressure p = { fz_real(r) };
     gk_real rh = fz_real(r);
-    (void)t; (void)p; (void)rh;
-#if GK_HAVE_GK_WATER_VAPOUR_PRESSURE
     { gk_pressure o; FZ_CALL(gk_water_vapour_pressure(t, &o), o, pa, FZ_POSITIVE); }
-#endif
-#if GK_HAVE_GK_WATER_SATURATION_TEMPERATURE
     { gk_temperature o; FZ_CALL(gk_water_saturation_temperature(p, &o), o, k, FZ_POSITIVE); }
-#endif
-#if GK_HAVE_GK_DRY_GAS_PRESSURE
     { gk_pressure o; FZ_CALL(gk_dry_gas_pressure(p, t, rh, &o), o, pa, FZ_POSITIVE); }
-#endif
-#if GK_HAVE_GK_DEW_POINT
     { gk_temperature o; FZ_CALL(gk_dew_point(p, &o), o, k, FZ_POSITIVE); }
-#endif
-#if GK_HAVE_GK_HUMID_MIXTURE && GK_HAVE_GK_MIXTURE_PARSE
     {
         gk_mixture dry, wet, before;
         if (gk_mixture_parse("N2=0.78, O2=0.21, Ar=balance", &dry) == GK_OK) {
@@ -303,7 +254,6 @@ static void fuzz_water(fz_reader *r) {
             }
         }
     }
-#endif
 }
 
 static void fuzz_reference_and_instrument(fz_reader *r) {
@@ -316,8 +266,6 @@ static void fuzz_reference_and_instrument(fz_reader *r) {
     gk_temperature t2 = { fz_real(r) };
     gk_real z = fz_real(r), z_ref = fz_real(r), x = fz_real(r);
     gk_reference ref = { p2, t2 };
-    (void)id; (void)eos; (void)gas; (void)p; (void)t; (void)z; (void)z_ref; (void)x; (void)ref;
-#if GK_HAVE_GK_REFERENCE_GET
     {
         gk_reference o = { { SENT }, { SENT } };
         gk_status s = gk_reference_get(id, &o);
@@ -325,11 +273,7 @@ static void fuzz_reference_and_instrument(fz_reader *r) {
         if (s == GK_OK) { FZ_POSITIVE(o.p.pa); FZ_POSITIVE(o.t.k); }
         else { FZ_UNTOUCHED(o.p.pa); FZ_UNTOUCHED(o.t.k); }
     }
-#endif
-#if GK_HAVE_GK_REFERENCE_FACTOR
     { struct { gk_real f; } o; FZ_CALL(gk_reference_factor(p, t, z, ref, z_ref, &o.f), o, f, FZ_POSITIVE); }
-#endif
-#if GK_HAVE_GK_FLOW_TO_REFERENCE
     {
         gk_fluid fluid = { gas, NULL, NULL };
         gk_volume_flow q = { x };
@@ -368,14 +312,11 @@ static void fuzz_reference_and_instrument(fz_reader *r) {
             }
         }
     }
-#endif
 }
 
 static void fuzz_ideal_batch(fz_reader *r) {
     gk_molar_mass m = { fz_real(r) };
     size_t count = fz_byte(r) % 9u;
-    (void)m; (void)count;
-#if GK_HAVE_GK_IDEAL_DENSITY_BATCH
     gk_real ps[8], ts[8], out[8];
     gk_status st[8];
     for (size_t i = 0; i < 8; ++i) { ps[i] = fz_real(r); ts[i] = fz_real(r); }
@@ -387,7 +328,6 @@ static void fuzz_ideal_batch(fz_reader *r) {
         else FZ_REQUIRE(isnan(out[i]));
     }
     FZ_REQUIRE(ok == counted);
-#endif
 }
 
 int LLVMFuzzerTestOneInput(const uint8_t *data, size_t size) {

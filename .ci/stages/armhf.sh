@@ -7,5 +7,8 @@ cmake -B build-armhf -DCMAKE_TOOLCHAIN_FILE="$PWD/cmake/arm-linux-gnueabihf.cmak
       -DGASKIT_EXAMPLES=OFF
 cmake --build build-armhf -j2
 file build-armhf/tests/test_version
-ctest --test-dir build-armhf --output-on-failure | tee build-armhf/ctest.txt
+# The CMocka suites (test_*) run under qemu-arm through CMAKE_CROSSCOMPILING_EMULATOR. The gkq
+# command-line tests start the binary from a shell script, which would need binfmt_misc
+# (not available in containers), so they are left to the native stages.
+ctest --test-dir build-armhf --output-on-failure -R '^test_' | tee build-armhf/ctest.txt
 echo "summary: armhf under qemu-arm: $(grep -E 'tests passed' build-armhf/ctest.txt)"

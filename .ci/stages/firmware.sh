@@ -6,7 +6,7 @@
 # the largest stack use of the public functions (goal <= 256 bytes).
 set -euo pipefail
 cd "$(dirname "$0")/../.."
-cmake -S bindings-examples/firmware -B build-m4 \
+cmake -S bindings-examples/firmware -B build-m4 ${GASKIT_FIRMWARE_CMAKE_ARGS:-} \
       -DCMAKE_TOOLCHAIN_FILE="$PWD/cmake/arm-none-eabi-cortex-m4f.cmake" -DCMAKE_BUILD_TYPE=MinSizeRel
 cmake --build build-m4 -j2
 lib=build-m4/gaskit/libgaskit.a

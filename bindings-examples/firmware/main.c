@@ -9,11 +9,10 @@
  * volatile "display registers" so that the linker keeps every call.
  *
  * Nothing here allocates or prints: the CI stage checks that malloc, free, printf and strtod are
- * not in the linked image. gk_available.h gates calls to modules lib/ does not have yet.
+ * not in the linked image.
  */
 #include <stdint.h>
 #include "gaskit/gaskit.h"
-#include "gk_available.h"
 
 /* Raw readings: cylinder gauge pressure (bar g), cylinder temperature (degC), line pressure
    (kPa abs), line temperature (degC), line flow (L/min), relative humidity (fraction). */
@@ -36,37 +35,30 @@ static void cycle(void) {
     gk_temperature t_line = { GK_REAL_C(291.15) };
     gk_volume cylinder = { GK_REAL_C(0.05) }; /* a 50 L cylinder */
     gk_volume_flow q_line = { GK_REAL_C(7.0e-4) };
-    gk_status s = GK_OK;
-    (void)ambient; (void)p_cyl; (void)t_cyl; (void)p_line; (void)t_line; (void)cylinder;
-    (void)q_line; (void)s;
+    gk_status s;
 
     show(0, GK_OK, (gk_real)gk_build_flags());
-#if GK_HAVE_GK_PRESSURE_FROM_GAUGE
     s = gk_pressure_from_gauge((gk_real)reading[0], GK_UNIT_BAR, ambient, &p_cyl);
     show(1, s, p_cyl.pa);
     s = gk_temperature_from((gk_real)reading[1], GK_UNIT_DEGC, &t_cyl);
     show(2, s, t_cyl.k);
     s = gk_pressure_from((gk_real)reading[2], GK_UNIT_KPA, &p_line);
+    show(12, s, p_line.pa);
     s = gk_temperature_from((gk_real)reading[3], GK_UNIT_DEGC, &t_line);
+    show(13, s, t_line.k);
     s = gk_volume_flow_from((gk_real)reading[4], GK_UNIT_L_PER_MIN, &q_line);
     show(3, s, q_line.m3_per_s);
-#endif
-#if GK_HAVE_GK_IDEAL_AMOUNT
     {
         gk_amount n;
         s = gk_ideal_amount(p_cyl, cylinder, t_cyl, &n);
         show(4, s, n.mol);
     }
-#endif
-#if GK_HAVE_GK_SPEED_MEAN
     {
         gk_speed u;
         gk_molar_mass m_n2 = { GK_REAL_C(0.0280134) }; /* N2, IUPAC atomic weights (from memory) */
         s = gk_speed_mean(t_line, m_n2, &u);
         show(5, s, u.m_per_s);
     }
-#endif
-#if GK_HAVE_GK_GAS_FIND && GK_HAVE_GK_EOS_SOLVE
     {
         const gk_gas *n2 = 0;
         gk_eos_result r;
@@ -74,8 +66,6 @@ static void cycle(void) {
         if (s == GK_OK) s = gk_eos_solve(GK_EOS_PENG_ROBINSON, n2, p_cyl, t_cyl, GK_ROOT_STABLE, &r);
         show(6, s, s == GK_OK ? r.z : GK_REAL_C(0.0));
     }
-#endif
-#if GK_HAVE_GK_MIXTURE_PARSE && GK_HAVE_GK_MIXTURE_EOS_SOLVE
     {
         gk_mixture mix;
         gk_eos_result r;
@@ -84,15 +74,11 @@ static void cycle(void) {
                                                  GK_ROOT_STABLE, &r);
         show(7, s, s == GK_OK ? r.z : GK_REAL_C(0.0));
     }
-#endif
-#if GK_HAVE_GK_DRY_GAS_PRESSURE
     {
         gk_pressure dry;
         s = gk_dry_gas_pressure(p_line, t_line, (gk_real)reading[5], &dry);
         show(8, s, dry.pa);
     }
-#endif
-#if GK_HAVE_GK_REFERENCE_GET && GK_HAVE_GK_FLOW_TO_REFERENCE && GK_HAVE_GK_GAS_FIND
     {
         gk_reference ref;
         const gk_gas *n2 = 0;
@@ -114,7 +100,6 @@ static void cycle(void) {
             show(11, s, leak.mol_per_s);
         }
     }
-#endif
 }
 
 int main(void) {

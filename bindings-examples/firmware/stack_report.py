@@ -17,16 +17,14 @@ import sys
 root = sys.argv[1]
 goal = int(sys.argv[2]) if len(sys.argv) > 2 else 256
 
-frames = {}      # function -> bytes
-kinds = {}       # function -> static / dynamic / dynamic,bounded
+frames = {}      # call-graph node -> bytes ("file:function" for static functions)
+kinds = {}       # function -> static / dynamic / dynamic,bounded (from the .su files)
 for su in glob.glob(os.path.join(root, "**", "*.su"), recursive=True):
     for line in open(su):
         parts = line.rstrip("\n").split("\t")
         if len(parts) != 3:
             continue
-        name = parts[0].rsplit(":", 1)[-1]
-        frames[name] = max(frames.get(name, 0), int(parts[1]))
-        kinds[name] = parts[2]
+        kinds[parts[0].rsplit(":", 1)[-1]] = parts[2]
 
 # The call graphs name static functions "file:function"; their nodes carry the frame size.
 edges = {}
@@ -66,7 +64,7 @@ def depth(fn, path):
     return worst[fn]
 
 
-public = sorted(f for f in frames if f.startswith("gk_"))
+public = sorted(f for f in frames if f.startswith("gk_") and ":" not in f)
 try:
     for f in public:
         depth(f, [])
