@@ -472,6 +472,7 @@ static gk_status collect_args(int argc, char **argv, args *a, detail *why) {
     gk_status st;
     memset(a, 0, sizeof *a);
     for (i = 0; i < argc; i++) {
+        if (argv[i][0] == '\0') continue;   /* an empty CSV cell: an argument left out */
         if (looks_like_quantity(argv[i])) {
             if (a->nq >= GKQ_CELLS_MAX) { say(why, "too many quantities at", argv[i]); return GK_ERR_ARGUMENT; }
             st = parse_quantity(argv[i], &a->q[a->nq], why);
@@ -1129,52 +1130,67 @@ static int split_csv(char *line, char **cells, int max) {
     return n;
 }
 
+/* Reads one line (without its newline) into buf. Returns -1 at the end of the input, else the
+   number of bytes kept; *too_long is set when the line held more than cap - 1 bytes (the rest
+   of it is read and dropped), *has_nul when it held a NUL byte. */
+static long read_line(FILE *in, char *buf, size_t cap, int *too_long, int *has_nul) {
+    size_t n = 0;
+    int c, any = 0;
+    *too_long = 0;
+    *has_nul = 0;
+    while ((c = getc(in)) != EOF) {
+        any = 1;
+        if (c == '\n') break;
+        if (c == '\0') *has_nul = 1;
+        if (n + 1 < cap) buf[n++] = (char)c;
+        else *too_long = 1;
+    }
+    if (!any) return -1;
+    buf[n] = '\0';
+    return (long)n;
+}
+
 static int run_batch(const settings *set_in, const struct word *w) {
     settings set = *set_in;
-    char line[GKQ_LINE_MAX + 2];
+    char line[GKQ_LINE_MAX + 1];
     long lineno = 0, rows = 0, failed = 0;
     record r;
 
     set.format = OUT_CSV;
     rec_init(&r, w->fields, w->nfields);
     rec_csv_header(stdout, &r);
-    while (fgets(line, (int)sizeof line, stdin) != NULL) {
-        size_t len = strlen(line);
+    for (;;) {
         char *cells[GKQ_CELLS_MAX];
-        int n, c;
+        int n, too_long, has_nul;
         detail why;
         args a;
         gk_status st;
-        int too_long = 0;
+        long got = read_line(stdin, line, sizeof line, &too_long, &has_nul);
+        size_t len;
 
+        if (got < 0) break;
+        len = (size_t)got;
         lineno++;
-        if (len > 0 && line[len - 1] == '\n') {
-            line[--len] = '\0';
-        } else if (!feof(stdin)) {
-            /* longer than GKQ_LINE_MAX: reported in its row, the rest of it skipped */
-            too_long = 1;
-            while ((c = getchar()) != EOF && c != '\n') { }
-        }
         if (len > 0 && line[len - 1] == '\r') line[--len] = '\0';
         why.text[0] = '\0';
         rec_init(&r, w->fields, w->nfields);
         if (too_long) {
+            /* longer than GKQ_LINE_MAX: reported in its row, the rest of it skipped */
             rows++;
             failed++;
             rec_print(stdout, &set, &r, w->name, lineno, GK_ERR_PARSE, "line too long");
+            continue;
+        }
+        if (has_nul) {
+            rows++;
+            failed++;
+            rec_print(stdout, &set, &r, w->name, lineno, GK_ERR_PARSE, "NUL byte in line");
             continue;
         }
         {
             size_t k = 0;
             while (line[k] == ' ' || line[k] == '\t') k++;
             if (line[k] == '\0' || line[k] == '#') continue;   /* blank or comment */
-        }
-        if (strlen(line) != len) {
-            /* an embedded NUL byte */
-            rows++;
-            failed++;
-            rec_print(stdout, &set, &r, w->name, lineno, GK_ERR_PARSE, "NUL byte in line");
-            continue;
         }
         rows++;
         n = split_csv(line, cells, GKQ_CELLS_MAX);
@@ -1227,7 +1243,8 @@ static void usage(FILE *out) {
         "  help | version\n"
         "\n"
         "quantities carry their unit: 2.5bar 101.3kPa 25degC 77degF 300K 40L 2ft3 15min 60%\n"
-        "  a gauge pressure ends in _g: 3.2bar_g 45psi_g -0.2bar_g (over the barometer, -b)\n"
+        "  a gauge pressure ends in _g: 3.2bar_g 45psi_g -0.2bar_g (over the barometer, -b);\n"
+        "  a pressure without a mark, or with _a, is absolute\n"
         "  quantities of different kinds may come in any order; two of one kind keep theirs\n"
         "FLUID: a gas by formula or name (N2, \"carbon dioxide\") or a mixture\n"
         "  \"CO2=5%;N2=balance\" (';' or ',' between components)\n"

@@ -164,6 +164,25 @@ int main(void) {
     printf("\n  * how far the ideal gas law would misstate the amount. Nitrogen near 150 bar sits\n"
            "    where its Z crosses 1, so the ideal answer happens to be close; argon (Z = 0.92)\n"
            "    and the CO2 mixture are not. For the liquid CO2 cylinder no gas law applies.\n");
+    {
+        /* The same gas at another reference: the supplier's certificate uses ISO 13443. */
+        fluid_holder h;
+        gk_volume vol;
+        gk_pressure p;
+        gk_contents at_normal, at_iso;
+        if (ok(make_fluid(bank[0].contents, &h), bank[0].contents) &&
+            ok(gk_volume_from((gk_real)bank[0].capacity, bank[0].capacity_unit, &vol), "water capacity") &&
+            ok(gk_pressure_from_gauge((gk_real)bank[0].gauge, bank[0].gauge_unit, ambient, &p), "gauge reading") &&
+            ok(gk_vessel_contents(GK_EOS_PENG_ROBINSON, h.fluid, vol, p, room, normal, &at_normal),
+               "contents at 0 degC") &&
+            ok(gk_vessel_contents(GK_EOS_PENG_ROBINSON, h.fluid, vol, p, room, iso, &at_iso),
+               "contents at 15 degC")) {
+            printf("\n  %s as the supplier states it (15 degC, 101.325 kPa, ISO 13443): %.3f m3,\n"
+                   "  %.1f %% more than the same gas in normal m3: always name the reference.\n",
+                   bank[0].tag, d(at_iso.reference_volume.m3),
+                   pct(d(at_iso.reference_volume.m3), d(at_normal.reference_volume.m3)));
+        }
+    }
 
     /* ---- wet-gas flow check */
     rule("3. Calibration-gas flow through the wetted bubble meter (QB-CAL-11)");

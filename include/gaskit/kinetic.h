@@ -57,6 +57,8 @@ GK_API gk_status gk_speed_of_sound_ideal(gk_temperature t, gk_molar_mass m,
 
 /**
  * @brief Graham's law: effusion rate of gas a over that of gas b, sqrt(M_b / M_a).
+ * @param a Molar mass of gas a, > 0.
+ * @param b Molar mass of gas b, > 0.
  * @param[out] rate_a_over_b Ratio of molar (or volumetric) effusion rates at equal p and T.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
@@ -68,6 +70,7 @@ GK_API gk_status gk_effusion_ratio(gk_molar_mass a, gk_molar_mass b, gk_real *ra
  * Equal amounts effusing under the same conditions take times proportional to sqrt(M).
  * @param reference Molar mass of the reference gas, > 0.
  * @param time_ratio_unknown_over_reference t_unknown / t_ref, finite and > 0.
+ * @param[out] out Molar mass of the unknown gas.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_effusion_molar_mass(gk_molar_mass reference,

@@ -174,6 +174,14 @@ case_water() {
     near "dry-gas pressure" "$(kv p_dry "$OUT")" "$(awk 'BEGIN{printf "%.10g", 101325-3536.58941}')" "$LOOSE"
     run dew 1atm 300K 0.5; ok dew
     near "water at 50 %" "$(kv p_water "$OUT")" 1768.294705 "$LOOSE"
+    # over ice below the triple point: IAPWS R14-08 (2011) sublimation equation, evaluated here
+    # from its published coefficients (check-values.md)
+    run water -10degC; ok water
+    [ "$(kv phase "$OUT")" = ice ] || fail "phase at -10 degC: $(kv phase "$OUT")"
+    near "p_subl(263.15 K)" "$(kv p_sat "$OUT")" "$(awk 'BEGIN {
+        th = 263.15 / 273.16;
+        s = -0.212144006e2 * th^0.333333333e-2 + 0.273203819e2 * th^0.120666667e1 - 0.610598130e1 * th^0.170333333e1;
+        printf "%.12g", 611.657 * exp(s / th) }')" "$LOOSE"
     must_fail 1 "validity range" water 700K
     must_fail 1 "outside the physical domain" dew 1atm 20degC 150%
 }
@@ -196,6 +204,9 @@ case_contents() {
     run -m ideal -R 15C contents N2 50L 200bar 15degC; ok contents
     near "volume at 15 degC" "$(kv reference_volume "$OUT")" \
         "$(awk 'BEGIN{printf "%.12g", 0.05*200e5/101325}')" "$REL"
+    # a reference condition given as PRESSURE@TEMPERATURE, and the explicit absolute mark _a
+    run -m ideal -R 1bar@20degC contents N2 50L 200bar_a 20degC; ok contents
+    near "volume at 1 bar, 20 degC" "$(kv reference_volume "$OUT")" 10 "$REL"
     # gauge pressure with a stated barometer
     run -m ideal -b 1000hPa contents N2 10L 1bar_g 0degC; ok contents
     near "gauge contents" "$(kv p "$OUT")" 200000 "$REL"
@@ -297,6 +308,16 @@ case_robust() {
     [ "$outrows" -eq $((rows - skipped)) ] || fail "robust batch: $outrows rows out of $rows in ($skipped skipped)"
     grep -q '^1,parse,"*line too long' "$TMP/out" || fail "overlong line not reported as parse error"
     grep -q '^203,ok,' "$TMP/out" || fail "good row after garbage lost"
+    # a NUL byte inside a line: that row is a parse error, the next row is kept
+    printf 'N2,1\000bar,20degC\nN2,1bar,20degC\n' | "$GKQ" batch state >"$TMP/out" 2>/dev/null
+    grep -q '^1,parse,' "$TMP/out" || fail "NUL byte row not reported"
+    grep -q '^2,ok,' "$TMP/out" || fail "row after a NUL byte lost"
+    # a line of exactly 1024 bytes is read; 1025 bytes is too long, and the next row survives
+    awk 'BEGIN { s = "N2,1bar,20degC,"; while (length(s) < 1024) s = s " "; print s;
+                 print s "x"; print "N2,1bar,20degC" }' | "$GKQ" batch state >"$TMP/out" 2>/dev/null
+    grep -q '^1,ok,' "$TMP/out" || fail "1024-byte line not read"
+    grep -q '^2,parse,"*line too long' "$TMP/out" || fail "1025-byte line not reported"
+    grep -q '^3,ok,' "$TMP/out" || fail "row after an overlong line lost"
     # overlong arguments on the command line
     long=$(awk 'BEGIN { s = ""; for (i = 0; i < 5000; i++) s = s "x"; print s }')
     "$GKQ" state "$long" 1bar 20degC >/dev/null 2>&1; rc=$?
