@@ -15,7 +15,7 @@
 
 /* The value is read through a pointer after the call (argument evaluation order is unspecified). */
 static void put(const char *fn, int k, gk_status s, const gk_real *v) {
-    printf("%s\t%d\t%d\t%.9e\n", fn, k, (int)s, s == GK_OK ? (double)*v : 0.0);
+    printf("%s\t%d\t%d\t%.17e\n", fn, k, (int)s, s == GK_OK ? (double)*v : 0.0);
 }
 static const gk_real zero = GK_REAL_C(0.0);
 

@@ -1,7 +1,8 @@
 #!/usr/bin/env python3
 """Compares float_accuracy.c's output of the double and the float build.
 
-Usage: float_accuracy.py double.txt float.txt
+Usage: float_accuracy.py reference.txt other.txt
+(double vs float build; also used for x86-64 vs 32-bit ARM double builds)
 Per function: cases compared, largest and median relative difference of the float result
 from the double one, and status disagreements (a state near a model's edge can fall on
 either side in float). Prints a Markdown table (docs/embedding.md).
@@ -44,3 +45,7 @@ for fn in sorted(per):
         continue
     print("| %s | %d | %.1e | %.1e | %d |" % (fn, e["n"], max(e["errs"]),
                                             statistics.median(e["errs"]), e["status"]))
+
+overall = max(((max(e["errs"]), fn) for fn, e in per.items() if e["errs"]), default=(0.0, "-"))
+print("overall: %d results, largest relative difference %.1e (%s), status differs in %d"
+      % (len(d), overall[0], overall[1], sum(e["status"] for e in per.values())))
