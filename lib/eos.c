@@ -288,8 +288,10 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
     q = eos_log_factor(family, a, b);
     rtp = GK_R * t / p;
     n = gk__cubic_roots(c2, c1, c0, b, GK_LIT(1.0) + b, guess, zr);
-    if (n < 0) return GK_ERR_RANGE;
-    if (n == 0) return GK_ERR_NO_SOLUTION;
+    /* With A >= 0 and B > 0 a root above B always exists (f(B) < 0 < f(1 + B)); none found means
+       it lies within rounding of B (e.g. Z - B ~ B^2/A below u B at absurdly large A): the result
+       cannot be represented, GK_ERR_RANGE, like an overflow. */
+    if (n <= 0) return GK_ERR_RANGE;
 
     if (n == 1) {
         pick = 0;
