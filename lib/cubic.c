@@ -1,6 +1,6 @@
 /*
- * cubic.c - real roots of a monic cubic: isolation at the critical points, then Newton's
- * iteration from monotone starts. Method and error bound: see cubic.h and docs/cubic-solver.md.
+ * cubic.c - real roots of a monic cubic: isolation at the critical points, then Halley's
+ * iteration from guarded starts. Method and error bound: see cubic.h and docs/cubic-solver.md.
  */
 #include "cubic.h"
 
@@ -48,7 +48,7 @@ static int cubic_nonzero(gk_real x) { return (x < GK_LIT(0.0) || x > GK_LIT(0.0)
  * (rounding level: the previous point is kept); or after GK_CUBIC_ITER_MAX steps. Near a multiple
  * root (f' -> 0) the prediction is large and the |f| test ends the iteration.
  */
-static gk_real cubic_newton(const cubic_poly *p, gk_real x, gk_real lo, gk_real hi) {
+static gk_real cubic_halley(const cubic_poly *p, gk_real x, gk_real lo, gk_real hi) {
     gk_real fx = cubic_f(p, x);
     int i;
     for (i = 0; i < GK_CUBIC_ITER_MAX; ++i) {
@@ -86,7 +86,8 @@ static int cubic_scale_exponent(gk_real c2, gk_real c1, gk_real c0) {
     return e == -10000 ? 0 : e;
 }
 
-int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, gk_real z[3]) {
+int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, gk_real guess,
+                    gk_real z[3]) {
     cubic_poly p;
     gk_real r[3];
     gk_real big = CUBIC_BIG;
@@ -116,7 +117,9 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
     /* a first step from the caller's upper bound, independent of the isolation below (so a
        pipelined processor overlaps the two); used only where it lies above z2. Householder's
        order-4 step x - f (f'^2 - f f''/2) / (f'^3 - f f' f'' + f^2 f'''/6), with f''' = 6. */
-    if (have_hi) {
+    if (have_hi && guess > lo && guess < hi) {
+        hstep = guess; /* the caller's estimate of the largest root */
+    } else if (have_hi) {
         gk_real fh = cubic_f(&p, hi), dh = cubic_df(&p, hi);
         gk_real d2h = GK_LIT(6.0) * hi + GK_LIT(2.0) * c2;
         gk_real num = fh * (dh * dh - GK_LIT(0.5) * fh * d2h);
@@ -154,11 +157,16 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
                 } else {
                     x0 = z2 + gk_sqrt(-f2 / sd);
                 }
-                rbig = cubic_newton(&p, x0, z2, x0 + (x0 - z2) + GK_LIT(1.0));
+                rbig = cubic_halley(&p, x0, z2, x0 + (x0 - z2) + GK_LIT(1.0));
             }
             f1 = cubic_f(&p, z1); /* local maximum */
             if (f1 < GK_LIT(0.0)) {
                 r[0] = rbig; /* one real root */
+                n = 1;
+            } else if (lo > z1 && cubic_f(&p, lo) < GK_LIT(0.0)) {
+                /* three real roots, but f(lo) < 0 right of z1 puts lo between the middle and the
+                   largest root: only the largest is above lo (for an equation of state, B) */
+                r[0] = rbig;
                 n = 1;
             } else {
                 /* 3. three real roots r0 <= z1 <= r1 <= z2 <= r2: the two smaller ones from the
@@ -180,12 +188,12 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
                     r[1] = z1;
                 } else {
                     if (!(x0l < z1)) x0l = z1 - gk_sqrt(f1 / sd); /* below the smallest root */
-                    r[0] = cubic_newton(&p, x0l, x0l - (z1 - x0l) - GK_LIT(1.0), z1);
+                    r[0] = cubic_halley(&p, x0l, x0l - (z1 - x0l) - GK_LIT(1.0), z1);
                     if (!cubic_nonzero(f2)) {
                         r[1] = z2;
                     } else {
                         if (!(x0m > z1 && x0m < z2)) x0m = GK_LIT(0.5) * (z1 + z2);
-                        r[1] = cubic_newton(&p, x0m, z1, z2);
+                        r[1] = cubic_halley(&p, x0m, z1, z2);
                     }
                 }
                 n = 3;
@@ -197,26 +205,35 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
                 n = 0;
             } else {
                 gk_real x0 = z1 - gk_sqrt(f1 / sd);
-                r[0] = cubic_newton(&p, x0, x0 - (z1 - x0) - GK_LIT(1.0), z1);
+                r[0] = cubic_halley(&p, x0, x0 - (z1 - x0) - GK_LIT(1.0), z1);
                 n = 1;
             }
         }
     } else {
         /* f monotonic: one real root (triple at D = 0 and f(s) = 0) */
-        gk_real s = -c2 / GK_LIT(3.0);
+        gk_real s = -c2 * CUBIC_THIRD;
         gk_real fs = cubic_f(&p, s);
-        gk_real ds = c1 - c2 * c2 / GK_LIT(3.0); /* f'(s) = -D/3 >= 0 */
-        gk_real dist = gk_cbrt(gk_fabs(fs));
-        if (ds > GK_LIT(0.0) && gk_fabs(fs) / ds < dist) dist = gk_fabs(fs) / ds;
         if (!cubic_nonzero(fs)) {
             r[0] = s;
-        } else if (fs < GK_LIT(0.0)) {
-            gk_real x0 = s + dist;
-            if (have_hi && hi > s && hi < x0) x0 = hi;
-            r[0] = cubic_newton(&p, x0, s, x0 + dist + GK_LIT(1.0));
+        } else if (fs < GK_LIT(0.0) && have_hi && hi > s) {
+            /* root above s, where f is convex: from above, at the first step from hi or at hi */
+            gk_real x0 = hstep > s ? hstep : hi;
+            r[0] = cubic_halley(&p, x0, s, hi + (hi - s) + GK_LIT(1.0));
+        } else if (fs > GK_LIT(0.0) && lo < s && cubic_f(&p, lo) < GK_LIT(0.0)) {
+            /* root between lo and s, where f is concave: from below, at lo */
+            r[0] = cubic_halley(&p, lo, lo - (s - lo) - GK_LIT(1.0), s);
         } else {
-            gk_real x0 = s - dist;
-            r[0] = cubic_newton(&p, x0, x0 - dist - GK_LIT(1.0), s);
+            /* no bound known: the distance to the root is below cbrt|f(s)| and |f(s)|/f'(s) */
+            gk_real ds = c1 - c2 * c2 * CUBIC_THIRD; /* f'(s) = -D/3 >= 0 */
+            gk_real dist = gk_cbrt(gk_fabs(fs));
+            if (ds > GK_LIT(0.0) && gk_fabs(fs) / ds < dist) dist = gk_fabs(fs) / ds;
+            if (fs < GK_LIT(0.0)) {
+                gk_real x0 = s + dist;
+                r[0] = cubic_halley(&p, x0, s, x0 + dist + GK_LIT(1.0));
+            } else {
+                gk_real x0 = s - dist;
+                r[0] = cubic_halley(&p, x0, x0 - dist - GK_LIT(1.0), s);
+            }
         }
         n = 1;
     }

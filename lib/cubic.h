@@ -12,31 +12,31 @@
  *             finite (coefficients beyond the scaled range, NaN input).
  *
  * Method:     no closed form (Cardano / trigonometric forms lose the small root through
- *             cancellation). Instead, as in Kahan's 1986 notes "To solve a real cubic equation"
- *             and Flocke's ACM TOMS Algorithm 954 (2015), the roots are isolated first and each is
- *             found by Newton's iteration from a start on the side where the iteration converges
- *             monotonically:
- *               1. scaling: when the coefficients would over- or underflow when z^3 is formed, the
- *                  variable is scaled by an exact power of two (z = 2^e y), so no rounding is added;
- *               2. the critical points z1 < z2 (roots of f' = 3z^2 + 2c2 z + c1) are computed with
- *                  the cancellation-free quadratic formula; the signs of f(z1) and f(z2) decide
- *                  whether there are three real roots (f(z1) >= 0 >= f(z2)) or one;
- *               3. the largest root lies where f is convex and increasing (z > z2), the smallest
- *                  where f is concave and increasing (z < z1). From the critical point the
- *                  quadratic Taylor model with the exact cubic remainder gives a start on the
- *                  far side (z2 + sqrt(-f(z2)/sqrt(D)) is above the largest root,
- *                  z1 - sqrt(f(z1)/sqrt(D)) below the smallest; D = c2^2 - 3 c1), from which
- *                  Newton's iterates approach the root monotonically. The optional hint hi (a
- *                  known upper bound of every real root, e.g. 1 + B for a cubic equation of state)
- *                  tightens the start. With D <= 0 (f monotonic) the start is at the inflection
- *                  point s = -c2/3 moved by min(cbrt(|f(s)|), |f(s)|/f'(s)), a bound on the
- *                  distance to the root;
- *               4. the middle root comes from the product of the roots, -c0/(z_small z_large)
- *                  (no cancellation), and is then polished by the same Newton iteration kept
- *                  inside [z1, z2];
- *               5. the iteration stops when the predicted next correction (f'' dx^2 / (2 f')) is
- *                  below one rounding unit, when |f| stops decreasing (rounding level reached), or
- *                  after GK_CUBIC_ITER_MAX steps. There is no recursion and no heap.
+ *             cancellation). Instead, in the spirit of Kahan's 1986 notes "To solve a real cubic
+ *             equation" and Flocke's ACM TOMS Algorithm 954 (2015), the roots are isolated first
+ *             and each is found by an iteration kept inside its isolating interval:
+ *               1. scaling: when z^3 could over- or underflow, the variable is scaled by an exact
+ *                  power of two (z = 2^e y), so no rounding is added;
+ *               2. isolation: the critical points z1 < z2 (roots of f' = 3z^2 + 2c2 z + c1) come
+ *                  from the cancellation-free quadratic formula; with D = c2^2 - 3c1 <= 0 f is
+ *                  monotonic (one root); else the signs of f(z1) and f(z2) decide between three
+ *                  real roots (f(z1) >= 0 >= f(z2)) and one. With three roots and f(lo) < 0 at a
+ *                  lo right of z1, only the largest root is above lo and the others are skipped;
+ *               3. the largest root lies where f is convex and increasing (z > z2). Its start is
+ *                  the caller's guess, or one Householder step of order 4 from the caller's upper
+ *                  bound hi (computed independently of step 2, so a pipelined processor overlaps
+ *                  the two), or z2 + sqrt(-f(z2)/sqrt(D)), which is above the root because
+ *                  f(z2 + h) = f(z2) + sqrt(D) h^2 + h^3 exactly;
+ *               4. with three roots, the two smaller ones start from the deflated quadratic
+ *                  z^2 + (c2 + r) z - c0/r (cancellation-free formula) and are polished on the
+ *                  cubic inside z < z1 and z1 < z < z2. A lone root below z1 starts from
+ *                  z1 - sqrt(f(z1)/sqrt(D)) (below it); in the monotonic case the start is the
+ *                  first step from hi or lo when they bracket the root on the right side, else
+ *                  the inflection point s = -c2/3 moved by min(cbrt|f(s)|, |f(s)|/f'(s));
+ *               5. Halley's iteration x - f f'/(f'^2 - f f''/2) (cubic convergence) stops when
+ *                  the predicted next correction C |dx|^3, C = (f''/(2f'))^2 - 1/f', is below one
+ *                  epsilon of x, when |f| stops decreasing (rounding level reached, the better
+ *                  point is kept), or after GK_CUBIC_ITER_MAX steps. No recursion, no heap.
  *
  * Error bound: Horner evaluation has a rounding error below 3u sum_i |c_i| |z|^i (u the unit
  *             roundoff, 2^-53 in double, 2^-24 in float) and the iteration stops at the rounding
@@ -53,15 +53,18 @@
 
 #include "gk_internal.h"
 
-/* Upper bound of Newton steps per root (linear convergence at an exact triple root needs about
+/* Upper bound of iteration steps per root (linear convergence at an exact triple root needs about
    90 steps of factor 2/3 from a distance 1 to reach 2^-53; the starts are much closer). */
 #define GK_CUBIC_ITER_MAX 100
 
 /*
  * Real roots z > lo of z^3 + c2 z^2 + c1 z + c0, ascending, in z[0 .. count-1] (see above).
  * hi: a known upper bound of every real root, used only to tighten a start; pass a value
- * <= lo (e.g. 0 with lo = 0... any hi <= lo) when none is known.
+ * <= lo when none is known. guess: an estimate of the largest root, used (instead of the first
+ * step from hi) only when lo < guess < hi and guess lies above the local minimum z2; pass 0
+ * (or any value outside (lo, hi)) for none. Neither changes the result beyond rounding.
  */
-int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, gk_real z[3]);
+int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, gk_real guess,
+                    gk_real z[3]);
 
 #endif /* GASKIT_CUBIC_H */

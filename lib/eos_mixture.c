@@ -7,30 +7,15 @@
  * (A_i = a_i p/(R T)^2, B_i = b_i p/(R T)). The mixture is then solved as a pseudo-pure fluid:
  * the fugacity coefficient reported is that of the pseudo-pure fluid with the mixed A, B (the
  * coefficient of the mixture as a whole, ln phi = sum_i x_i ln phi_i), not of any component.
+ * The composition is checked by gk__mixture_check() (mixture_internal.h), so a component whose
+ * molar mass is not physical is GK_ERR_DOMAIN here too.
  */
 #include "eos_internal.h"
+#include "mixture_internal.h"
 
 /* Largest |k_ij| accepted: beyond 1 the cross attraction changes sign (common practice: fitted
    binary parameters lie well inside [-1, 1]). */
 #define KIJ_MAX GK_LIT(1.0)
-/* Mole fractions must sum to 1 within this (API contract, GK_ERR_COMPOSITION). */
-#define MIX_SUM_TOL GK_LIT(1e-6)
-
-/* Composition check of the contract (until the gases module's gk__mixture_check is merged). */
-static gk_status mixture_check(const gk_mixture *mix) {
-    gk_real sum = GK_LIT(0.0);
-    size_t i;
-    if (mix->count == 0u || mix->count > (size_t)GK_MIXTURE_MAX) return GK_ERR_COMPOSITION;
-    for (i = 0; i < mix->count; ++i) {
-        gk_real x = mix->mole_fraction[i];
-        if (mix->gas[i] == NULL) return GK_ERR_ARGUMENT;
-        if (!gk_finite(x) || x < GK_LIT(0.0) || x > GK_LIT(1.0)) return GK_ERR_COMPOSITION;
-        sum += x;
-    }
-    if (!(gk_fabs(sum - GK_LIT(1.0)) <= MIX_SUM_TOL)) return GK_ERR_COMPOSITION;
-    return GK_OK;
-}
-
 static gk_status kij_check(size_t count, const gk_real *kij) {
     size_t i, j;
     if (kij == NULL) return GK_OK;
@@ -63,7 +48,7 @@ gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real 
     case GK_EOS_PENG_ROBINSON: break;
     default: return GK_ERR_ARGUMENT;
     }
-    st = mixture_check(mix);
+    st = gk__mixture_check(mix); /* composition (gases module: the one shared check) */
     if (st != GK_OK) return st;
     st = gk__eos_check_state(p, t, root);
     if (st != GK_OK) return st;

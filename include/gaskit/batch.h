@@ -38,7 +38,10 @@ GK_API size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk
                                      gk_molar_mass m, gk_real *out_kg_per_m3, gk_status *status_out);
 
 /**
- * @brief gk_eos_density() (stable root) over arrays.
+ * @brief gk_eos_density() (stable root) over arrays: out[i] = M / Vm(p[i], t[i]).
+ *
+ * Each element has the status gk_eos_density() would return (GK_ERR_ARGUMENT for every element
+ * when @p gas or an array is NULL or @p eos is out of range).
  * @return Number of elements with status GK_OK.
  */
 GK_API size_t gk_eos_density_batch(gk_eos eos, const gk_gas *gas, size_t count, const gk_real *p_pa,

@@ -104,10 +104,17 @@ GK_API gk_status gk_mixture_molar_mass(const gk_mixture *mix, gk_molar_mass *out
 /**
  * @brief Solves a cubic equation of state for a mixture with the van der Waals one-fluid
  *        mixing rules: a = sum_i sum_j x_i x_j sqrt(a_i a_j)(1 - k_ij), b = sum_i x_i b_i.
+ *
+ * Each component's a_i(T), b_i are those of gk_eos_solve() for the same model; the mixture is
+ * then solved as a pseudo-pure fluid with the mixed a, b, so the result's fugacity_coefficient
+ * is that of the mixture as a whole (ln phi = sum_i x_i ln phi_i), not of a component.
  * @param kij Binary interaction parameters, @p mix->count squared, row-major and symmetric
- *            with a zero diagonal; NULL for all zero.
- * @retval As gk_eos_solve(), and GK_ERR_COMPOSITION for an invalid composition, GK_ERR_DOMAIN
- *         for a k_ij that is not finite or not symmetric.
+ *            with a zero diagonal, each in [-1, 1]; NULL for all zero.
+ * @retval As gk_eos_solve(), and GK_ERR_COMPOSITION for an invalid composition (count 0 or above
+ *         GK_MIXTURE_MAX, a fraction not finite or outside [0, 1], a sum not 1 within 1e-6),
+ *         GK_ERR_ARGUMENT for a NULL component gas, GK_ERR_DOMAIN for a component with
+ *         non-physical data (molar mass, Tc, Pc, acentric factor) or a k_ij that is not finite,
+ *         not symmetric, outside [-1, 1] or on a non-zero diagonal.
  */
 GK_API gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
                                       gk_pressure p, gk_temperature t, gk_root root,
