@@ -80,6 +80,14 @@ static void fuzz_units(fz_reader *r) {
         FZ_CALL(gk_pressure_to(p, b, &o.x), o, x, FZ_POSITIVE);
         FZ_CALL(gk_temperature_to(t, b, &o.x), o, x, FZ_FINITE);
         FZ_CALL(gk_volume_to(vol, b, &o.x), o, x, FZ_POSITIVE);
+        FZ_CALL(gk_amount_to((gk_amount){ v }, b, &o.x), o, x, FZ_POSITIVE);
+        FZ_CALL(gk_molar_mass_to((gk_molar_mass){ v }, b, &o.x), o, x, FZ_POSITIVE);
+        FZ_CALL(gk_molar_volume_to((gk_molar_volume){ v }, b, &o.x), o, x, FZ_POSITIVE);
+        FZ_CALL(gk_density_to((gk_density){ v }, b, &o.x), o, x, FZ_POSITIVE);
+        FZ_CALL(gk_mass_to((gk_mass){ v }, b, &o.x), o, x, FZ_POSITIVE);
+        FZ_CALL(gk_speed_to((gk_speed){ v }, b, &o.x), o, x, FZ_FINITE);
+        FZ_CALL(gk_volume_flow_to((gk_volume_flow){ v }, b, &o.x), o, x, FZ_FINITE);
+        FZ_CALL(gk_mass_flow_to((gk_mass_flow){ v }, b, &o.x), o, x, FZ_FINITE);
     }
 }
 
