@@ -204,17 +204,17 @@ static gk_real eos_ln1p_ratio(gk_real x) {
  * and x = 2 sqrt2 B/den (or B/Z), so it stays accurate when B -> 0. ln(1 + x) rounds 1 + x:
  * absolute error about u (A/B) in ln phi, below 1e-14 for the states of the tests.
  */
-static gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
+/* q: the factor of the logarithm, A/B (RK, SRK) or A/(2 sqrt2 B) (PR), see eos_log_factor(). */
+static gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_real q, gk_real z) {
     switch (family) {
     case GK__FAMILY_RK: {
         gk_real x = b / z;
-        return (x < LN1P_SERIES_MAX) ? (a / z) * eos_ln1p_ratio(x) : (a / b) * gk_log(GK_LIT(1.0) + x);
+        return (x < LN1P_SERIES_MAX) ? (a / z) * eos_ln1p_ratio(x) : q * gk_log(GK_LIT(1.0) + x);
     }
     case GK__FAMILY_PR: {
         gk_real den = z + (GK_LIT(1.0) - GK_SQRT2) * b; /* > 0 since z > b */
         gk_real x = GK_LIT(2.0) * GK_SQRT2 * b / den;
-        return (x < LN1P_SERIES_MAX) ? (a / den) * eos_ln1p_ratio(x)
-                                     : (a / (GK_LIT(2.0) * GK_SQRT2 * b)) * gk_log(GK_LIT(1.0) + x);
+        return (x < LN1P_SERIES_MAX) ? (a / den) * eos_ln1p_ratio(x) : q * gk_log(GK_LIT(1.0) + x);
     }
     case GK__FAMILY_VDW:
     default:
@@ -222,14 +222,25 @@ static gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_
     }
 }
 
-static gk_real eos_lnphi(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
-    return (z - GK_LIT(1.0)) - gk_log(z - b) - eos_attraction(family, a, b, z);
+/* A/B (RK, SRK) or A/(2 sqrt2 B) (PR); independent of Z, so it is formed before the cubic is
+   solved and its division overlaps with the solver. */
+static gk_real eos_log_factor(gk__cubic_family family, gk_real a, gk_real b) {
+    switch (family) {
+    case GK__FAMILY_RK: return a / b;
+    case GK__FAMILY_PR: return a / (GK_LIT(2.0) * GK_SQRT2 * b);
+    case GK__FAMILY_VDW:
+    default:            return GK_LIT(0.0);
+    }
+}
+
+static gk_real eos_lnphi(gk__cubic_family family, gk_real a, gk_real b, gk_real q, gk_real z) {
+    return (z - GK_LIT(1.0)) - gk_log(z - b) - eos_attraction(family, a, b, q, z);
 }
 
 /* phi = exp(Z - 1 - attraction) / (Z - B): one logarithm fewer than exp(ln phi); falls back to
    exp(ln phi) where the first factor would leave the floating-point range. */
-static gk_real eos_phi(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
-    gk_real e = (z - GK_LIT(1.0)) - eos_attraction(family, a, b, z);
+static gk_real eos_phi(gk__cubic_family family, gk_real a, gk_real b, gk_real q, gk_real z) {
+    gk_real e = (z - GK_LIT(1.0)) - eos_attraction(family, a, b, q, z);
     gk_real phi = gk_exp(e) / (z - b);
     if (!(phi > GK_LIT(0.0)) || !gk_finite(phi)) phi = gk_exp(e - gk_log(z - b));
     return phi;
@@ -255,7 +266,7 @@ gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
 
 gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
                            gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
-    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm, guess, lnphi = GK_LIT(0.0);
+    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm, guess, q, rtp, lnphi = GK_LIT(0.0);
     int n, pick, have_lnphi = 0;
     gk_root branch;
 
@@ -274,9 +285,13 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
     guess = (a < EOS_GUESS_MAX && b < EOS_GUESS_MAX)
                 ? GK_LIT(1.0) + b - a * (GK_LIT(1.0) + a) + a * b * (GK_LIT(2.0) + u)
                 : GK_LIT(0.0);
+    q = eos_log_factor(family, a, b);
+    rtp = GK_R * t / p;
     n = gk__cubic_roots(c2, c1, c0, b, GK_LIT(1.0) + b, guess, zr);
-    if (n < 0) return GK_ERR_RANGE;
-    if (n == 0) return GK_ERR_NO_SOLUTION;
+    /* With A >= 0 and B > 0 a root above B always exists (f(B) < 0 < f(1 + B)); none found means
+       it lies within rounding of B (e.g. Z - B ~ B^2/A below u B at absurdly large A): the result
+       cannot be represented, GK_ERR_RANGE, like an overflow. */
+    if (n <= 0) return GK_ERR_RANGE;
 
     if (n == 1) {
         pick = 0;
@@ -289,8 +304,8 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
         branch = GK_ROOT_GAS;
     } else {
         /* stable: the lower fugacity (same p, T: the lower Gibbs energy); a tie goes to the gas */
-        gk_real lg = eos_lnphi(family, a, b, zr[n - 1]);
-        gk_real ll = eos_lnphi(family, a, b, zr[0]);
+        gk_real lg = eos_lnphi(family, a, b, q, zr[n - 1]);
+        gk_real ll = eos_lnphi(family, a, b, q, zr[0]);
         if (ll < lg) {
             pick = 0; branch = GK_ROOT_LIQUID; lnphi = ll;
         } else {
@@ -299,8 +314,8 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
         have_lnphi = 1;
     }
     zsel = zr[pick];
-    phi = have_lnphi ? gk_exp(lnphi) : eos_phi(family, a, b, zsel);
-    vm = zsel * (GK_R * t / p);
+    phi = have_lnphi ? gk_exp(lnphi) : eos_phi(family, a, b, q, zsel);
+    vm = zsel * rtp;
     if (!gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
 
     out->z = zsel;

@@ -161,8 +161,11 @@ static gk_status flow_factor(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_tempe
     return gk_reference_factor(p, t, z, ref, z_ref, factor);
 }
 
-gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
-                               gk_temperature t, gk_reference ref, gk_volume_flow *out) {
+/* The two directions of the reference-flow conversion: check the inputs, find the factor from
+ * Z at both conditions, then multiply (to the reference) or divide (from it). */
+static gk_status flow_convert(gk_eos eos, gk_fluid fluid, gk_real q_in, gk_pressure p,
+                              gk_temperature t, gk_reference ref, int to_reference,
+                              gk_volume_flow *out) {
     gk_real f = GK_LIT(1.0), q;
     gk_status s;
     if (out == NULL) {
@@ -172,7 +175,7 @@ gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual
     if (s != GK_OK) {
         return s;
     }
-    if (!gk_finite(actual.m3_per_s) || !gk_positive(p.pa) || !gk_positive(t.k)) {
+    if (!gk_finite(q_in) || !gk_positive(p.pa) || !gk_positive(t.k)) {
         return GK_ERR_DOMAIN;
     }
     s = reference_check(ref);
@@ -183,7 +186,7 @@ gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual
     if (s != GK_OK) {
         return s;
     }
-    q = actual.m3_per_s * f;
+    q = to_reference ? q_in * f : q_in / f;
     if (!gk_finite(q)) {
         return GK_ERR_RANGE;
     }
@@ -191,35 +194,15 @@ gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual
     return GK_OK;
 }
 
+gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
+                               gk_temperature t, gk_reference ref, gk_volume_flow *out) {
+    return flow_convert(eos, fluid, actual.m3_per_s, p, t, ref, 1, out);
+}
+
 gk_status gk_flow_from_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow at_reference,
                                  gk_reference ref, gk_pressure p, gk_temperature t,
                                  gk_volume_flow *out) {
-    gk_real f = GK_LIT(1.0), q;
-    gk_status s;
-    if (out == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
-    s = fluid_check(eos, fluid);
-    if (s != GK_OK) {
-        return s;
-    }
-    if (!gk_finite(at_reference.m3_per_s) || !gk_positive(p.pa) || !gk_positive(t.k)) {
-        return GK_ERR_DOMAIN;
-    }
-    s = reference_check(ref);
-    if (s != GK_OK) {
-        return s;
-    }
-    s = flow_factor(eos, fluid, p, t, ref, &f);
-    if (s != GK_OK) {
-        return s;
-    }
-    q = at_reference.m3_per_s / f;
-    if (!gk_finite(q)) {
-        return GK_ERR_RANGE;
-    }
-    out->m3_per_s = q;
-    return GK_OK;
+    return flow_convert(eos, fluid, at_reference.m3_per_s, p, t, ref, 0, out);
 }
 
 gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,

@@ -294,6 +294,44 @@ static void contract_solve(void **state) {
     assert_rel(r.molar_volume.m3_per_mol, 8.314462618 * 300.0 / 1.0e6, GK_TOL(1e-15, 1e-6));
 }
 
+/* Extreme magnitudes: p and T over the whole floating-point range, every model and root choice.
+   GK_OK must come with finite, positive Z, Vm and phi; any other status must leave the sentinel
+   in place (error contract, API.md). */
+static void extreme_magnitudes(void **state) {
+    (void)state;
+    gk_gas g = ref_gas(0.3);
+    const int lo = GK_TOL(-300, -37), hi = GK_TOL(300, 37);
+    size_t ok = 0, failed = 0;
+    for (int ep = lo; ep <= hi; ep += GK_TOL(20, 3)) {
+        for (int et = lo; et <= hi; et += GK_TOL(20, 3)) {
+            gk_pressure p = {(gk_real)pow(10.0, ep)};
+            gk_temperature t = {(gk_real)pow(10.0, et)};
+            for (int e = GK_EOS_IDEAL; e <= GK_EOS_PENG_ROBINSON; ++e) {
+                for (int root = GK_ROOT_STABLE; root <= GK_ROOT_LIQUID; ++root) {
+                    gk_eos_result r, keep;
+                    memset(&r, 0, sizeof r);
+                    r.z = GK_SENTINEL;
+                    keep = r;
+                    gk_status st = gk_eos_solve((gk_eos)e, &g, p, t, (gk_root)root, &r);
+                    if (st == GK_OK) {
+                        ++ok;
+                        assert_true(isfinite(r.z) && r.z > 0);
+                        assert_true(isfinite(r.molar_volume.m3_per_mol) && r.molar_volume.m3_per_mol > 0);
+                        assert_true(isfinite(r.fugacity_coefficient) && r.fugacity_coefficient > 0);
+                        assert_true(r.root_count >= 1 && r.root_count <= 3);
+                    } else {
+                        ++failed;
+                        assert_true(st == GK_ERR_RANGE || st == GK_ERR_NO_SOLUTION);
+                        assert_memory_equal(&r, &keep, sizeof r);
+                    }
+                }
+            }
+        }
+    }
+    assert_true(ok > 0);
+    print_message("extreme magnitudes: %zu GK_OK, %zu GK_ERR_RANGE / NO_SOLUTION\n", ok, failed);
+}
+
 static void contract_pressure_density(void **state) {
     (void)state;
     gk_gas g = ref_gas(0.2);
@@ -384,6 +422,7 @@ int main(void) {
         cmocka_unit_test(stable_root_switches_at_saturation),
         cmocka_unit_test(builtin_table_near_ambient),
         cmocka_unit_test(contract_solve),
+        cmocka_unit_test(extreme_magnitudes),
         cmocka_unit_test(contract_pressure_density),
         cmocka_unit_test(batch_matches_scalar),
     };

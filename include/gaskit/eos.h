@@ -138,8 +138,11 @@ typedef struct gk_eos_result {
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p gas or @p out is NULL, or @p eos or @p root out of range.
  * @retval GK_ERR_DOMAIN   p or T not finite or not > 0, or the gas data are not physical.
- * @retval GK_ERR_NO_SOLUTION No real root above the covolume.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_NO_SOLUTION No real root above the covolume (cannot happen for these models
+ *                            with physical data: one root always lies in (B, 1 + B]).
+ * @retval GK_ERR_RANGE    The result overflows or underflows (e.g. phi of a liquid root at an
+ *                         absurdly low temperature), or the root lies within rounding of the
+ *                         covolume and cannot be told from it.
  */
 GK_API gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
                               gk_root root, gk_eos_result *out);
