@@ -14,7 +14,7 @@ foreach(_l ${_lines})
   if(_l MATCHES "^[0-9a-fA-F]* *([A-Za-z]) ([^ @]+)")
     set(_type ${CMAKE_MATCH_1})
     set(_name ${CMAKE_MATCH_2})
-    if(_name MATCHES "^gk_[a-z0-9_]+$")
+    if(_name MATCHES "^gk_[a-z0-9][a-z0-9_]*$")
       math(EXPR _good "${_good} + 1")
     elseif(_type STREQUAL "A" AND _name MATCHES "^GASKIT_[0-9.]+$")
       # symbol-version node

@@ -5,6 +5,8 @@ Text seeds are typical inputs; numeric seeds encode plausible readings (an inven
 a 20 MPa cylinder, a 5 bar line, room conditions) as raw little-endian doubles in the layout
 fuzz_numeric.c reads (family byte, enum/gas bytes, then 8-byte reals), plus the special
 values NaN, +-Inf, -0, a subnormal and the largest double. Run from the fuzz/ folder.
+Inputs that once found a defect are kept beside them as corpus/<target>/regress-* (written by
+libFuzzer, not by this script), so CI replays them on every run.
 """
 import os
 import struct

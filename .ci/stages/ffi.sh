@@ -5,7 +5,7 @@
 # that gk_build_flags lets it adapt.
 set -euo pipefail
 cd "$(dirname "$0")/../.."
-[ -d "$HOME/.cargo/bin" ] && export PATH="$PATH:$HOME/.cargo/bin"
+[ -d "${HOME:-/nonexistent}/.cargo/bin" ] && export PATH="$PATH:$HOME/.cargo/bin"
 cmake -B build -DGASKIT_WERROR=ON -DGASKIT_FFI_EXAMPLES=ON
 cmake --build build -j2
 ctest --test-dir build --output-on-failure -V -L ffi | tee build/ffi.txt

@@ -64,7 +64,8 @@ def depth(fn, path):
     return worst[fn]
 
 
-public = sorted(f for f in frames if f.startswith("gk_") and ":" not in f)
+# Public: external gk_ functions; gk__ names are internal (hidden, shared between modules).
+public = sorted(f for f in frames if f.startswith("gk_") and not f.startswith("gk__") and ":" not in f)
 try:
     for f in public:
         depth(f, [])
