@@ -326,6 +326,13 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
             }
         }
     }
+    if (n == 1 && e == 0 && rknown > lo && gk_finite(rknown)) {
+        /* the common case of an equation of state: one root above lo, no scaling */
+        z[0] = rknown;
+        z[1] = GK_LIT(0.0);
+        z[2] = GK_LIT(0.0);
+        return 1;
+    }
     if (n == -2) n = cubic_isolate(&p, lo, hi, have_hi, hstep, have_known, rknown, r);
     if (n < 0) return -1;
 
