@@ -78,33 +78,50 @@ static gk_real cubic_halley(const cubic_poly *p, gk_real x, gk_real lo, gk_real 
 }
 
 /*
- * The largest root from a start x above the inflection point s = -c2/3, where f is convex: Halley's
- * iteration as in cubic_halley(), but instead of an isolating interval it checks at every iterate
- * that it stays on the convex and increasing side (x > s and f'(x) > 0). There, right of the local
- * minimum z2, f has at most one root (the largest), so every accepted iterate is on the way to it.
- * Where Halley's denominator is not positive (far above the root, f'^2 <= f f''/2) a Newton step
- * is taken instead, which from above on a convex f never passes the root. Returns 0 (and nothing
- * in *root) when an iterate leaves that side: then the largest root is below s or f has a
- * multiple root near z2, and the caller isolates the roots first. No square root, no isolation:
- * for most states of an equation of state this is the whole work.
+ * The largest root from a start x above the inflection point s = -c2/3, where f is convex. Every
+ * iterate is checked to stay on the convex and increasing side (x > s and f'(x) > 0). There, right
+ * of the local minimum z2, f has at most one root (the largest), so every accepted iterate is on
+ * the way to it. Returns 0 (and nothing in *root) when an iterate leaves that side: then the
+ * largest root is below s or f has a multiple root near z2, and the caller isolates the roots.
+ *
+ * The step. f is a cubic, so its Taylor expansion at x is exact: the root is x - h with
+ *     h = N + a h^2 - b h^3,   N = f/f',  a = f''/(2 f'),  b = f'''/(6 f') = 1/f'.
+ * Near the root (|aN| <= 1/16 and b N^2 <= 1/16) h is taken from the reversion of this series,
+ *     h = N (1 + aN + (2a^2 - b) N^2 + 5a (a^2 - b) N^3) + O(N^5)
+ * (one division, 1/f'; convergence of order 5), and the first omitted term
+ * N^5 (14 a^4 - 21 a^2 b + 3 b^2) predicts the error left: below one epsilon of x, the iteration
+ * stops without evaluating f again. Farther away Halley's step x - f f'/(f'^2 - f f''/2) is taken
+ * (a Newton step where its denominator is not positive; from above on a convex f Newton never
+ * passes the root). The iteration also stops when |f| stops decreasing (rounding level reached,
+ * the previous point is kept), or after GK_CUBIC_ITER_MAX steps.
  */
-static int cubic_halley_convex(const cubic_poly *p, gk_real x, gk_real s, gk_real *root) {
+static int cubic_descend(const cubic_poly *p, gk_real x, gk_real s, gk_real *root) {
     gk_real fx = cubic_f(p, x);
     int i;
     for (i = 0; i < GK_CUBIC_ITER_MAX; ++i) {
-        gk_real d1, d2, den, dx, xn, fn;
+        gk_real d1, d2h, dx, xn, fn, fd;
         if (!cubic_nonzero(fx)) break;
         d1 = cubic_df(p, x);
         if (!(d1 > GK_LIT(0.0))) return 0;
-        d2 = GK_LIT(6.0) * x + GK_LIT(2.0) * p->c2;
-        den = d1 * d1 - GK_LIT(0.5) * fx * d2;
-        dx = (den > GK_LIT(0.0)) ? fx * d1 / den : fx / d1;
-        xn = x - dx;
-        if (!(xn > s)) return 0;
-        if (den > GK_LIT(0.0) && gk_fabs(dx) * dx * dx * (d2 * d2 + GK_LIT(4.0) * d1) <=
-                                     GK_LIT(4.0) * CUBIC_EPS * d1 * d1 * gk_fabs(xn)) {
-            x = xn; /* the next correction would be below one rounding unit */
-            break;
+        d2h = GK_LIT(3.0) * x + p->c2; /* f''/2 */
+        fd = fx * d2h;                 /* a N = fd / f'^2 */
+        if (GK_LIT(16.0) * gk_fabs(fd) <= d1 * d1 && GK_LIT(16.0) * fx * fx <= d1 * d1 * d1) {
+            gk_real r = GK_LIT(1.0) / d1;
+            gk_real n = fx * r, an = fd * r * r, bn2 = n * n * r, an2 = an * an;
+            gk_real tail = n * ((GK_LIT(14.0) * an2 - GK_LIT(21.0) * bn2) * an2 +
+                                GK_LIT(3.0) * bn2 * bn2);
+            dx = n * (GK_LIT(1.0) + an + (GK_LIT(2.0) * an2 - bn2) + GK_LIT(5.0) * an * (an2 - bn2));
+            xn = x - dx;
+            if (!(xn > s)) return 0;
+            if (gk_fabs(tail) <= CUBIC_EPS * gk_fabs(xn)) {
+                x = xn; /* the error left is below one rounding unit */
+                break;
+            }
+        } else {
+            gk_real den = d1 * d1 - fd;
+            dx = (den > GK_LIT(0.0)) ? fx * d1 / den : fx / d1;
+            xn = x - dx;
+            if (!(xn > s)) return 0;
         }
         fn = cubic_f(p, xn);
         if (i > 0 && !(gk_fabs(fn) < gk_fabs(fx))) break; /* rounding level reached at x */
@@ -127,7 +144,7 @@ static int cubic_scale_exponent(gk_real c2, gk_real c1, gk_real c0) {
 /*
  * Isolation at the critical points and the roots from guarded starts (steps 2 to 4 of cubic.h):
  * the general path, for every case the convex iteration alone does not settle. rknown: the
- * largest root when the caller already has it from cubic_halley_convex() (have_known = 1); it is
+ * largest root when the caller already has it from cubic_descend() (have_known = 1); it is
  * used where the isolation confirms three real roots or one above z2. Writes up to three roots,
  * ascending, into r[] and returns their number (before the filtering against lo), -1 when an
  * intermediate is not finite.
@@ -308,7 +325,7 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
     if (have_hi && fs < GK_LIT(0.0)) {
         gk_real x0;
         x0 = hstep > s ? hstep : hi;
-        if (x0 > s && cubic_halley_convex(&p, x0, s, &rknown)) {
+        if (x0 > s && cubic_descend(&p, x0, s, &rknown)) {
             /* The largest root r2 is known. lo right of the local maximum z1 (lo >= s, or
                f'(lo) <= 0) with f(lo) < 0 lies between the middle and the largest root: one root
                above lo. Otherwise the sign of the deflated quadratic's discriminant
