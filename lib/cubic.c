@@ -84,44 +84,43 @@ static gk_real cubic_halley(const cubic_poly *p, gk_real x, gk_real lo, gk_real 
  * the way to it. Returns 0 (and nothing in *root) when an iterate leaves that side: then the
  * largest root is below s or f has a multiple root near z2, and the caller isolates the roots.
  *
- * The step. f is a cubic, so its Taylor expansion at x is exact: the root is x - h with
- *     h = N + a h^2 - b h^3,   N = f/f',  a = f''/(2 f'),  b = f'''/(6 f') = 1/f'.
- * Near the root (|aN| <= 1/16 and b N^2 <= 1/16) h is taken from the reversion of this series,
- *     h = N (1 + aN + (2a^2 - b) N^2 + 5a (a^2 - b) N^3) + O(N^5)
- * (one division, 1/f'; convergence of order 5), and the first omitted term
- * N^5 (14 a^4 - 21 a^2 b + 3 b^2) predicts the error left: below one epsilon of x, the iteration
- * stops without evaluating f again. Farther away Halley's step x - f f'/(f'^2 - f f''/2) is taken
- * (a Newton step where its denominator is not positive; from above on a convex f Newton never
- * passes the root). The iteration also stops when |f| stops decreasing (rounding level reached,
- * the previous point is kept), or after GK_CUBIC_ITER_MAX steps.
+ * The step is Householder's of order 4, x - f (f'^2 - f f''/2) / (f'^3 - f f' f'' + f^2 f'''/6)
+ * with f''' = 6: numerator and denominator are formed side by side and divided once, so a step
+ * costs one division on its critical path. A Newton step is taken where the denominator is not
+ * positive (far above the root; from above on a convex f Newton never passes the root).
+ * Stopping: f is a cubic, so its Taylor expansion at x is exact and the root is x - h with
+ *     h = N + a h^2 - b h^3,   N = f/f',  a = f''/(2 f'),  b = f'''/(6 f') = 1/f',
+ * whose reversion h = N (1 + aN + (2a^2 - b) N^2 + 5a (a^2 - b) N^3 + ...) the step reproduces
+ * up to N^3: the error it leaves is a (a^2 - 2b) N^4 to leading order. Near the root
+ * (|aN| <= 1/16 and b N^2 <= 1/16, where the series converges fast) the iteration stops when that
+ * prediction is below one epsilon of x, without evaluating f again; 1/f' for the prediction is a
+ * second, independent division, off the critical path. The iteration also stops when |f| stops
+ * decreasing (rounding level reached, the previous point is kept), or after GK_CUBIC_ITER_MAX
+ * steps.
  */
 static int cubic_descend(const cubic_poly *p, gk_real x, gk_real s, gk_real *root) {
     gk_real fx = cubic_f(p, x);
     int i;
     for (i = 0; i < GK_CUBIC_ITER_MAX; ++i) {
-        gk_real d1, d2h, dx, xn, fn, fd;
+        gk_real d1, d1s, fd, num, den, dx, xn, fn, r, g, k;
         if (!cubic_nonzero(fx)) break;
         d1 = cubic_df(p, x);
         if (!(d1 > GK_LIT(0.0))) return 0;
-        d2h = GK_LIT(3.0) * x + p->c2; /* f''/2 */
-        fd = fx * d2h;                 /* a N = fd / f'^2 */
-        if (GK_LIT(16.0) * gk_fabs(fd) <= d1 * d1 && GK_LIT(16.0) * fx * fx <= d1 * d1 * d1) {
-            gk_real r = GK_LIT(1.0) / d1;
-            gk_real n = fx * r, an = fd * r * r, bn2 = n * n * r, an2 = an * an;
-            gk_real tail = n * ((GK_LIT(14.0) * an2 - GK_LIT(21.0) * bn2) * an2 +
-                                GK_LIT(3.0) * bn2 * bn2);
-            dx = n * (GK_LIT(1.0) + an + (GK_LIT(2.0) * an2 - bn2) + GK_LIT(5.0) * an * (an2 - bn2));
-            xn = x - dx;
-            if (!(xn > s)) return 0;
-            if (gk_fabs(tail) <= CUBIC_EPS * gk_fabs(xn)) {
-                x = xn; /* the error left is below one rounding unit */
-                break;
-            }
-        } else {
-            gk_real den = d1 * d1 - fd;
-            dx = (den > GK_LIT(0.0)) ? fx * d1 / den : fx / d1;
-            xn = x - dx;
-            if (!(xn > s)) return 0;
+        fd = fx * (GK_LIT(3.0) * x + p->c2); /* f f''/2 */
+        d1s = d1 * d1;
+        num = fx * (d1s - fd);
+        den = d1 * (d1s - GK_LIT(2.0) * fd) + fx * fx;
+        dx = (den > GK_LIT(0.0)) ? num / den : fx / d1;
+        xn = x - dx;
+        if (!(xn > s)) return 0;
+        r = GK_LIT(1.0) / d1;
+        g = fd * r * r;          /* a N */
+        k = fx * fx * r * r * r; /* b N^2 */
+        if (den > GK_LIT(0.0) && GK_LIT(16.0) * gk_fabs(g) <= GK_LIT(1.0) &&
+            GK_LIT(16.0) * k <= GK_LIT(1.0) &&
+            gk_fabs(fx * r * g * (g * g - GK_LIT(2.0) * k)) <= CUBIC_EPS * gk_fabs(xn)) {
+            x = xn; /* the error left is below one rounding unit */
+            break;
         }
         fn = cubic_f(p, xn);
         if (i > 0 && !(gk_fabs(fn) < gk_fabs(fx))) break; /* rounding level reached at x */
@@ -321,7 +320,8 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
 
     /* 3. f(s) < 0: the largest root lies right of s (f(z2) <= f(s) < 0 when there are critical
        points), where f is convex and increasing: it is found first, from above, without
-       isolating the roots. f(s) > 0: a root lies left of s, and the isolation sorts out the rest. */
+       isolating the roots. f(s) > 0: a root lies left of s, and the isolation sorts out the
+       rest. */
     if (have_hi && fs < GK_LIT(0.0)) {
         gk_real x0;
         x0 = hstep > s ? hstep : hi;
