@@ -290,12 +290,12 @@ gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
  *   k2 = u + 2, k3 = u^2 + 3u - w + 3, k4 = 6u^2 + 20u - 4w + 20, k5 = u^3 + 4u^2 - 2uw + 6u - 4w + 4
  * (vdW 2, 3, 20, 4; RK/SRK 3, 7, 46, 15; PR 4, 14, 88, 48). No division. Its error is about
  * 14 A^5 for small A, B, so one solver step reaches full precision for A, B up to ~0.1; up to
- * EOS_GUESS_MAX it is still a better start than the bound 1 + B (measured: 1.83 -> 1.65 divisions
+ * EOS_GUESS_MAX it is still a better start than the bound 1 + B (measured: 1.83 -> 1.62 divisions
  * per Peng-Robinson state of the benchmark). The solver only uses it as a start (it checks that
  * it lies in (B, 1 + B) and on the convex side of the cubic), so it never changes the result
  * beyond rounding.
  */
-#define EOS_GUESS_MAX GK_LIT(0.5)
+#define EOS_GUESS_MAX GK_LIT(1.0)
 
 typedef struct eos_series { gk_real k2, k3, k4, k5; } eos_series;
 
