@@ -1,6 +1,8 @@
 /*
- * cubic.c - real roots of a monic cubic: isolation at the critical points, then Halley's
- * iteration from guarded starts. Method and error bound: see cubic.h and docs/cubic-solver.md.
+ * cubic.c - real roots of a monic cubic: the largest root first by an order-4 iteration on the
+ * convex side, then (only where more roots may lie above lo) isolation at the critical points and
+ * Halley's iteration from guarded starts. Method and error bound: see cubic.h and
+ * docs/cubic-solver.md.
  */
 #include "cubic.h"
 
@@ -141,7 +143,7 @@ static int cubic_scale_exponent(gk_real c2, gk_real c1, gk_real c0) {
 }
 
 /*
- * Isolation at the critical points and the roots from guarded starts (steps 2 to 4 of cubic.h):
+ * Isolation at the critical points and the roots from guarded starts (steps 4 and 5 of cubic.h):
  * the general path, for every case the convex iteration alone does not settle. rknown: the
  * largest root when the caller already has it from cubic_descend() (have_known = 1); it is
  * used where the isolation confirms three real roots or one above z2. Writes up to three roots,
@@ -153,7 +155,7 @@ static int cubic_isolate(const cubic_poly *p, gk_real lo, gk_real hi, int have_h
     gk_real c2 = p->c2, c1 = p->c1;
     gk_real dd, sd, z1, z2, f1, f2, t;
 
-    /* 2. critical points: 3 z^2 + 2 c2 z + c1 = 0, z = (-c2 +- sqrt(D)) / 3, D = c2^2 - 3 c1 */
+    /* 4. critical points: 3 z^2 + 2 c2 z + c1 = 0, z = (-c2 +- sqrt(D)) / 3, D = c2^2 - 3 c1 */
     dd = c2 * c2 - GK_LIT(3.0) * c1;
     if (!gk_finite(dd)) return -1;
     if (dd > GK_LIT(0.0)) {
@@ -202,7 +204,7 @@ static int cubic_isolate(const cubic_poly *p, gk_real lo, gk_real hi, int have_h
                 return 1;
             }
             {
-                /* 4. three real roots r0 <= z1 <= r1 <= z2 <= r2: the two smaller ones from the
+                /* 5. three real roots r0 <= z1 <= r1 <= z2 <= r2: the two smaller ones from the
                    deflated quadratic z^2 + (c2 + r2) z - c0/r2 (cancellation-free formula), each
                    then polished on the cubic inside its isolating interval */
                 gk_real e1 = c2 + rbig;
@@ -305,7 +307,7 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
     fs = cubic_f(&p, s);
     dd = c2 * c2 - GK_LIT(3.0) * c1; /* > 0: two critical points z1 < s < z2 */
 
-    /* the caller's estimate of the largest root, or one Householder step of order 4 from the
+    /* 2. the caller's estimate of the largest root, or one Householder step of order 4 from the
        upper bound hi, x - f (f'^2 - f f''/2) / (f'^3 - f f' f'' + f^2 f'''/6), with f''' = 6 */
     if (have_hi && guess > lo && guess < hi) {
         hstep = guess;
