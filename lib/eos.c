@@ -299,12 +299,17 @@ gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
 
 typedef struct eos_series { gk_real k2, k3, k4, k5; } eos_series;
 
+/* The series as a polynomial in A whose coefficients depend on B only,
+     Z = (1 + B) + A C1 + A^2 (C2 + A C3 - 5 A^2),
+     C1 = -1 + B (k2 - B (k3 - k5 B)),  C2 = -1 + B (3 k2 - k4 B),  C3 = -2 + 10 k2 B:
+   B is known before A (A waits for the square root in alpha(Tr)), so C1 ... C3 are ready when A
+   arrives and the start costs four dependent operations after it. */
 static inline gk_real eos_gas_guess(const eos_series *k, gk_real a, gk_real b) {
-    gk_real o2 = k->k2 * b - a;
-    gk_real o3 = (GK_LIT(2.0) * a - GK_LIT(3.0) * k->k2 * b) * a + k->k3 * b * b;
-    gk_real o4 = ((GK_LIT(10.0) * k->k2 * b - GK_LIT(5.0) * a) * a - k->k4 * b * b) * a +
-                 k->k5 * b * b * b;
-    return GK_LIT(1.0) + (b - a) + a * (o2 - o3 + o4);
+    gk_real c1 = GK_LIT(-1.0) + b * (k->k2 - b * (k->k3 - k->k5 * b));
+    gk_real c2 = GK_LIT(-1.0) + b * (GK_LIT(3.0) * k->k2 - k->k4 * b);
+    gk_real c3 = GK_LIT(-2.0) + GK_LIT(10.0) * k->k2 * b;
+    gk_real a2 = a * a;
+    return ((GK_LIT(1.0) + b) + a * c1) + a2 * ((c2 + a * c3) - GK_LIT(5.0) * a2);
 }
 
 /* gk__eos_solve_ab (see eos_internal.h); static, so that gk_eos_solve() inlines it. */
