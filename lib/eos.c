@@ -169,13 +169,17 @@ static inline gk_status eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real
             b = VDW_OMEGA_B * pr / tr;
         }
     } else {
-        /* three independent divisions (a pipelined processor overlaps them) */
+        /* three independent divisions (a pipelined processor overlaps them); alpha(Tr), which
+           waits for a division and a square root, enters last, with one multiplication
+           (Redlich-Kwong: alpha = 1/sqrt(Tr) as sqrt(Tc/T), without a second division) */
         gk_real tr = t / gas->critical_temperature.k;
         gk_real itr = gas->critical_temperature.k / t;
         gk_real pr = p / gas->critical_pressure.pa;
         gk_real pitr = pr * itr;
+        gk_real alpha = (eos == GK_EOS_REDLICH_KWONG) ? gk_sqrt(itr)
+                                                      : eos_alpha(eos, tr, gas->acentric_factor);
         eos_omegas(eos, &oa, &ob);
-        a = oa * eos_alpha(eos, tr, gas->acentric_factor) * pitr * itr;
+        a = alpha * (oa * pitr * itr);
         b = ob * pitr;
     }
     if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
