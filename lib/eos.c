@@ -316,7 +316,8 @@ static inline gk_real eos_gas_guess(const eos_series *k, gk_real a, gk_real b) {
     return ((GK_LIT(1.0) + b) + a * c1) + a2 * ((c2 + a * c3) - GK_LIT(5.0) * a2);
 }
 
-/* gk__eos_solve_ab (see eos_internal.h); static, so that gk_eos_solve() inlines it. */
+/* gk__eos_solve_ab (see eos_internal.h). gk_eos_solve() calls this directly (same translation
+   unit, no wrapper); gk__eos_solve_ab() wraps it for the mixture and van der Waals modules. */
 static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
                               gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
     gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm, guess, q, rtp, attr;
