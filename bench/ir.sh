@@ -2,6 +2,7 @@
 # Instruction counts (valgrind callgrind, load-independent) of one pass of each path of the
 # benchmark over the same 20000 states: gaskit (gk_eos_solve) and the GSL-based path.
 # Usage: bench/ir.sh BUILD_DIR [model 0..3, default 3 = Peng-Robinson] [low]
+# (build the bench_eos target first: cmake --build BUILD_DIR --target bench_eos; needs valgrind)
 set -e
 dir=${1:-build}
 model=${2:-3}
