@@ -21,6 +21,8 @@
 #include <math.h>
 #include <stdio.h>
 #include <stdint.h>
+#include <stdlib.h>
+#include <string.h>
 #include <time.h>
 #include <gsl/gsl_poly.h>
 #include <gsl/gsl_version.h>
@@ -157,11 +159,7 @@ static double uniform01(void) {
 
 static double T[NSTATES], P[NSTATES];
 
-/* Times and checks the models [first, last] of MODELS over NSTATES states drawn (fixed seed)
-   from tr_lo < Tr < tr_hi, pr_lo < Pr < pr_hi (Pr log-uniform); prints one row per model. */
-static int run_table(size_t first, size_t last, double tr_lo, double tr_hi, double pr_lo, double pr_hi) {
-    gk_gas gas = {"bench gas", "X", {(gk_real)0.030}, {(gk_real)TC}, {(gk_real)PC}, (gk_real)OMEGA,
-                  0, 0, 0, 0};
+static void make_states(double tr_lo, double tr_hi, double pr_lo, double pr_hi) {
     rng_state = 0x9E3779B97F4A7C15ull;
     for (int i = 0; i < NSTATES; ++i) {
         double tr = tr_lo + (tr_hi - tr_lo) * uniform01();
@@ -169,6 +167,44 @@ static int run_table(size_t first, size_t last, double tr_lo, double tr_hi, doub
         T[i] = tr * TC;
         P[i] = pr * PC;
     }
+}
+
+#if defined(__GNUC__)
+#  define BENCH_NOINLINE __attribute__((noinline))
+#else
+#  define BENCH_NOINLINE
+#endif
+
+/* One pass of each path over the states, in functions of their own, so that an instruction
+   counter sees each path's inclusive cost apart (`--ir`, see bench/ir.sh):
+   valgrind --tool=callgrind ./bench_eos --ir [model] ; callgrind_annotate --inclusive=yes. */
+BENCH_NOINLINE static double pass_gaskit(const model *m, const gk_gas *gas) {
+    double s = 0.0;
+    for (int i = 0; i < NSTATES; ++i) {
+        gk_eos_result r;
+        gk_pressure p = {(gk_real)P[i]};
+        gk_temperature t = {(gk_real)T[i]};
+        if (gk_eos_solve(m->eos, gas, p, t, GK_ROOT_STABLE, &r) == GK_OK)
+            s += (double)r.z + (double)r.fugacity_coefficient + (double)r.molar_volume.m3_per_mol;
+    }
+    return s;
+}
+
+BENCH_NOINLINE static double pass_gsl(const model *m) {
+    double s = 0.0;
+    for (int i = 0; i < NSTATES; ++i) {
+        double phi = 0, vm = 0;
+        s += gsl_solve(m, T[i], P[i], &phi, &vm) + phi + vm;
+    }
+    return s;
+}
+
+/* Times and checks the models [first, last] of MODELS over NSTATES states drawn (fixed seed)
+   from tr_lo < Tr < tr_hi, pr_lo < Pr < pr_hi (Pr log-uniform); prints one row per model. */
+static int run_table(size_t first, size_t last, double tr_lo, double tr_hi, double pr_lo, double pr_hi) {
+    gk_gas gas = {"bench gas", "X", {(gk_real)0.030}, {(gk_real)TC}, {(gk_real)PC}, (gk_real)OMEGA,
+                  0, 0, 0, 0};
+    make_states(tr_lo, tr_hi, pr_lo, pr_hi);
     printf("\n%d states, %g < Tr < %g, %g < Pr < %g (fixed seed), %d repeats\n", NSTATES, tr_lo, tr_hi,
            pr_lo, pr_hi, REPEAT);
     printf("%-20s %10s %10s %7s %7s | %10s %10s %5s | %10s %10s %5s\n", "model", "gaskit ns", "GSL ns",
@@ -177,23 +213,11 @@ static int run_table(size_t first, size_t last, double tr_lo, double tr_hi, doub
         const model *m = &MODELS[mi];
         double best_gk = 1e300, best_gsl = 1e300, ratios[REPEAT];
         for (int rep = 0; rep < REPEAT; ++rep) {
-            double s = 0.0, t0 = now_ns();
-            for (int i = 0; i < NSTATES; ++i) {
-                gk_eos_result r;
-                gk_pressure p = {(gk_real)P[i]};
-                gk_temperature t = {(gk_real)T[i]};
-                if (gk_eos_solve(m->eos, &gas, p, t, GK_ROOT_STABLE, &r) == GK_OK)
-                    s += (double)r.z + (double)r.fugacity_coefficient + (double)r.molar_volume.m3_per_mol;
-            }
+            double t0 = now_ns();
+            sink = pass_gaskit(m, &gas);
             double t1 = now_ns();
-            sink = s;
-            s = 0.0;
-            for (int i = 0; i < NSTATES; ++i) {
-                double phi = 0, vm = 0;
-                s += gsl_solve(m, T[i], P[i], &phi, &vm) + phi + vm;
-            }
+            sink = pass_gsl(m);
             double t2 = now_ns();
-            sink = s;
             if (t1 - t0 < best_gk) best_gk = t1 - t0;
             if (t2 - t1 < best_gsl) best_gsl = t2 - t1;
             ratios[rep] = (t1 - t0) / (t2 - t1);
@@ -242,7 +266,21 @@ static int run_table(size_t first, size_t last, double tr_lo, double tr_hi, doub
     return 0;
 }
 
-int main(void) {
+int main(int argc, char **argv) {
+    if (argc > 1 && strcmp(argv[1], "--ir") == 0) {
+        /* one pass of each path over the goal's states (for an instruction counter, no timing) */
+        gk_gas gas = {"bench gas", "X", {(gk_real)0.030}, {(gk_real)TC}, {(gk_real)PC},
+                      (gk_real)OMEGA, 0, 0, 0, 0};
+        int mi = argc > 2 ? atoi(argv[2]) : 3;
+        double tr_lo = 0.45, tr_hi = 3.0, pr_hi = 10.0;
+        if (mi < 0 || mi > 3) mi = 3;
+        if (argc > 3 && strcmp(argv[3], "low") == 0) { tr_lo = 0.3; tr_hi = 0.45; pr_hi = 1.0; }
+        make_states(tr_lo, tr_hi, 0.001, pr_hi);
+        sink = pass_gaskit(&MODELS[mi], &gas);
+        sink = pass_gsl(&MODELS[mi]);
+        printf("%s: one pass of each path over %d states\n", MODELS[mi].name, NSTATES);
+        return 0;
+    }
     printf("gaskit %s (%s build) vs gsl_poly_solve_cubic (GSL %s)\n", gk_version(),
            (gk_build_flags() & GK_BUILD_FLOAT) ? "float" : "double", GSL_VERSION);
     printf("reference: roots of both paths polished by Newton in long double (%d-bit mantissa)\n",

@@ -94,7 +94,7 @@ static int critical_ok(const gk_gas *gas) {
     return gk_positive(gas->critical_temperature.k) && gk_positive(gas->critical_pressure.pa);
 }
 
-gk_status gk__eos_check_gas(gk_eos eos, const gk_gas *gas) {
+static inline gk_status eos_check_gas(gk_eos eos, const gk_gas *gas) {
     if (gas == NULL) return GK_ERR_ARGUMENT;
     switch (eos) {
     case GK_EOS_IDEAL:
@@ -118,7 +118,7 @@ gk_status gk__eos_check_gas(gk_eos eos, const gk_gas *gas) {
 }
 
 /* Temperature function alpha(Tr) of each model (Tr > 0). */
-static gk_real eos_alpha(gk_eos eos, gk_real tr, gk_real omega) {
+static inline gk_real eos_alpha(gk_eos eos, gk_real tr, gk_real omega) {
     gk_real m, s;
     switch (eos) {
     case GK_EOS_REDLICH_KWONG:
@@ -138,7 +138,7 @@ static gk_real eos_alpha(gk_eos eos, gk_real tr, gk_real omega) {
     return s * s;
 }
 
-static void eos_omegas(gk_eos eos, gk_real *oa, gk_real *ob) {
+static inline void eos_omegas(gk_eos eos, gk_real *oa, gk_real *ob) {
     switch (eos) {
     case GK_EOS_REDLICH_KWONG:
     case GK_EOS_SOAVE_REDLICH_KWONG: *oa = RK_OMEGA_A; *ob = RK_OMEGA_B; break;
@@ -149,7 +149,8 @@ static void eos_omegas(gk_eos eos, gk_real *oa, gk_real *ob) {
     }
 }
 
-gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *a_out, gk_real *b_out) {
+static inline gk_status eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *a_out,
+                        gk_real *b_out) {
     gk_real a, b, oa, ob;
     if (eos == GK_EOS_VAN_DER_WAALS && (gas->vdw_a > GK_LIT(0.0) || gas->vdw_b > GK_LIT(0.0))) {
         /* handbook constant(s) in SI; the other (if 0) from Tc, Pc */
@@ -168,13 +169,17 @@ gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_rea
             b = VDW_OMEGA_B * pr / tr;
         }
     } else {
-        /* three independent divisions (a pipelined processor overlaps them) */
+        /* three independent divisions (a pipelined processor overlaps them); alpha(Tr), which
+           waits for a division and a square root, enters last, with one multiplication
+           (Redlich-Kwong: alpha = 1/sqrt(Tr) as sqrt(Tc/T), without a second division) */
         gk_real tr = t / gas->critical_temperature.k;
         gk_real itr = gas->critical_temperature.k / t;
         gk_real pr = p / gas->critical_pressure.pa;
         gk_real pitr = pr * itr;
+        gk_real alpha = (eos == GK_EOS_REDLICH_KWONG) ? gk_sqrt(itr)
+                                                      : eos_alpha(eos, tr, gas->acentric_factor);
         eos_omegas(eos, &oa, &ob);
-        a = oa * eos_alpha(eos, tr, gas->acentric_factor) * pitr * itr;
+        a = alpha * (oa * pitr * itr);
         b = ob * pitr;
     }
     if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
@@ -184,14 +189,11 @@ gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_rea
     return GK_OK;
 }
 
-/* Below this x, ln(1 + x)/x is taken from its series (truncation below x^4/5 < 2e-17). */
-#define LN1P_SERIES_MAX GK_LIT(1e-4)
+gk_status gk__eos_check_gas(gk_eos eos, const gk_gas *gas) { return eos_check_gas(eos, gas); }
 
-/* ln(1 + x)/x for x >= 0, accurate also as x -> 0. */
-static gk_real eos_ln1p_ratio(gk_real x) {
-    if (x < LN1P_SERIES_MAX)
-        return GK_LIT(1.0) - x * (GK_LIT(0.5) - x * (GK_LIT(1.0) / GK_LIT(3.0) - x * GK_LIT(0.25)));
-    return gk_log(GK_LIT(1.0) + x) / x;
+gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *a_out,
+                     gk_real *b_out) {
+    return eos_ab(eos, gas, p, t, a_out, b_out);
 }
 
 /*
@@ -200,21 +202,45 @@ static gk_real eos_ln1p_ratio(gk_real x) {
  *   RK, SRK:              ln phi = Z - 1 - ln(Z - B) - (A/B) ln(1 + B/Z)
  *   Peng-Robinson:        ln phi = Z - 1 - ln(Z - B)
  *                                  - A / (2 sqrt2 B) ln((Z + (1 + sqrt2) B) / (Z + (1 - sqrt2) B))
- * The last term is written (A/den) L(x) with L(x) = ln(1 + x)/x, den = Z + (1 - sqrt2) B (or Z)
- * and x = 2 sqrt2 B/den (or B/Z), so it stays accurate when B -> 0. ln(1 + x) rounds 1 + x:
- * absolute error about u (A/B) in ln phi, below 1e-14 for the states of the tests.
+ * The last term ("attraction") is written with ln((1 + t)/(1 - t)) = 2 atanh(t):
+ *   RK, SRK:  t = B / (2Z + B),          attraction = 2A / (2Z + B) * S(t^2),
+ *   PR:       t = sqrt2 B / (Z + B),     attraction = A / (Z + B) * S(t^2),
+ * S(y) = atanh(t)/t = 1 + y/3 + y^2/5 + ... For t^2 < 2^-8 (B below about 0.04 Z: most gas
+ * states) S is its series to y^6/13 (the first omitted term, y^7/15 < 2^-56/15, is below a tenth
+ * of a rounding unit): no logarithm, and exact as B -> 0. Otherwise the closed form with one
+ * logarithm, q ln(1 + x), x = 2t/(1 - t) (q = A/B or A/(2 sqrt2 B)); ln rounds 1 + x, an absolute
+ * error of about u q in ln phi (u the unit roundoff), below 1e-14 for the states of the tests.
  */
-/* q: the factor of the logarithm, A/B (RK, SRK) or A/(2 sqrt2 B) (PR), see eos_log_factor(). */
-static gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_real q, gk_real z) {
+/* Largest t^2 for the series of atanh(t)/t (2^-8, exact in binary). */
+#define ATANH_SERIES_MAX GK_LIT(0.00390625)
+
+/* atanh(t)/t = sum_k y^k / (2k + 1), y = t^2 < 2^-8, to y^6 (Estrin's scheme: short latency). */
+static inline gk_real eos_atanh_ratio(gk_real y) {
+    gk_real y2 = y * y;
+    gk_real p01 = GK_LIT(1.0) + y * (GK_LIT(1.0) / GK_LIT(3.0));
+    gk_real p23 = GK_LIT(1.0) / GK_LIT(5.0) + y * (GK_LIT(1.0) / GK_LIT(7.0));
+    gk_real p45 = GK_LIT(1.0) / GK_LIT(9.0) + y * (GK_LIT(1.0) / GK_LIT(11.0));
+    gk_real p6 = GK_LIT(1.0) / GK_LIT(13.0);
+    return p01 + y2 * (p23 + y2 * (p45 + y2 * p6));
+}
+
+/* The attraction term of ln phi at Z (see above); q: A/B (RK, SRK) or A/(2 sqrt2 B) (PR), see
+   eos_log_factor(). */
+static inline gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_real q, gk_real z) {
     switch (family) {
     case GK__FAMILY_RK: {
-        gk_real x = b / z;
-        return (x < LN1P_SERIES_MAX) ? (a / z) * eos_ln1p_ratio(x) : q * gk_log(GK_LIT(1.0) + x);
+        gk_real inv = GK_LIT(1.0) / (GK_LIT(2.0) * z + b); /* one division for t and A/(2Z + B) */
+        gk_real t = b * inv, y = t * t;
+        return (y < ATANH_SERIES_MAX) ? GK_LIT(2.0) * (a * inv) * eos_atanh_ratio(y)
+                                      : q * gk_log(GK_LIT(1.0) + b / z);
     }
     case GK__FAMILY_PR: {
-        gk_real den = z + (GK_LIT(1.0) - GK_SQRT2) * b; /* > 0 since z > b */
-        gk_real x = GK_LIT(2.0) * GK_SQRT2 * b / den;
-        return (x < LN1P_SERIES_MAX) ? (a / den) * eos_ln1p_ratio(x) : q * gk_log(GK_LIT(1.0) + x);
+        gk_real inv = GK_LIT(1.0) / (z + b); /* one division for t and A/(Z + B) */
+        gk_real t = GK_SQRT2 * b * inv, y = t * t;
+        return (y < ATANH_SERIES_MAX)
+                   ? (a * inv) * eos_atanh_ratio(y)
+                   : q * gk_log(GK_LIT(1.0) + GK_LIT(2.0) * GK_SQRT2 * b /
+                                                  (z + (GK_LIT(1.0) - GK_SQRT2) * b));
     }
     case GK__FAMILY_VDW:
     default:
@@ -233,15 +259,14 @@ static gk_real eos_log_factor(gk__cubic_family family, gk_real a, gk_real b) {
     }
 }
 
-static gk_real eos_lnphi(gk__cubic_family family, gk_real a, gk_real b, gk_real q, gk_real z) {
-    return (z - GK_LIT(1.0)) - gk_log(z - b) - eos_attraction(family, a, b, q, z);
-}
-
 /* phi = exp(Z - 1 - attraction) / (Z - B): one logarithm fewer than exp(ln phi); falls back to
-   exp(ln phi) where the first factor would leave the floating-point range. */
-static gk_real eos_phi(gk__cubic_family family, gk_real a, gk_real b, gk_real q, gk_real z) {
-    gk_real e = (z - GK_LIT(1.0)) - eos_attraction(family, a, b, q, z);
-    gk_real phi = gk_exp(e) / (z - b);
+   exp(ln phi) where the first factor would leave the floating-point range. The reciprocal of
+   Z - B is formed before the exponential, so its division runs while exp() does (one rounding
+   more: below 1.2e-16 relative in double). */
+static gk_real eos_phi(gk_real attraction, gk_real b, gk_real z) {
+    gk_real inv = GK_LIT(1.0) / (z - b);
+    gk_real e = (z - GK_LIT(1.0)) - attraction;
+    gk_real phi = gk_exp(e) * inv;
     if (!(phi > GK_LIT(0.0)) || !gk_finite(phi)) phi = gk_exp(e - gk_log(z - b));
     return phi;
 }
@@ -260,31 +285,67 @@ gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
     return GK_OK;
 }
 
-/* Largest A and B for the series start of the gas root (its error, ~A (A + B)^2, then stays
-   below ~1e-3, inside the region where one or two Halley steps reach full precision). */
-#define EOS_GUESS_MAX GK_LIT(0.1)
+/*
+ * Start for the gas root: the expansion of Z = 1 + B - A (Z - B)/D(Z) about Z = 1 (fixed-point
+ * iteration with each order collected; derived with a computer-algebra system, sympy 1.14), to
+ * fourth order in (A, B):
+ *   Z = 1 + (B - A) + A (k2 B - A) - A (2 A^2 - 3 k2 A B + k3 B^2)
+ *         + A (-5 A^3 + 10 k2 A^2 B - k4 A B^2 + k5 B^3) + O((A + B)^5),
+ *   k2 = u + 2, k3 = u^2 + 3u - w + 3, k4 = 6u^2 + 20u - 4w + 20, k5 = u^3 + 4u^2 - 2uw + 6u - 4w + 4
+ * (vdW 2, 3, 20, 4; RK/SRK 3, 7, 46, 15; PR 4, 14, 88, 48). No division. Its error is about
+ * 14 A^5 for small A, B, so one solver step reaches full precision for A, B up to ~0.1; up to
+ * EOS_GUESS_MAX it is still a better start than the bound 1 + B (measured: 1.83 -> 1.62 divisions
+ * per Peng-Robinson state of the benchmark). The solver only uses it as a start (it checks that
+ * it lies in (B, 1 + B) and on the convex side of the cubic), so it never changes the result
+ * beyond rounding.
+ */
+#define EOS_GUESS_MAX GK_LIT(1.0)
 
-gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
-                           gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
-    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm, guess, q, rtp, lnphi = GK_LIT(0.0);
-    int n, pick, have_lnphi = 0;
+typedef struct eos_series { gk_real k2, k3, k4, k5; } eos_series;
+
+/* The series as a polynomial in A whose coefficients depend on B only,
+     Z = (1 + B) + A C1 + A^2 (C2 + A C3 - 5 A^2),
+     C1 = -1 + B (k2 - B (k3 - k5 B)),  C2 = -1 + B (3 k2 - k4 B),  C3 = -2 + 10 k2 B:
+   B is known before A (A waits for the square root in alpha(Tr)), so C1 ... C3 are ready when A
+   arrives and the start costs four dependent operations after it. */
+static inline gk_real eos_gas_guess(const eos_series *k, gk_real a, gk_real b) {
+    gk_real c1 = GK_LIT(-1.0) + b * (k->k2 - b * (k->k3 - k->k5 * b));
+    gk_real c2 = GK_LIT(-1.0) + b * (GK_LIT(3.0) * k->k2 - k->k4 * b);
+    gk_real c3 = GK_LIT(-2.0) + GK_LIT(10.0) * k->k2 * b;
+    gk_real a2 = a * a;
+    return ((GK_LIT(1.0) + b) + a * c1) + a2 * ((c2 + a * c3) - GK_LIT(5.0) * a2);
+}
+
+/* gk__eos_solve_ab (see eos_internal.h). gk_eos_solve() calls this directly (same translation
+   unit, no wrapper); gk__eos_solve_ab() wraps it for the mixture and van der Waals modules. */
+static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
+                              gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
+    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm, guess, q, rtp, attr;
+    int n;
     gk_root branch;
 
+    eos_series k;
+
     switch (family) {
-    case GK__FAMILY_RK: u = GK_LIT(1.0); w = GK_LIT(0.0); break;
-    case GK__FAMILY_PR: u = GK_LIT(2.0); w = GK_LIT(-1.0); break;
+    case GK__FAMILY_RK:
+        u = GK_LIT(1.0); w = GK_LIT(0.0);
+        k.k2 = GK_LIT(3.0); k.k3 = GK_LIT(7.0); k.k4 = GK_LIT(46.0); k.k5 = GK_LIT(15.0);
+        break;
+    case GK__FAMILY_PR:
+        u = GK_LIT(2.0); w = GK_LIT(-1.0);
+        k.k2 = GK_LIT(4.0); k.k3 = GK_LIT(14.0); k.k4 = GK_LIT(88.0); k.k5 = GK_LIT(48.0);
+        break;
     case GK__FAMILY_VDW:
-    default:            u = GK_LIT(0.0); w = GK_LIT(0.0); break;
+    default:
+        u = GK_LIT(0.0); w = GK_LIT(0.0);
+        k.k2 = GK_LIT(2.0); k.k3 = GK_LIT(3.0); k.k4 = GK_LIT(20.0); k.k5 = GK_LIT(4.0);
+        break;
     }
     c2 = -(GK_LIT(1.0) + b - u * b);
     c1 = a - b * (u + (u - w) * b);
     c0 = -b * (a + w * b * (GK_LIT(1.0) + b));
 
-    /* small A and B: Z = 1 + B - A - A^2 + A B (2 + u) + O(A (A + B)^2) (expansion of
-       Z = 1 + B - A (Z - B)/D(Z) about Z = 1) is a start for the gas root without a division */
-    guess = (a < EOS_GUESS_MAX && b < EOS_GUESS_MAX)
-                ? GK_LIT(1.0) + b - a * (GK_LIT(1.0) + a) + a * b * (GK_LIT(2.0) + u)
-                : GK_LIT(0.0);
+    guess = (a < EOS_GUESS_MAX && b < EOS_GUESS_MAX) ? eos_gas_guess(&k, a, b) : GK_LIT(0.0);
     q = eos_log_factor(family, a, b);
     rtp = GK_R * t / p;
     n = gk__cubic_roots(c2, c1, c0, b, GK_LIT(1.0) + b, guess, zr);
@@ -294,27 +355,32 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
     if (n <= 0) return GK_ERR_RANGE;
 
     if (n == 1) {
-        pick = 0;
-        branch = (zr[0] < vc_over_b * b) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
+        zsel = zr[0];
+        branch = (zsel < vc_over_b * b) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
+        attr = eos_attraction(family, a, b, q, zsel);
     } else if (root == GK_ROOT_LIQUID) {
-        pick = 0;
+        zsel = zr[0];
         branch = GK_ROOT_LIQUID;
+        attr = eos_attraction(family, a, b, q, zsel);
     } else if (root == GK_ROOT_GAS) {
-        pick = n - 1;
+        zsel = zr[n - 1];
         branch = GK_ROOT_GAS;
+        attr = eos_attraction(family, a, b, q, zsel);
     } else {
-        /* stable: the lower fugacity (same p, T: the lower Gibbs energy); a tie goes to the gas */
-        gk_real lg = eos_lnphi(family, a, b, q, zr[n - 1]);
-        gk_real ll = eos_lnphi(family, a, b, q, zr[0]);
-        if (ll < lg) {
-            pick = 0; branch = GK_ROOT_LIQUID; lnphi = ll;
+        /* stable: the lower fugacity (same p, T: the lower Gibbs energy); a tie goes to the gas.
+           ln phi_L - ln phi_G = (zL - zG) - ln((zL - B)/(zG - B)) - (attr_L - attr_G): one
+           logarithm for the first difference, and each attraction term is the one phi needs */
+        gk_real zl = zr[0], zg = zr[n - 1];
+        gk_real al = eos_attraction(family, a, b, q, zl);
+        gk_real ag = eos_attraction(family, a, b, q, zg);
+        gk_real dl = (zl - zg) - gk_log((zl - b) / (zg - b)) - (al - ag);
+        if (dl < GK_LIT(0.0)) {
+            zsel = zl; branch = GK_ROOT_LIQUID; attr = al;
         } else {
-            pick = n - 1; branch = GK_ROOT_GAS; lnphi = lg;
+            zsel = zg; branch = GK_ROOT_GAS; attr = ag;
         }
-        have_lnphi = 1;
     }
-    zsel = zr[pick];
-    phi = have_lnphi ? gk_exp(lnphi) : eos_phi(family, a, b, q, zsel);
+    phi = eos_phi(attr, b, zsel);
     vm = zsel * rtp;
     if (!gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
 
@@ -329,26 +395,25 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
     return GK_OK;
 }
 
+gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
+                           gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
+    return eos_solve_ab(family, vc_over_b, a, b, p, t, root, out);
+}
+
 gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
                        gk_root root, gk_eos_result *out) {
-    gk_eos_result r;
     gk_real a, b;
     gk_status st;
     if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
     st = gk__eos_check_state(p, t, root);
     if (st != GK_OK) return st;
-    if (eos == GK_EOS_IDEAL) {
-        st = gk__eos_ideal(p.pa, t.k, &r);
-    } else {
-        st = gk__eos_check_gas(eos, gas);
-        if (st != GK_OK) return st;
-        st = gk__eos_ab(eos, gas, p.pa, t.k, &a, &b);
-        if (st != GK_OK) return st;
-        st = gk__eos_solve_ab(gk__eos_family(eos), gk__eos_vc_over_b(eos), a, b, p.pa, t.k, root, &r);
-    }
+    if (eos == GK_EOS_IDEAL) return gk__eos_ideal(p.pa, t.k, out);
+    st = eos_check_gas(eos, gas);
     if (st != GK_OK) return st;
-    *out = r;
-    return GK_OK;
+    st = eos_ab(eos, gas, p.pa, t.k, &a, &b);
+    if (st != GK_OK) return st;
+    /* writes *out only on success */
+    return eos_solve_ab(gk__eos_family(eos), gk__eos_vc_over_b(eos), a, b, p.pa, t.k, root, out);
 }
 
 gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_temperature t,

@@ -66,6 +66,24 @@ static void one_real_root(void **state) {
     assert_rel(z[0], 2.0, GK_TOL(4e-16, 2e-7));
 }
 
+/* Caller's estimate of the largest root below it (above the local minimum), on both paths of
+   the solver: (z + 2)(z + 1)(z - 4) = z^3 - z^2 - 10 z - 8 (f < 0 at the inflection point) with
+   the estimate 2.5 (local minimum about 2.19) and the bound hi = 8; and
+   (z + 40)(z - 10)(z - 20) = z^3 + 10 z^2 - 1000 z + 8000 (f > 0 at the inflection point) with the
+   estimate 15.5 (local minimum about 15.23) and hi = 80. Integer roots, exact coefficients. */
+static void estimate_below_root(void **state) {
+    (void)state;
+    gk_real z[3];
+    assert_int_equal(gk__cubic_roots(-1, -10, -8, (gk_real)-1e30, 8, (gk_real)2.5, z), 3);
+    assert_rel(z[0], -2.0, GK_TOL(4e-16, 2e-7));
+    assert_rel(z[1], -1.0, GK_TOL(4e-16, 2e-7));
+    assert_rel(z[2], 4.0, GK_TOL(4e-16, 2e-7));
+    assert_int_equal(gk__cubic_roots(10, -1000, 8000, (gk_real)-1e30, 80, (gk_real)15.5, z), 3);
+    assert_rel(z[0], -40.0, GK_TOL(4e-16, 2e-7));
+    assert_rel(z[1], 10.0, GK_TOL(4e-16, 2e-7));
+    assert_rel(z[2], 20.0, GK_TOL(4e-16, 2e-7));
+}
+
 /* Multiple roots. (z - 3/8)^3: the van der Waals critical point (Zc = 3/8, check-values.md);
    coefficients 1.125, 0.421875, 0.052734375 are exact. */
 static void triple_and_double_roots(void **state) {
@@ -153,6 +171,7 @@ int main(void) {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(known_roots),
         cmocka_unit_test(one_real_root),
+        cmocka_unit_test(estimate_below_root),
         cmocka_unit_test(triple_and_double_roots),
         cmocka_unit_test(scaled_inputs),
         cmocka_unit_test(small_liquid_root),
