@@ -12,8 +12,10 @@
 #include "gk_internal.h"
 #include "mixture_internal.h"
 
+/* Compared as unsigned: a negative value wraps above the last model, and the test stays
+   meaningful where the enum is one unsigned byte (-fshort-enums, the arm-none-eabi default). */
 static int eos_valid(gk_eos eos) {
-    return ((int)eos >= (int)GK_EOS_IDEAL && (int)eos <= (int)GK_EOS_PENG_ROBINSON) ? 1 : 0;
+    return ((unsigned)eos <= (unsigned)GK_EOS_PENG_ROBINSON) ? 1 : 0;
 }
 
 /* The fluid names exactly one of a gas and a mixture, and the model is one of gk_eos. */
@@ -230,7 +232,7 @@ gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_
     /* rho = p M / (Z R T) */
     rho = (p.pa / (z * GK_R * t.k)) * m;
     w = actual.m3_per_s * rho;
-    if (!gk_finite(rho) || !gk_finite(w)) {
+    if (!gk_positive(rho) || !gk_finite(w)) {
         return GK_ERR_RANGE;
     }
     out->kg_per_s = w;
@@ -272,7 +274,8 @@ gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel, gk_pr
     n = (p.pa / (z * GK_R * t.k)) * vessel.m3;
     mass = n * m;
     v_ref = n * (z_ref * GK_R * ref.t.k / ref.p.pa);
-    if (!gk_finite(n) || !gk_finite(mass) || !gk_finite(v_ref)) {
+    /* an amount, mass or volume that overflows or underflows to 0 cannot be reported */
+    if (!gk_positive(n) || !gk_positive(mass) || !gk_positive(v_ref)) {
         return GK_ERR_RANGE;
     }
     out->amount.mol = n;

@@ -188,6 +188,23 @@ static void liquefied_gas_is_out_of_range(void **state) {
    and 20 degC. Ideal: n = pV / (RT) = 61.5413721874 mol whatever the composition; mass with
    M = 0.05 x 44.009 + 0.95 x 28.014 g/mol is 1.77323771287 kg (mpmath). The real-gas models
    take the mixture path; zero k_ij given explicitly equal NULL, an asymmetric k_ij is rejected. */
+/* Contents so small that the amount underflows to 0 cannot be reported: GK_ERR_RANGE, never
+   GK_OK with a zero amount (a libFuzzer finding, kept in fuzz/corpus/numeric/). */
+static void vessel_contents_underflow(void **state) {
+    (void)state;
+    gk_contents c = {{GK_SENTINEL}, {GK_SENTINEL}, {GK_SENTINEL}, GK_SENTINEL};
+    /* p V / (R T) = 1e-30 Pa x 1e-300 m3 (double) or 1e-30 m3 (float) / 2.4e3 J/mol: below
+       the smallest subnormal of either precision */
+    gk_volume tiny = M3(GK_TOL(1e-300, 1e-30));
+    assert_status(gk_vessel_contents(GK_EOS_IDEAL, pure("N2"), tiny, PA(1e-30), KEL(293.15),
+                                     ref_of(GK_REF_0C_101325PA), &c),
+                  GK_ERR_RANGE);
+    assert_untouched(c.amount.mol);
+    assert_untouched(c.mass.kg);
+    assert_untouched(c.reference_volume.m3);
+    assert_untouched(c.z);
+}
+
 static void mixture_vessel_contents(void **state) {
     (void)state;
     gk_mixture m;
@@ -591,6 +608,7 @@ int main(void) {
         cmocka_unit_test(nitrogen_cylinder_ideal_vs_real),
         cmocka_unit_test(carbon_dioxide_gas_region),
         cmocka_unit_test(liquefied_gas_is_out_of_range),
+        cmocka_unit_test(vessel_contents_underflow),
         cmocka_unit_test(mixture_vessel_contents),
         cmocka_unit_test(wet_gas_correction_recipe),
         cmocka_unit_test(leak_rate_values),
