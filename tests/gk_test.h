@@ -57,4 +57,46 @@ static inline void gk_assert_abs(double actual, double expected, double abs_tol,
 
 #define assert_status(call, expected) assert_int_equal((int)(call), (int)(expected))
 
+/* ------------------------------------------------------------------ error-contract driver */
+/* A function of up to three gk_real inputs wrapped as fn(in, out). The driver checks, for each
+   case: the good inputs give GK_OK with a finite result > 0; a NULL output is GK_ERR_ARGUMENT
+   (also when an input is bad: the NULL is reported first); NaN, +-Inf, 0, -1 and a tiny
+   negative value in each input are GK_ERR_DOMAIN; the over and under inputs are GK_ERR_RANGE;
+   and the output keeps its sentinel through every failure. */
+typedef gk_status (*gk_contract_fn)(const gk_real in[3], gk_real *out);
+
+typedef struct gk_contract_case {
+    const char *name;
+    gk_contract_fn fn;
+    int inputs;       /* 1 to 3 */
+    gk_real good[3];  /* valid inputs */
+    gk_real over[3];  /* inputs whose result overflows */
+    gk_real under[3]; /* inputs whose result falls below the normal range */
+} gk_contract_case;
+
+static inline void gk_check_contract(const gk_contract_case *cases, size_t count, gk_real tiny) {
+    const gk_real bad[] = { (gk_real)NAN, (gk_real)INFINITY, (gk_real)-INFINITY, (gk_real)0.0,
+                            (gk_real)-1.0, -tiny };
+    for (size_t c = 0; c < count; ++c) {
+        const gk_contract_case *k = &cases[c];
+        gk_real out = GK_SENTINEL;
+        print_message("%s\n", k->name);
+        assert_status(k->fn(k->good, &out), GK_OK);
+        assert_true(isfinite(out) && out > 0);
+        out = GK_SENTINEL;
+        assert_status(k->fn(k->good, NULL), GK_ERR_ARGUMENT);
+        for (int i = 0; i < k->inputs; ++i) {
+            for (size_t b = 0; b < sizeof bad / sizeof bad[0]; ++b) {
+                gk_real in[3] = { k->good[0], k->good[1], k->good[2] };
+                in[i] = bad[b];
+                assert_status(k->fn(in, &out), GK_ERR_DOMAIN);
+                assert_status(k->fn(in, NULL), GK_ERR_ARGUMENT);
+            }
+        }
+        assert_status(k->fn(k->over, &out), GK_ERR_RANGE);
+        assert_status(k->fn(k->under, &out), GK_ERR_RANGE);
+        assert_rel(out, GK_SENTINEL, 0.0);
+    }
+}
+
 #endif /* GASKIT_TEST_H */
