@@ -74,7 +74,8 @@ GK_API gk_status gk_flow_from_reference(gk_eos eos, gk_fluid fluid, gk_volume_fl
  * an identifier. The linked symbol is therefore gk_flow_to_mass; the function-like macro
  * gk_mass_flow() below keeps the contract's call syntax working from C and C++ source (it
  * expands only where the name is followed by '(', so the type name is unaffected).
- * Foreign callers bind the symbol gk_flow_to_mass.
+ * Foreign callers may bind either symbol: on ELF targets built with GCC or clang the library
+ * also exports gk_mass_flow, a thin wrapper (lib/contract_names.c).
  * Density rho = p M / (Z R T) with M the molar mass of the gas or the mixture.
  * @retval As gk_flow_to_reference() (liquid at p, T: GK_ERR_RANGE).
  */
