@@ -30,12 +30,20 @@ static gk_status kij_check(size_t count, const gk_real *kij) {
     return GK_OK;
 }
 
+/* sqrt(a_i) (dimensionless, as sqrt(A_i)) of component i, recomputed where it is needed so that
+   no per-component array is kept on the stack (firmware stack budget). */
+static gk_status component_sqrt_a(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t,
+                                  gk_real *s, gk_real *b) {
+    gk_real a = GK_LIT(0.0);
+    gk_status st = gk__eos_ab(eos, gas, p, t, &a, b);
+    *s = gk_sqrt(a);
+    return st;
+}
+
 gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
                                gk_pressure p, gk_temperature t, gk_root root,
                                gk_eos_result *out) {
-    gk_real ai[GK_MIXTURE_MAX], sa[GK_MIXTURE_MAX], bi[GK_MIXTURE_MAX];
-    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0);
-    gk_eos_result r;
+    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0), sx = GK_LIT(0.0);
     gk_status st;
     size_t i, j, n;
 
@@ -60,28 +68,30 @@ gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real 
     st = kij_check(n, kij);
     if (st != GK_OK) return st;
 
-    if (eos == GK_EOS_IDEAL) {
-        st = gk__eos_ideal(p.pa, t.k, &r);
-    } else {
-        for (i = 0; i < n; ++i) {
-            st = gk__eos_ab(eos, mix->gas[i], p.pa, t.k, &ai[i], &bi[i]);
-            if (st != GK_OK) return st;
-            sa[i] = gk_sqrt(ai[i]);
-        }
-        for (i = 0; i < n; ++i) {
-            gk_real xi = mix->mole_fraction[i], row = GK_LIT(0.0);
+    /* Both solve paths write *out only on GK_OK. */
+    if (eos == GK_EOS_IDEAL) return gk__eos_ideal(p.pa, t.k, out);
+    /* a = sum_i sum_j x_i x_j s_i s_j (1 - k_ij), s_i = sqrt(a_i): without k_ij the double sum
+       is (sum_i x_i s_i)^2; with k_ij each row recomputes s_j (n <= GK_MIXTURE_MAX). */
+    for (i = 0; i < n; ++i) {
+        gk_real xi = mix->mole_fraction[i], si = GK_LIT(0.0), bi = GK_LIT(0.0);
+        st = component_sqrt_a(eos, mix->gas[i], p.pa, t.k, &si, &bi);
+        if (st != GK_OK) return st;
+        b += xi * bi;
+        if (kij == NULL) {
+            sx += xi * si;
+        } else {
+            gk_real row = GK_LIT(0.0);
             for (j = 0; j < n; ++j) {
-                gk_real one_minus_k = kij ? GK_LIT(1.0) - kij[i * n + j] : GK_LIT(1.0);
-                row += mix->mole_fraction[j] * sa[j] * one_minus_k;
+                gk_real sj = GK_LIT(0.0), bj = GK_LIT(0.0);
+                st = component_sqrt_a(eos, mix->gas[j], p.pa, t.k, &sj, &bj);
+                if (st != GK_OK) return st;
+                row += mix->mole_fraction[j] * sj * (GK_LIT(1.0) - kij[i * n + j]);
             }
-            a += xi * sa[i] * row;
-            b += xi * bi[i];
+            a += xi * si * row;
         }
-        if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
-        if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE;
-        st = gk__eos_solve_ab(gk__eos_family(eos), gk__eos_vc_over_b(eos), a, b, p.pa, t.k, root, &r);
     }
-    if (st != GK_OK) return st;
-    *out = r;
-    return GK_OK;
+    if (kij == NULL) a = sx * sx;
+    if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
+    if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE;
+    return gk__eos_solve_ab(gk__eos_family(eos), gk__eos_vc_over_b(eos), a, b, p.pa, t.k, root, out);
 }
