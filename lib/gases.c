@@ -47,7 +47,7 @@
  *           value engineers use as "the" molecular diameter in mean-free-path estimates; it
  *           is not a rigid-sphere diameter. 0 where the gas is not in that table.
  */
-#include "gk_internal.h"
+#include "mixture_internal.h"
 
 /* Most aliases per row. */
 #define GK__ALIAS_MAX 3
@@ -326,49 +326,52 @@ static char gk__ascii_lower(char c) {
     return (c >= 'A' && c <= 'Z') ? (char)(c - 'A' + 'a') : c;
 }
 
-/* Exact equality of two NUL-terminated strings; reads neither past its NUL. */
-static int gk__same(const char *a, const char *b) {
-    while (*a != '\0' && *a == *b) {
-        ++a;
-        ++b;
+/* Does text[0 .. n) equal the NUL-terminated b, exactly (fold = 0) or without regard to ASCII
+   case (fold = 1)? Reads no further than n in text and than its NUL in b. */
+static int gk__same_n(const char *text, size_t n, const char *b, int fold) {
+    size_t i;
+    for (i = 0; i < n; ++i) {
+        char ca = text[i], cb = b[i];
+        if (cb == '\0') return 0;
+        if (fold) {
+            ca = gk__ascii_lower(ca);
+            cb = gk__ascii_lower(cb);
+        }
+        if (ca != cb) return 0;
     }
-    return (*a == *b) ? 1 : 0;
+    return (b[n] == '\0') ? 1 : 0;
 }
 
-/* Equality without regard to ASCII case; reads neither past its NUL. */
-static int gk__same_ascii_ci(const char *a, const char *b) {
-    while (*a != '\0' && gk__ascii_lower(*a) == gk__ascii_lower(*b)) {
-        ++a;
-        ++b;
-    }
-    return (*a == *b) ? 1 : 0;   /* both at NUL (a case-blind match of NUL is only NUL) */
-}
-
-gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out) {
+gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out) {
     size_t i;
     size_t k;
-
-    if (name_or_formula == NULL || out == NULL) return GK_ERR_ARGUMENT;
     /* Formulas first, exactly: "CO" must never fall through to a case-blind match. */
     for (i = 0; i < GK__GAS_COUNT; ++i) {
-        if (gk__same(name_or_formula, gk__gases[i].gas.formula)) {
+        if (gk__same_n(text, n, gk__gases[i].gas.formula, 0)) {
             *out = &gk__gases[i].gas;
             return GK_OK;
         }
     }
     for (i = 0; i < GK__GAS_COUNT; ++i) {
-        if (gk__same_ascii_ci(name_or_formula, gk__gases[i].gas.name)) {
+        if (gk__same_n(text, n, gk__gases[i].gas.name, 1)) {
             *out = &gk__gases[i].gas;
             return GK_OK;
         }
         for (k = 0; k < GK__ALIAS_MAX && gk__gases[i].alias[k] != NULL; ++k) {
-            if (gk__same_ascii_ci(name_or_formula, gk__gases[i].alias[k])) {
+            if (gk__same_n(text, n, gk__gases[i].alias[k], 1)) {
                 *out = &gk__gases[i].gas;
                 return GK_OK;
             }
         }
     }
     return GK_ERR_NOT_FOUND;
+}
+
+gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out) {
+    size_t n = 0;
+    if (name_or_formula == NULL || out == NULL) return GK_ERR_ARGUMENT;
+    while (name_or_formula[n] != '\0') ++n;
+    return gk__gas_find_n(name_or_formula, n, out);
 }
 
 size_t gk_gas_count(void) { return GK__GAS_COUNT; }
