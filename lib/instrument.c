@@ -458,10 +458,9 @@ static int is_water(const gk_gas *g, const gk_gas *water) {
 gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature t,
                            gk_real relative_humidity, gk_mixture *wet) {
     const gk_gas *water = NULL;
-    gk_mixture m;
     gk_pressure pws;
     gk_real xw, scale;
-    size_t i, k;
+    size_t i, k, n;
     gk_status s;
     if (dry == NULL || wet == NULL) {
         return GK_ERR_ARGUMENT;
@@ -486,28 +485,33 @@ gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature 
     if (s != GK_OK) {
         return s;
     }
-    m = *dry; /* a copy: wet may be the same object as dry */
-    k = m.count;
-    for (i = 0; i < m.count; ++i) {
-        if (is_water(m.gas[i], water)) {
+    n = dry->count;
+    k = n;
+    for (i = 0; i < n; ++i) {
+        if (is_water(dry->gas[i], water)) {
             k = i;
             break;
         }
     }
-    if (k == m.count && m.count >= GK_MIXTURE_MAX) {
+    if (k == n && n >= GK_MIXTURE_MAX) {
         return GK_ERR_COMPOSITION; /* no room to append water */
     }
+    /* Every check has passed: write *wet entry by entry, each read from dry before it is
+       written, so wet may be the same object as dry (no copy of a gk_mixture on the stack). */
     scale = GK_LIT(1.0) - xw;
-    for (i = 0; i < m.count; ++i) {
-        m.mole_fraction[i] *= scale;
+    for (i = 0; i < GK_MIXTURE_MAX; ++i) {
+        const gk_gas *g = dry->gas[i];
+        gk_real x = dry->mole_fraction[i];
+        if (i < n) {
+            x *= scale;
+        }
+        if (i == k) {
+            g = water;
+            x = (k == n) ? xw : x + xw;
+        }
+        wet->gas[i] = g;
+        wet->mole_fraction[i] = x;
     }
-    if (k == m.count) {
-        m.gas[k] = water;
-        m.mole_fraction[k] = xw;
-        m.count = k + 1u;
-    } else {
-        m.mole_fraction[k] += xw;
-    }
-    *wet = m;
+    wet->count = (k == n) ? n + 1u : n;
     return GK_OK;
 }
