@@ -40,12 +40,47 @@ static gk_status component_sqrt_a(gk_eos eos, const gk_gas *gas, gk_real p, gk_r
     return st;
 }
 
+/* The mixed A, B of the van der Waals one-fluid rules (see the top):
+   a = sum_i sum_j x_i x_j s_i s_j (1 - k_ij), s_i = sqrt(a_i): without k_ij the double sum is
+   (sum_i x_i s_i)^2; with k_ij each row recomputes s_j (n <= GK_MIXTURE_MAX), so no
+   per-component array is kept. Out of line: its frame is gone before the cubic is solved. */
+static GK_NOINLINE gk_status mixture_ab(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
+                                        gk_real p, gk_real t, gk_real *a_out, gk_real *b_out) {
+    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0), sx = GK_LIT(0.0);
+    gk_status st;
+    size_t i, j, n = mix->count;
+    for (i = 0; i < n; ++i) {
+        gk_real xi = mix->mole_fraction[i], si = GK_LIT(0.0), bi = GK_LIT(0.0);
+        st = component_sqrt_a(eos, mix->gas[i], p, t, &si, &bi);
+        if (st != GK_OK) return st;
+        b += xi * bi;
+        if (kij == NULL) {
+            sx += xi * si;
+        } else {
+            gk_real row = GK_LIT(0.0);
+            for (j = 0; j < n; ++j) {
+                gk_real sj = GK_LIT(0.0), bj = GK_LIT(0.0);
+                st = component_sqrt_a(eos, mix->gas[j], p, t, &sj, &bj);
+                if (st != GK_OK) return st;
+                row += mix->mole_fraction[j] * sj * (GK_LIT(1.0) - kij[i * n + j]);
+            }
+            a += xi * si * row;
+        }
+    }
+    if (kij == NULL) a = sx * sx;
+    if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
+    if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE;
+    *a_out = a;
+    *b_out = b;
+    return GK_OK;
+}
+
 gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
                                gk_pressure p, gk_temperature t, gk_root root,
                                gk_eos_result *out) {
-    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0), sx = GK_LIT(0.0);
+    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0);
     gk_status st;
-    size_t i, j, n;
+    size_t i, n;
 
     if (mix == NULL || out == NULL) return GK_ERR_ARGUMENT;
     switch (eos) {
@@ -70,28 +105,7 @@ gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real 
 
     /* Both solve paths write *out only on GK_OK. */
     if (eos == GK_EOS_IDEAL) return gk__eos_ideal(p.pa, t.k, out);
-    /* a = sum_i sum_j x_i x_j s_i s_j (1 - k_ij), s_i = sqrt(a_i): without k_ij the double sum
-       is (sum_i x_i s_i)^2; with k_ij each row recomputes s_j (n <= GK_MIXTURE_MAX). */
-    for (i = 0; i < n; ++i) {
-        gk_real xi = mix->mole_fraction[i], si = GK_LIT(0.0), bi = GK_LIT(0.0);
-        st = component_sqrt_a(eos, mix->gas[i], p.pa, t.k, &si, &bi);
-        if (st != GK_OK) return st;
-        b += xi * bi;
-        if (kij == NULL) {
-            sx += xi * si;
-        } else {
-            gk_real row = GK_LIT(0.0);
-            for (j = 0; j < n; ++j) {
-                gk_real sj = GK_LIT(0.0), bj = GK_LIT(0.0);
-                st = component_sqrt_a(eos, mix->gas[j], p.pa, t.k, &sj, &bj);
-                if (st != GK_OK) return st;
-                row += mix->mole_fraction[j] * sj * (GK_LIT(1.0) - kij[i * n + j]);
-            }
-            a += xi * si * row;
-        }
-    }
-    if (kij == NULL) a = sx * sx;
-    if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
-    if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE;
+    st = mixture_ab(eos, mix, kij, p.pa, t.k, &a, &b);
+    if (st != GK_OK) return st;
     return gk__eos_solve_ab(gk__eos_family(eos), gk__eos_vc_over_b(eos), a, b, p.pa, t.k, root, out);
 }
