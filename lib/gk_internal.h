@@ -50,6 +50,13 @@
 #else
 #  define GK_NOINLINE
 #endif
+/* The opposite, for a small helper between two frames on the deepest call chain: inlined, its
+   saved registers are not pushed a second time. */
+#if defined(__GNUC__)
+#  define GK_ALWAYS_INLINE inline __attribute__((always_inline))
+#else
+#  define GK_ALWAYS_INLINE inline
+#endif
 
 /* pi to 21 digits (common practice); rounded to gk_real by GK_LIT. */
 #define GK_PI GK_LIT(3.14159265358979323846)

@@ -30,7 +30,7 @@ static gk_status fluid_check(gk_eos eos, const gk_fluid *fluid) {
 }
 
 /* Stable root of the model at p, T. */
-static gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t,
+static GK_ALWAYS_INLINE gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t,
                              gk_eos_result *r) {
     gk_status s;
     if (fluid->gas != NULL) {
