@@ -43,8 +43,8 @@ static gk_status component_sqrt_a(gk_eos eos, const gk_gas *gas, gk_real p, gk_r
 /* The mixed A, B of the van der Waals one-fluid rules (see the top):
    a = sum_i sum_j x_i x_j s_i s_j (1 - k_ij), s_i = sqrt(a_i): without k_ij the double sum is
    (sum_i x_i s_i)^2; with k_ij each row recomputes s_j (n <= GK_MIXTURE_MAX), so no
-   per-component array is kept. Out of line: its frame is gone before the cubic is solved. */
-static GK_NOINLINE gk_status mixture_ab(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
+   per-component array is kept. */
+static gk_status mixture_ab(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
                                         gk_real p, gk_real t, gk_real *a_out, gk_real *b_out) {
     gk_real a = GK_LIT(0.0), b = GK_LIT(0.0), sx = GK_LIT(0.0);
     gk_status st;
@@ -75,14 +75,13 @@ static GK_NOINLINE gk_status mixture_ab(gk_eos eos, const gk_mixture *mix, const
     return GK_OK;
 }
 
-gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
-                               gk_pressure p, gk_temperature t, gk_root root,
-                               gk_eos_result *out) {
-    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0);
+GK_NOINLINE gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_mixture *mix,
+                                              const gk_real *kij, gk_pressure p,
+                                              gk_temperature t, gk_root root, gk_real ab[2]) {
     gk_status st;
     size_t i, n;
 
-    if (mix == NULL || out == NULL) return GK_ERR_ARGUMENT;
+    if (mix == NULL) return GK_ERR_ARGUMENT;
     switch (eos) {
     case GK_EOS_IDEAL:
     case GK_EOS_VAN_DER_WAALS:
@@ -102,10 +101,18 @@ gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real 
     }
     st = kij_check(n, kij);
     if (st != GK_OK) return st;
+    if (eos == GK_EOS_IDEAL) return GK_OK;
+    return mixture_ab(eos, mix, kij, p.pa, t.k, &ab[0], &ab[1]);
+}
 
-    /* Both solve paths write *out only on GK_OK. */
-    if (eos == GK_EOS_IDEAL) return gk__eos_ideal(p.pa, t.k, out);
-    st = mixture_ab(eos, mix, kij, p.pa, t.k, &a, &b);
+gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
+                               gk_pressure p, gk_temperature t, gk_root root,
+                               gk_eos_result *out) {
+    gk_real ab[2] = {GK_LIT(0.0), GK_LIT(0.0)};
+    gk_status st;
+    if (mix == NULL || out == NULL) return GK_ERR_ARGUMENT;
+    st = gk__mixture_eos_prepare(eos, mix, kij, p, t, root, ab);
     if (st != GK_OK) return st;
-    return gk__eos_solve_ab(gk__eos_family(eos), gk__eos_vc_over_b(eos), a, b, p.pa, t.k, root, out);
+    /* both paths write *out only on GK_OK */
+    return gk__eos_finish(eos, ab, p, t, root, out);
 }

@@ -11,6 +11,7 @@
 #include <string.h>
 #include "gk_internal.h"
 #include "mixture_internal.h"
+#include "eos_internal.h"
 
 /* Compared as unsigned: a negative value wraps above the last model, and the test stays
    meaningful where the enum is one unsigned byte (-fshort-enums, the arm-none-eabi default). */
@@ -32,11 +33,17 @@ static gk_status fluid_check(gk_eos eos, const gk_fluid *fluid) {
 /* Stable root of the model at p, T. */
 static GK_ALWAYS_INLINE gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t,
                              gk_eos_result *r) {
+    gk_real ab[2] = {GK_LIT(0.0), GK_LIT(0.0)};
     gk_status s;
+    /* as gk_eos_solve() / gk_mixture_eos_solve(), in two halves: the checks and A, B return
+       before the cubic is solved, so no public solver frame lies under it (stack budget) */
     if (fluid->gas != NULL) {
-        s = gk_eos_solve(eos, fluid->gas, p, t, GK_ROOT_STABLE, r);
+        s = gk__eos_prepare(eos, fluid->gas, p, t, GK_ROOT_STABLE, ab);
     } else {
-        s = gk_mixture_eos_solve(eos, fluid->mixture, fluid->kij, p, t, GK_ROOT_STABLE, r);
+        s = gk__mixture_eos_prepare(eos, fluid->mixture, fluid->kij, p, t, GK_ROOT_STABLE, ab);
+    }
+    if (s == GK_OK) {
+        s = gk__eos_finish(eos, ab, p, t, GK_ROOT_STABLE, r);
     }
     if (s != GK_OK) {
         return s;
