@@ -41,33 +41,39 @@ static gk_status component_sqrt_a(gk_eos eos, const gk_gas *gas, gk_real p, gk_r
 }
 
 /* The mixed A, B of the van der Waals one-fluid rules (see the top):
-   a = sum_i sum_j x_i x_j s_i s_j (1 - k_ij), s_i = sqrt(a_i): without k_ij the double sum is
-   (sum_i x_i s_i)^2; with k_ij each row recomputes s_j (n <= GK_MIXTURE_MAX), so no
-   per-component array is kept. */
-static gk_status mixture_ab(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
-                                        gk_real p, gk_real t, gk_real *a_out, gk_real *b_out) {
+   a = sum_i x_i s_i row_i, row_i = sum_j x_j s_j (1 - k_ij), s_i = sqrt(a_i), b = sum_i x_i b_i.
+   No per-component array is kept: without k_ij every row is the same sum S = sum_j x_j s_j,
+   formed in a first pass (in the order and with the roundings of the double loop, so the result
+   is the same to the last bit); with k_ij each row recomputes s_j (n <= GK_MIXTURE_MAX). */
+static gk_status mixture_ab(gk_eos eos, const gk_mixture *mix, const gk_real *kij, gk_real p,
+                            gk_real t, gk_real *a_out, gk_real *b_out) {
     gk_real a = GK_LIT(0.0), b = GK_LIT(0.0), sx = GK_LIT(0.0);
     gk_status st;
     size_t i, j, n = mix->count;
+    if (kij == NULL) {
+        for (j = 0; j < n; ++j) {
+            gk_real sj = GK_LIT(0.0), bj = GK_LIT(0.0);
+            st = component_sqrt_a(eos, mix->gas[j], p, t, &sj, &bj);
+            if (st != GK_OK) return st;
+            sx += mix->mole_fraction[j] * sj;
+        }
+    }
     for (i = 0; i < n; ++i) {
-        gk_real xi = mix->mole_fraction[i], si = GK_LIT(0.0), bi = GK_LIT(0.0);
+        gk_real xi = mix->mole_fraction[i], si = GK_LIT(0.0), bi = GK_LIT(0.0), row = sx;
         st = component_sqrt_a(eos, mix->gas[i], p, t, &si, &bi);
         if (st != GK_OK) return st;
-        b += xi * bi;
-        if (kij == NULL) {
-            sx += xi * si;
-        } else {
-            gk_real row = GK_LIT(0.0);
+        if (kij != NULL) {
+            row = GK_LIT(0.0);
             for (j = 0; j < n; ++j) {
                 gk_real sj = GK_LIT(0.0), bj = GK_LIT(0.0);
                 st = component_sqrt_a(eos, mix->gas[j], p, t, &sj, &bj);
                 if (st != GK_OK) return st;
                 row += mix->mole_fraction[j] * sj * (GK_LIT(1.0) - kij[i * n + j]);
             }
-            a += xi * si * row;
         }
+        a += xi * si * row;
+        b += xi * bi;
     }
-    if (kij == NULL) a = sx * sx;
     if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
     if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE;
     *a_out = a;

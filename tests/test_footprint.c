@@ -5,10 +5,11 @@
  *
  * Outside references: molar masses from the IUPAC/CIAAW standard atomic weights 2021 (as in
  * lib/gases.c: N2 2 x 14.007 g/mol, O2 2 x 15.999 g/mol, Ar 39.95 g/mol). The mixing-rule
- * checks compare the two forms of the van der Waals one-fluid rule, which are the same sum
- * (common practice): sum_i sum_j x_i x_j s_i s_j = (sum_i x_i s_i)^2 when every k_ij is 0.
- * Float tolerances: a few roundings of 6e-8 each, so 1e-6; the two rule forms round differently,
- * 1e-13 in double and 1e-5 in float for Z (the cubic's conditioning amplifies a few roundings). */
+ * checks compare the library's two code paths of the van der Waals one-fluid rule (without k_ij:
+ * one row sum S = sum_j x_j s_j shared by every row; with k_ij: each row recomputed), which give
+ * the same sum when every k_ij is 0 (common practice: sum_i sum_j x_i x_j s_i s_j (1 - k_ij)).
+ * Float tolerances: a few roundings of 6e-8 each, so 1e-6; for Z, 1e-13 in double and 1e-5 in
+ * float, room for a few roundings amplified by the cubic's conditioning. */
 #include "gk_test.h"
 #include <string.h>
 
