@@ -199,32 +199,40 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
     while (len <= GK__MIXTURE_TEXT_MAX && text[len] != '\0') ++len;
     if (len > GK__MIXTURE_TEXT_MAX) return GK_ERR_PARSE;
 
-    /* pass 1: every check; the first error found is reported */
+    /* pass 1: every check; the first error found is reported. The value is converted before
+       the search for an earlier listing of the gas (no side effect) and its status reported
+       after it, so one mix_item serves both (firmware stack budget). */
     for (;;) {
         size_t q = 0;
+        const gk_gas *gas;
+        size_t end;
+        int is_balance;
+        gk_real x = GK_LIT(0.0);
+        gk_status value_st = GK_OK;
         st = parse_item(text, len, pos, &it);
         if (st != GK_OK) return st;
         if (count == GK_MIXTURE_MAX) return GK_ERR_COMPOSITION;
+        gas = it.gas;
+        end = it.end;
+        is_balance = it.is_balance;
+        if (!is_balance) value_st = item_fraction(&it, &x);
         for (i = 0; i < count; ++i) {
-            mix_item prev;
-            prev.gas = NULL;
-            prev.end = len;
-            (void)parse_item(text, len, q, &prev);       /* read before: cannot fail */
-            if (prev.gas == it.gas) return GK_ERR_COMPOSITION; /* listed twice */
-            q = prev.end + 1u;
+            it.gas = NULL;
+            it.end = len;
+            (void)parse_item(text, len, q, &it);         /* read before: cannot fail */
+            if (it.gas == gas) return GK_ERR_COMPOSITION;  /* listed twice */
+            q = it.end + 1u;
         }
-        if (it.is_balance) {
+        if (is_balance) {
             if (balance_index != GK_MIXTURE_MAX) return GK_ERR_PARSE;  /* two balances */
             balance_index = count;
         } else {
-            gk_real x = GK_LIT(0.0);
-            st = item_fraction(&it, &x);
-            if (st != GK_OK) return st;
+            if (value_st != GK_OK) return value_st;
             gk__neumaier_add(&sum, &comp, x);
         }
         count += 1u;
-        if (it.end == len) break;
-        pos = it.end + 1u;                                   /* past ',' */
+        if (end == len) break;
+        pos = end + 1u;                                      /* past ',' */
     }
 
     sum += comp;
