@@ -358,16 +358,18 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
 
     /* undo the scaling, keep the roots above lo, drop repeated values */
     out = 0;
-    {
-        gk_real keep[3] = {GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0)};
-        for (i = 0; i < n; ++i) {
-            gk_real v = r[i];
-            if (!gk_finite(v)) return -1;
-            if (!(v > lo)) continue;
-            if (out > 0 && !(v > keep[out - 1])) continue; /* equal to the previous one */
-            keep[out++] = v;
-        }
-        for (i = 0; i < 3; ++i) z[i] = (e != 0 && i < out) ? gk_ldexp(keep[i], e) : keep[i];
+    for (i = 0; i < n; ++i) {
+        if (!gk_finite(r[i])) return -1; /* before z[] is written */
+    }
+    for (i = 0; i < n; ++i) {
+        gk_real v = r[i];
+        if (!(v > lo)) continue;
+        if (out > 0 && !(v > r[out - 1])) continue; /* equal to the previous one */
+        r[out++] = v; /* out <= i: compacts r[] in place */
+    }
+    for (i = 0; i < 3; ++i) {
+        gk_real v = (i < out) ? r[i] : GK_LIT(0.0);
+        z[i] = (e != 0 && i < out) ? gk_ldexp(v, e) : v;
     }
     return out;
 }

@@ -42,7 +42,7 @@
 /* sqrt(2) to 20 digits (common practice). */
 #define GK_SQRT2 GK_LIT(1.4142135623730950488)
 
-gk__cubic_family gk__eos_family(gk_eos eos) {
+static inline gk__cubic_family eos_family(gk_eos eos) {
     switch (eos) {
     case GK_EOS_REDLICH_KWONG:
     case GK_EOS_SOAVE_REDLICH_KWONG: return GK__FAMILY_RK;
@@ -53,7 +53,7 @@ gk__cubic_family gk__eos_family(gk_eos eos) {
     }
 }
 
-gk_real gk__eos_vc_over_b(gk_eos eos) {
+static inline gk_real eos_vc_over_b(gk_eos eos) {
     switch (eos) {
     case GK_EOS_REDLICH_KWONG:
     case GK_EOS_SOAVE_REDLICH_KWONG: return RK_ZC / RK_OMEGA_B;
@@ -63,6 +63,10 @@ gk_real gk__eos_vc_over_b(gk_eos eos) {
     default:                         return VDW_ZC / VDW_OMEGA_B;
     }
 }
+
+gk__cubic_family gk__eos_family(gk_eos eos) { return eos_family(eos); }
+
+gk_real gk__eos_vc_over_b(gk_eos eos) { return eos_vc_over_b(eos); }
 
 static int eos_valid(gk_eos eos) {
     switch (eos) {
@@ -400,20 +404,34 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
     return eos_solve_ab(family, vc_over_b, a, b, p, t, root, out);
 }
 
-gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
-                       gk_root root, gk_eos_result *out) {
-    gk_real a, b;
+/* gk__eos_prepare (see eos_internal.h): the checks of gk_eos_solve() and A, B. */
+GK_NOINLINE gk_status gk__eos_prepare(gk_eos eos, const gk_gas *gas, gk_pressure p,
+                                      gk_temperature t, gk_root root, gk_real ab[2]) {
     gk_status st;
-    if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
+    if (gas == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
     st = gk__eos_check_state(p, t, root);
     if (st != GK_OK) return st;
-    if (eos == GK_EOS_IDEAL) return gk__eos_ideal(p.pa, t.k, out);
+    if (eos == GK_EOS_IDEAL) return GK_OK;
     st = eos_check_gas(eos, gas);
     if (st != GK_OK) return st;
-    st = eos_ab(eos, gas, p.pa, t.k, &a, &b);
-    if (st != GK_OK) return st;
+    return eos_ab(eos, gas, p.pa, t.k, &ab[0], &ab[1]);
+}
+
+gk_status gk__eos_finish(gk_eos eos, const gk_real ab[2], gk_pressure p, gk_temperature t,
+                         gk_root root, gk_eos_result *out) {
+    if (eos == GK_EOS_IDEAL) return gk__eos_ideal(p.pa, t.k, out);
     /* writes *out only on success */
-    return eos_solve_ab(gk__eos_family(eos), gk__eos_vc_over_b(eos), a, b, p.pa, t.k, root, out);
+    return eos_solve_ab(eos_family(eos), eos_vc_over_b(eos), ab[0], ab[1], p.pa, t.k, root, out);
+}
+
+gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
+                       gk_root root, gk_eos_result *out) {
+    gk_real ab[2] = {GK_LIT(0.0), GK_LIT(0.0)};
+    gk_status st;
+    if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
+    st = gk__eos_prepare(eos, gas, p, t, root, ab);
+    if (st != GK_OK) return st;
+    return gk__eos_finish(eos, ab, p, t, root, out);
 }
 
 gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_temperature t,

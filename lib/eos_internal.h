@@ -52,4 +52,19 @@ gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out);
 /* Validity of p, T and root (shared by the solve paths). */
 gk_status gk__eos_check_state(gk_pressure p, gk_temperature t, gk_root root);
 
+/* The two halves of gk_eos_solve() and gk_mixture_eos_solve(), so that a caller that solves a
+   state for its own use (the instrument functions) calls the cubic-EOS solve directly, without
+   the public solver's frame on the stack (firmware stack budget):
+   - gk__eos_prepare(): every check of gk_eos_solve() but the one of out, in the same order,
+     and A, B into ab[0], ab[1] (ab untouched for the ideal gas);
+   - gk__mixture_eos_prepare() (eos_mixture.c): the same for gk_mixture_eos_solve();
+   - gk__eos_finish(): the ideal-gas result or the solve with those A, B; writes *out only on
+     GK_OK. */
+gk_status gk__eos_prepare(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
+                          gk_root root, gk_real ab[2]);
+gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
+                                  gk_pressure p, gk_temperature t, gk_root root, gk_real ab[2]);
+gk_status gk__eos_finish(gk_eos eos, const gk_real ab[2], gk_pressure p, gk_temperature t,
+                         gk_root root, gk_eos_result *out);
+
 #endif /* GASKIT_EOS_INTERNAL_H */

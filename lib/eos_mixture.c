@@ -30,16 +30,64 @@ static gk_status kij_check(size_t count, const gk_real *kij) {
     return GK_OK;
 }
 
-gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
-                               gk_pressure p, gk_temperature t, gk_root root,
-                               gk_eos_result *out) {
-    gk_real ai[GK_MIXTURE_MAX], sa[GK_MIXTURE_MAX], bi[GK_MIXTURE_MAX];
-    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0);
-    gk_eos_result r;
-    gk_status st;
-    size_t i, j, n;
+/* sqrt(a_i) (dimensionless, as sqrt(A_i)) of component i, recomputed where it is needed so that
+   no per-component array is kept on the stack (firmware stack budget). */
+static gk_status component_sqrt_a(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t,
+                                  gk_real *s, gk_real *b) {
+    gk_real a = GK_LIT(0.0);
+    gk_status st = gk__eos_ab(eos, gas, p, t, &a, b);
+    *s = gk_sqrt(a);
+    return st;
+}
 
-    if (mix == NULL || out == NULL) return GK_ERR_ARGUMENT;
+/* The mixed A, B of the van der Waals one-fluid rules (see the top):
+   a = sum_i x_i s_i row_i, row_i = sum_j x_j s_j (1 - k_ij), s_i = sqrt(a_i), b = sum_i x_i b_i.
+   No per-component array is kept: without k_ij every row is the same sum S = sum_j x_j s_j,
+   formed in a first pass (in the order and with the roundings of the double loop, so the result
+   is the same to the last bit); with k_ij each row recomputes s_j (n <= GK_MIXTURE_MAX). */
+static gk_status mixture_ab(gk_eos eos, const gk_mixture *mix, const gk_real *kij, gk_real p,
+                            gk_real t, gk_real *a_out, gk_real *b_out) {
+    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0), sx = GK_LIT(0.0);
+    gk_status st;
+    size_t i, j, n = mix->count;
+    if (kij == NULL) {
+        for (j = 0; j < n; ++j) {
+            gk_real sj = GK_LIT(0.0), bj = GK_LIT(0.0);
+            st = component_sqrt_a(eos, mix->gas[j], p, t, &sj, &bj);
+            if (st != GK_OK) return st;
+            sx += mix->mole_fraction[j] * sj;
+        }
+    }
+    for (i = 0; i < n; ++i) {
+        gk_real xi = mix->mole_fraction[i], si = GK_LIT(0.0), bi = GK_LIT(0.0), row = sx;
+        st = component_sqrt_a(eos, mix->gas[i], p, t, &si, &bi);
+        if (st != GK_OK) return st;
+        if (kij != NULL) {
+            row = GK_LIT(0.0);
+            for (j = 0; j < n; ++j) {
+                gk_real sj = GK_LIT(0.0), bj = GK_LIT(0.0);
+                st = component_sqrt_a(eos, mix->gas[j], p, t, &sj, &bj);
+                if (st != GK_OK) return st;
+                row += mix->mole_fraction[j] * sj * (GK_LIT(1.0) - kij[i * n + j]);
+            }
+        }
+        a += xi * si * row;
+        b += xi * bi;
+    }
+    if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
+    if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE;
+    *a_out = a;
+    *b_out = b;
+    return GK_OK;
+}
+
+GK_NOINLINE gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_mixture *mix,
+                                              const gk_real *kij, gk_pressure p,
+                                              gk_temperature t, gk_root root, gk_real ab[2]) {
+    gk_status st;
+    size_t i, n;
+
+    if (mix == NULL) return GK_ERR_ARGUMENT;
     switch (eos) {
     case GK_EOS_IDEAL:
     case GK_EOS_VAN_DER_WAALS:
@@ -59,29 +107,18 @@ gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real 
     }
     st = kij_check(n, kij);
     if (st != GK_OK) return st;
+    if (eos == GK_EOS_IDEAL) return GK_OK;
+    return mixture_ab(eos, mix, kij, p.pa, t.k, &ab[0], &ab[1]);
+}
 
-    if (eos == GK_EOS_IDEAL) {
-        st = gk__eos_ideal(p.pa, t.k, &r);
-    } else {
-        for (i = 0; i < n; ++i) {
-            st = gk__eos_ab(eos, mix->gas[i], p.pa, t.k, &ai[i], &bi[i]);
-            if (st != GK_OK) return st;
-            sa[i] = gk_sqrt(ai[i]);
-        }
-        for (i = 0; i < n; ++i) {
-            gk_real xi = mix->mole_fraction[i], row = GK_LIT(0.0);
-            for (j = 0; j < n; ++j) {
-                gk_real one_minus_k = kij ? GK_LIT(1.0) - kij[i * n + j] : GK_LIT(1.0);
-                row += mix->mole_fraction[j] * sa[j] * one_minus_k;
-            }
-            a += xi * sa[i] * row;
-            b += xi * bi[i];
-        }
-        if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
-        if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE;
-        st = gk__eos_solve_ab(gk__eos_family(eos), gk__eos_vc_over_b(eos), a, b, p.pa, t.k, root, &r);
-    }
+gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
+                               gk_pressure p, gk_temperature t, gk_root root,
+                               gk_eos_result *out) {
+    gk_real ab[2] = {GK_LIT(0.0), GK_LIT(0.0)};
+    gk_status st;
+    if (mix == NULL || out == NULL) return GK_ERR_ARGUMENT;
+    st = gk__mixture_eos_prepare(eos, mix, kij, p, t, root, ab);
     if (st != GK_OK) return st;
-    *out = r;
-    return GK_OK;
+    /* both paths write *out only on GK_OK */
+    return gk__eos_finish(eos, ab, p, t, root, out);
 }

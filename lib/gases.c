@@ -47,23 +47,27 @@
  *           value engineers use as "the" molecular diameter in mean-free-path estimates; it
  *           is not a rigid-sphere diameter. 0 where the gas is not in that table.
  */
-#include "gk_internal.h"
+#include "mixture_internal.h"
 
 /* Most aliases per row. */
 #define GK__ALIAS_MAX 3
 
-/* A table row: the public gk_gas plus its further names. gk_gas_at() returns &row.gas. */
+/* A table row: the public gk_gas plus its further names. gk_gas_at() returns &row.gas. The
+   further names are one string, each name ended by a NUL and the list by an empty name (one
+   pointer per row instead of GK__ALIAS_MAX: firmware size), or NULL for none. */
 typedef struct gk__gas_row {
     gk_gas gas;
-    const char *alias[GK__ALIAS_MAX];   /* NULL-padded */
+    const char *aliases;
 } gk__gas_row;
 
 #define GK__ROW(name, formula, m, tc, pc, omega, a, b, gamma, sigma, alias)                     \
     { { name, formula, { GK_LIT(m) }, { GK_LIT(tc) }, { GK_LIT(pc) }, GK_LIT(omega),           \
         GK_LIT(a), GK_LIT(b), GK_LIT(gamma), GK_LIT(sigma) },                                  \
       alias }
-#define GK__ALIAS(...) { __VA_ARGS__ }
-#define GK__NO_ALIAS { NULL }
+#define GK__ALIAS1(a) a "\0"
+#define GK__ALIAS2(a, b) a "\0" b "\0"
+#define GK__ALIAS3(a, b, c) a "\0" b "\0" c "\0"
+#define GK__NO_ALIAS NULL
 
 /* Columns of GK__ROW: name, formula, molar mass (kg/mol), Tc (K), Pc (Pa), acentric factor,
    van der Waals a (Pa m6/mol2), b (m3/mol), ideal-gas cp/cv near 298 K, collision diameter (m),
@@ -76,7 +80,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.4,                        /* gamma: 1.40 [ISO2533] */
             3.711e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("dry air")),
+            GK__ALIAS1("dry air")),
     /* nitrogen */
     GK__ROW("nitrogen", "N2",
             28.014e-3,                  /* M: 2 x 14.007 g/mol [AW] */
@@ -108,7 +112,7 @@ static const gk__gas_row gk__gases[] = {
             0.00346, 2.38e-05,          /* a, b: 0.0346 bar L2/mol2, 0.0238 L/mol [CRC-vdW] */
             1.6666666666666667,         /* gamma: 5/3, monatomic ideal gas (kinetic theory) */
             2.551e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("helium-4")),
+            GK__ALIAS1("helium-4")),
     /* neon */
     GK__ROW("neon", "Ne",
             20.1797e-3,                 /* M: 20.1797 g/mol [AW] */
@@ -188,7 +192,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.0922,                     /* gamma: cp 98.5 J/(mol K) [TRC, from memory], cp/(cp - R) */
             4.687e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("butane")),
+            GK__ALIAS1("butane")),
     /* isobutane */
     GK__ROW("isobutane", "i-C4H10",
             58.124e-3,                  /* M: 4 x 12.011 + 10 x 1.008 g/mol [AW] */
@@ -196,7 +200,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.094,                      /* gamma: cp 96.8 J/(mol K) [TRC, from memory], cp/(cp - R) */
             5.278e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("2-methylpropane", "i-butane")),
+            GK__ALIAS2("2-methylpropane", "i-butane")),
     /* ethylene */
     GK__ROW("ethylene", "C2H4",
             28.054e-3,                  /* M: 2 x 12.011 + 4 x 1.008 g/mol [AW] */
@@ -204,7 +208,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.2404,                     /* gamma: cp 42.9 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             4.163e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("ethene")),
+            GK__ALIAS1("ethene")),
     /* propylene */
     GK__ROW("propylene", "C3H6",
             42.081e-3,                  /* M: 3 x 12.011 + 6 x 1.008 g/mol [AW] */
@@ -212,7 +216,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.1485,                     /* gamma: cp 64.32 J/(mol K) [TRC, from memory], cp/(cp - R) */
             4.678e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("propene")),
+            GK__ALIAS1("propene")),
     /* acetylene */
     GK__ROW("acetylene", "C2H2",
             26.038e-3,                  /* M: 2 x 12.011 + 2 x 1.008 g/mol [AW] */
@@ -220,7 +224,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.2327,                     /* gamma: cp 44.04 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             4.033e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("ethyne")),
+            GK__ALIAS1("ethyne")),
     /* ammonia */
     GK__ROW("ammonia", "NH3",
             17.031e-3,                  /* M: 14.007 + 3 x 1.008 g/mol [AW] */
@@ -236,7 +240,7 @@ static const gk__gas_row gk__gases[] = {
             0.5537, 3.049e-05,          /* a, b: 5.537 bar L2/mol2, 0.03049 L/mol [CRC-vdW] */
             1.329,                      /* gamma: cp 33.588 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             2.641e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("water vapour", "water vapor")),
+            GK__ALIAS2("water vapour", "water vapor")),
     /* hydrogen sulfide */
     GK__ROW("hydrogen sulfide", "H2S",
             34.076e-3,                  /* M: 2 x 1.008 + 32.06 g/mol [AW] */
@@ -244,7 +248,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.3213,                     /* gamma: cp 34.192 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             3.623e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("hydrogen sulphide")),
+            GK__ALIAS1("hydrogen sulphide")),
     /* sulfur dioxide */
     GK__ROW("sulfur dioxide", "SO2",
             64.058e-3,                  /* M: 32.06 + 2 x 15.999 g/mol [AW] */
@@ -252,7 +256,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.2634,                     /* gamma: cp 39.878 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             4.112e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("sulphur dioxide")),
+            GK__ALIAS1("sulphur dioxide")),
     /* nitrous oxide */
     GK__ROW("nitrous oxide", "N2O",
             44.013e-3,                  /* M: 2 x 14.007 + 15.999 g/mol [AW] */
@@ -260,7 +264,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.2744,                     /* gamma: cp 38.617 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             3.828e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("dinitrogen monoxide")),
+            GK__ALIAS1("dinitrogen monoxide")),
     /* nitric oxide */
     GK__ROW("nitric oxide", "NO",
             30.006e-3,                  /* M: 14.007 + 15.999 g/mol [AW] */
@@ -268,7 +272,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.3862,                     /* gamma: cp 29.845 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             3.492e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("nitrogen monoxide")),
+            GK__ALIAS1("nitrogen monoxide")),
     /* chlorine */
     GK__ROW("chlorine", "Cl2",
             70.9e-3,                    /* M: 2 x 35.45 g/mol [AW] */
@@ -292,7 +296,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.0938,                     /* gamma: cp 97.0 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             5.128e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("sulphur hexafluoride")),
+            GK__ALIAS1("sulphur hexafluoride")),
     /* nitrogen trifluoride */
     GK__ROW("nitrogen trifluoride", "NF3",
             71.002209486e-3,            /* M: 14.007 + 3 x 18.998403162 g/mol [AW] */
@@ -308,7 +312,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.1575,                     /* gamma: cp 61.09 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             4.662e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS("tetrafluoromethane")),
+            GK__ALIAS1("tetrafluoromethane")),
     /* 1,1,1,2-tetrafluoroethane */
     GK__ROW("1,1,1,2-tetrafluoroethane", "CH2FCF3",
             102.031612648e-3,           /* M: 2x12.011 + 2x1.008 + 4x18.998403162 [AW] */
@@ -316,7 +320,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.1068,                     /* gamma: cp 86.2 J/(mol K) [TRB94, from memory], cp/(cp - R) */
             0.0,                        /* sigma: not known */
-            GK__ALIAS("r-134a", "r134a", "hfc-134a")),
+            GK__ALIAS3("r-134a", "r134a", "hfc-134a")),
 };
 
 #define GK__GAS_COUNT (sizeof gk__gases / sizeof gk__gases[0])
@@ -326,49 +330,55 @@ static char gk__ascii_lower(char c) {
     return (c >= 'A' && c <= 'Z') ? (char)(c - 'A' + 'a') : c;
 }
 
-/* Exact equality of two NUL-terminated strings; reads neither past its NUL. */
-static int gk__same(const char *a, const char *b) {
-    while (*a != '\0' && *a == *b) {
-        ++a;
-        ++b;
-    }
-    return (*a == *b) ? 1 : 0;
-}
-
-/* Equality without regard to ASCII case; reads neither past its NUL. */
-static int gk__same_ascii_ci(const char *a, const char *b) {
-    while (*a != '\0' && gk__ascii_lower(*a) == gk__ascii_lower(*b)) {
-        ++a;
-        ++b;
-    }
-    return (*a == *b) ? 1 : 0;   /* both at NUL (a case-blind match of NUL is only NUL) */
-}
-
-gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out) {
+/* Does text[0 .. n) equal the NUL-terminated b, exactly (fold = 0) or without regard to ASCII
+   case (fold = 1)? Reads no further than n in text and than its NUL in b. */
+static int gk__same_n(const char *text, size_t n, const char *b, int fold) {
     size_t i;
-    size_t k;
+    for (i = 0; i < n; ++i) {
+        char ca = text[i], cb = b[i];
+        if (cb == '\0') return 0;
+        if (fold) {
+            ca = gk__ascii_lower(ca);
+            cb = gk__ascii_lower(cb);
+        }
+        if (ca != cb) return 0;
+    }
+    return (b[n] == '\0') ? 1 : 0;
+}
 
-    if (name_or_formula == NULL || out == NULL) return GK_ERR_ARGUMENT;
+gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out) {
+    size_t i;
+    const char *alias;
     /* Formulas first, exactly: "CO" must never fall through to a case-blind match. */
     for (i = 0; i < GK__GAS_COUNT; ++i) {
-        if (gk__same(name_or_formula, gk__gases[i].gas.formula)) {
+        if (gk__same_n(text, n, gk__gases[i].gas.formula, 0)) {
             *out = &gk__gases[i].gas;
             return GK_OK;
         }
     }
     for (i = 0; i < GK__GAS_COUNT; ++i) {
-        if (gk__same_ascii_ci(name_or_formula, gk__gases[i].gas.name)) {
+        if (gk__same_n(text, n, gk__gases[i].gas.name, 1)) {
             *out = &gk__gases[i].gas;
             return GK_OK;
         }
-        for (k = 0; k < GK__ALIAS_MAX && gk__gases[i].alias[k] != NULL; ++k) {
-            if (gk__same_ascii_ci(name_or_formula, gk__gases[i].alias[k])) {
+        alias = gk__gases[i].aliases;
+        while (alias != NULL && *alias != '\0') {
+            if (gk__same_n(text, n, alias, 1)) {
                 *out = &gk__gases[i].gas;
                 return GK_OK;
             }
+            while (*alias != '\0') ++alias;
+            ++alias; /* past the NUL that ends this name */
         }
     }
     return GK_ERR_NOT_FOUND;
+}
+
+gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out) {
+    size_t n = 0;
+    if (name_or_formula == NULL || out == NULL) return GK_ERR_ARGUMENT;
+    while (name_or_formula[n] != '\0') ++n;
+    return gk__gas_find_n(name_or_formula, n, out);
 }
 
 size_t gk_gas_count(void) { return GK__GAS_COUNT; }

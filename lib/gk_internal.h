@@ -42,6 +42,22 @@
 #  define GK_REAL_EPS 2.220446049250313e-16   /* DBL_EPSILON, 2^-52 (IEEE 754 binary64) */
 #endif
 
+/* Keeps a helper out of line where inlining would put its frame under a deeper call (the
+   firmware stack budget: a helper that finishes before the next call leaves the stack). Only a
+   hint: without GCC or Clang it is empty and the code is the same. */
+#if defined(__GNUC__)
+#  define GK_NOINLINE __attribute__((noinline))
+#else
+#  define GK_NOINLINE
+#endif
+/* The opposite, for a small helper between two frames on the deepest call chain: inlined, its
+   saved registers are not pushed a second time. */
+#if defined(__GNUC__)
+#  define GK_ALWAYS_INLINE inline __attribute__((always_inline))
+#else
+#  define GK_ALWAYS_INLINE inline
+#endif
+
 /* pi to 21 digits (common practice); rounded to gk_real by GK_LIT. */
 #define GK_PI GK_LIT(3.14159265358979323846)
 

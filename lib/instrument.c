@@ -11,6 +11,7 @@
 #include <string.h>
 #include "gk_internal.h"
 #include "mixture_internal.h"
+#include "eos_internal.h"
 
 /* Compared as unsigned: a negative value wraps above the last model, and the test stays
    meaningful where the enum is one unsigned byte (-fshort-enums, the arm-none-eabi default). */
@@ -19,24 +20,30 @@ static int eos_valid(gk_eos eos) {
 }
 
 /* The fluid names exactly one of a gas and a mixture, and the model is one of gk_eos. */
-static gk_status fluid_check(gk_eos eos, gk_fluid fluid) {
+static gk_status fluid_check(gk_eos eos, const gk_fluid *fluid) {
     if (!eos_valid(eos)) {
         return GK_ERR_ARGUMENT;
     }
-    if ((fluid.gas == NULL) == (fluid.mixture == NULL)) {
+    if ((fluid->gas == NULL) == (fluid->mixture == NULL)) {
         return GK_ERR_ARGUMENT;
     }
     return GK_OK;
 }
 
 /* Stable root of the model at p, T. */
-static gk_status fluid_solve(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t,
+static GK_ALWAYS_INLINE gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t,
                              gk_eos_result *r) {
+    gk_real ab[2] = {GK_LIT(0.0), GK_LIT(0.0)};
     gk_status s;
-    if (fluid.gas != NULL) {
-        s = gk_eos_solve(eos, fluid.gas, p, t, GK_ROOT_STABLE, r);
+    /* as gk_eos_solve() / gk_mixture_eos_solve(), in two halves: the checks and A, B return
+       before the cubic is solved, so no public solver frame lies under it (stack budget) */
+    if (fluid->gas != NULL) {
+        s = gk__eos_prepare(eos, fluid->gas, p, t, GK_ROOT_STABLE, ab);
     } else {
-        s = gk_mixture_eos_solve(eos, fluid.mixture, fluid.kij, p, t, GK_ROOT_STABLE, r);
+        s = gk__mixture_eos_prepare(eos, fluid->mixture, fluid->kij, p, t, GK_ROOT_STABLE, ab);
+    }
+    if (s == GK_OK) {
+        s = gk__eos_finish(eos, ab, p, t, GK_ROOT_STABLE, r);
     }
     if (s != GK_OK) {
         return s;
@@ -48,16 +55,16 @@ static gk_status fluid_solve(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_tempe
     return GK_OK;
 }
 
-static gk_status fluid_molar_mass(gk_fluid fluid, gk_real *m) {
-    if (fluid.gas != NULL) {
-        if (!gk_positive(fluid.gas->molar_mass.kg_per_mol)) {
+static gk_status fluid_molar_mass(const gk_fluid *fluid, gk_real *m) {
+    if (fluid->gas != NULL) {
+        if (!gk_positive(fluid->gas->molar_mass.kg_per_mol)) {
             return GK_ERR_DOMAIN;
         }
-        *m = fluid.gas->molar_mass.kg_per_mol;
+        *m = fluid->gas->molar_mass.kg_per_mol;
         return GK_OK;
     } else {
         gk_molar_mass mm;
-        const gk_status s = gk_mixture_molar_mass(fluid.mixture, &mm);
+        const gk_status s = gk_mixture_molar_mass(fluid->mixture, &mm);
         if (s != GK_OK) {
             return s;
         }
@@ -91,7 +98,7 @@ static gk_real component_tc(gk_eos eos, const gk_gas *g) {
  * Limitation (documented): a mixture between its dew and bubble points (two phases) is not
  * detected by a single-phase root; no flash calculation is made.
  */
-static int fluid_is_liquid(gk_eos eos, gk_fluid fluid, gk_temperature t, const gk_eos_result *r) {
+static int fluid_is_liquid(gk_eos eos, const gk_fluid *fluid, gk_temperature t, const gk_eos_result *r) {
     gk_real tc = GK_LIT(0.0);
     if (eos == GK_EOS_IDEAL || r->branch != GK_ROOT_LIQUID) {
         return 0;
@@ -99,19 +106,19 @@ static int fluid_is_liquid(gk_eos eos, gk_fluid fluid, gk_temperature t, const g
     if (r->root_count >= 2) {
         return 1;
     }
-    if (fluid.gas != NULL) {
-        tc = component_tc(eos, fluid.gas);
+    if (fluid->gas != NULL) {
+        tc = component_tc(eos, fluid->gas);
     } else {
         size_t i;
-        for (i = 0; i < fluid.mixture->count; ++i) {
-            tc += fluid.mixture->mole_fraction[i] * component_tc(eos, fluid.mixture->gas[i]);
+        for (i = 0; i < fluid->mixture->count; ++i) {
+            tc += fluid->mixture->mole_fraction[i] * component_tc(eos, fluid->mixture->gas[i]);
         }
     }
     return (t.k < tc) ? 1 : 0;
 }
 
 /* Solve and require a gas (or supercritical) stable state. */
-static gk_status gas_state(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t, gk_real *z) {
+static gk_status gas_state(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t, gk_real *z) {
     gk_eos_result r;
     const gk_status s = fluid_solve(eos, fluid, p, t, &r);
     if (s != GK_OK) {
@@ -136,11 +143,11 @@ gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t
     if (z == NULL) {
         return GK_ERR_ARGUMENT;
     }
-    s = fluid_check(eos, fluid);
+    s = fluid_check(eos, &fluid);
     if (s != GK_OK) {
         return s;
     }
-    s = fluid_solve(eos, fluid, p, t, &r);
+    s = fluid_solve(eos, &fluid, p, t, &r);
     if (s != GK_OK) {
         return s;
     }
@@ -149,7 +156,7 @@ gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t
 }
 
 /* Factor from actual volume at (p, T) to volume at ref, both states gas. */
-static gk_status flow_factor(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t,
+static gk_status flow_factor(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t,
                              gk_reference ref, gk_real *factor) {
     gk_real z = GK_LIT(1.0), z_ref = GK_LIT(1.0);
     gk_status s = gas_state(eos, fluid, p, t, &z);
@@ -165,7 +172,7 @@ static gk_status flow_factor(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_tempe
 
 /* The two directions of the reference-flow conversion: check the inputs, find the factor from
  * Z at both conditions, then multiply (to the reference) or divide (from it). */
-static gk_status flow_convert(gk_eos eos, gk_fluid fluid, gk_real q_in, gk_pressure p,
+static gk_status flow_convert(gk_eos eos, const gk_fluid *fluid, gk_real q_in, gk_pressure p,
                               gk_temperature t, gk_reference ref, int to_reference,
                               gk_volume_flow *out) {
     gk_real f = GK_LIT(1.0), q;
@@ -198,13 +205,13 @@ static gk_status flow_convert(gk_eos eos, gk_fluid fluid, gk_real q_in, gk_press
 
 gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
                                gk_temperature t, gk_reference ref, gk_volume_flow *out) {
-    return flow_convert(eos, fluid, actual.m3_per_s, p, t, ref, 1, out);
+    return flow_convert(eos, &fluid, actual.m3_per_s, p, t, ref, 1, out);
 }
 
 gk_status gk_flow_from_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow at_reference,
                                  gk_reference ref, gk_pressure p, gk_temperature t,
                                  gk_volume_flow *out) {
-    return flow_convert(eos, fluid, at_reference.m3_per_s, p, t, ref, 0, out);
+    return flow_convert(eos, &fluid, at_reference.m3_per_s, p, t, ref, 0, out);
 }
 
 gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
@@ -214,18 +221,18 @@ gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_
     if (out == NULL) {
         return GK_ERR_ARGUMENT;
     }
-    s = fluid_check(eos, fluid);
+    s = fluid_check(eos, &fluid);
     if (s != GK_OK) {
         return s;
     }
     if (!gk_finite(actual.m3_per_s) || !gk_positive(p.pa) || !gk_positive(t.k)) {
         return GK_ERR_DOMAIN;
     }
-    s = fluid_molar_mass(fluid, &m);
+    s = fluid_molar_mass(&fluid, &m);
     if (s != GK_OK) {
         return s;
     }
-    s = gas_state(eos, fluid, p, t, &z);
+    s = gas_state(eos, &fluid, p, t, &z);
     if (s != GK_OK) {
         return s;
     }
@@ -247,7 +254,7 @@ gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel, gk_pr
     if (out == NULL) {
         return GK_ERR_ARGUMENT;
     }
-    s = fluid_check(eos, fluid);
+    s = fluid_check(eos, &fluid);
     if (s != GK_OK) {
         return s;
     }
@@ -258,15 +265,15 @@ gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel, gk_pr
     if (s != GK_OK) {
         return s;
     }
-    s = fluid_molar_mass(fluid, &m);
+    s = fluid_molar_mass(&fluid, &m);
     if (s != GK_OK) {
         return s;
     }
-    s = gas_state(eos, fluid, p, t, &z);
+    s = gas_state(eos, &fluid, p, t, &z);
     if (s != GK_OK) {
         return s;
     }
-    s = gas_state(eos, fluid, ref.p, ref.t, &z_ref);
+    s = gas_state(eos, &fluid, ref.p, ref.t, &z_ref);
     if (s != GK_OK) {
         return s;
     }
@@ -304,7 +311,7 @@ gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel, gk_pr
  * change, with the rounding of the two roots divided by k. If either stretched point is not a
  * gas state of the model (near the vapour pressure), the plain difference is kept.
  */
-static gk_status leak_dz(gk_eos eos, gk_fluid fluid, gk_pressure ps, gk_temperature ts,
+static gk_status leak_dz(gk_eos eos, const gk_fluid *fluid, gk_pressure ps, gk_temperature ts,
                          gk_pressure pe, gk_temperature te, gk_real zs, gk_real ze, gk_real *dz) {
     const gk_real dp = pe.pa - ps.pa, dt = te.k - ts.k;
     const gk_real hp = gk_fabs(dp) / ps.pa, ht = gk_fabs(dt) / ts.k;
@@ -339,7 +346,7 @@ gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test
     if (out == NULL) {
         return GK_ERR_ARGUMENT;
     }
-    s = fluid_check(eos, fluid);
+    s = fluid_check(eos, &fluid);
     if (s != GK_OK) {
         return s;
     }
@@ -351,19 +358,19 @@ gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test
     if (s != GK_OK) {
         return s;
     }
-    s = fluid_molar_mass(fluid, &m);
+    s = fluid_molar_mass(&fluid, &m);
     if (s != GK_OK) {
         return s;
     }
-    s = gas_state(eos, fluid, p_start, t_start, &zs);
+    s = gas_state(eos, &fluid, p_start, t_start, &zs);
     if (s != GK_OK) {
         return s;
     }
-    s = gas_state(eos, fluid, p_end, t_end, &ze);
+    s = gas_state(eos, &fluid, p_end, t_end, &ze);
     if (s != GK_OK) {
         return s;
     }
-    s = gas_state(eos, fluid, ref.p, ref.t, &z_ref);
+    s = gas_state(eos, &fluid, ref.p, ref.t, &z_ref);
     if (s != GK_OK) {
         return s;
     }
@@ -378,7 +385,7 @@ gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test
      * decay smaller than LEAK_H (relative), Ze - Zs is taken instead as a central difference
      * of Z along the same straight line in (p, T), stretched to LEAK_H (see leak_dz()).
      */
-    s = leak_dz(eos, fluid, p_start, t_start, p_end, t_end, zs, ze, &dz);
+    s = leak_dz(eos, &fluid, p_start, t_start, p_end, t_end, zs, ze, &dz);
     if (s != GK_OK) {
         return s;
     }
@@ -412,7 +419,7 @@ gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temp
     if (out == NULL) {
         return GK_ERR_ARGUMENT;
     }
-    s = fluid_check(eos, fluid);
+    s = fluid_check(eos, &fluid);
     if (s != GK_OK) {
         return s;
     }
@@ -423,18 +430,18 @@ gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temp
     if (s != GK_OK) {
         return s;
     }
-    s = fluid_molar_mass(fluid, &m);
+    s = fluid_molar_mass(&fluid, &m);
     if (s != GK_OK) {
         return s;
     }
-    s = gas_state(eos, fluid, p, t, &z);
+    s = gas_state(eos, &fluid, p, t, &z);
     if (s != GK_OK) {
         return s;
     }
     air_fluid.gas = air;
     air_fluid.mixture = NULL;
     air_fluid.kij = NULL;
-    s = gas_state(eos, air_fluid, p, t, &z_air);
+    s = gas_state(eos, &air_fluid, p, t, &z_air);
     if (s != GK_OK) {
         return s;
     }
@@ -458,10 +465,9 @@ static int is_water(const gk_gas *g, const gk_gas *water) {
 gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature t,
                            gk_real relative_humidity, gk_mixture *wet) {
     const gk_gas *water = NULL;
-    gk_mixture m;
     gk_pressure pws;
     gk_real xw, scale;
-    size_t i, k;
+    size_t i, k, n;
     gk_status s;
     if (dry == NULL || wet == NULL) {
         return GK_ERR_ARGUMENT;
@@ -486,28 +492,33 @@ gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature 
     if (s != GK_OK) {
         return s;
     }
-    m = *dry; /* a copy: wet may be the same object as dry */
-    k = m.count;
-    for (i = 0; i < m.count; ++i) {
-        if (is_water(m.gas[i], water)) {
+    n = dry->count;
+    k = n;
+    for (i = 0; i < n; ++i) {
+        if (is_water(dry->gas[i], water)) {
             k = i;
             break;
         }
     }
-    if (k == m.count && m.count >= GK_MIXTURE_MAX) {
+    if (k == n && n >= GK_MIXTURE_MAX) {
         return GK_ERR_COMPOSITION; /* no room to append water */
     }
+    /* Every check has passed: write *wet entry by entry, each read from dry before it is
+       written, so wet may be the same object as dry (no copy of a gk_mixture on the stack). */
     scale = GK_LIT(1.0) - xw;
-    for (i = 0; i < m.count; ++i) {
-        m.mole_fraction[i] *= scale;
+    for (i = 0; i < GK_MIXTURE_MAX; ++i) {
+        const gk_gas *g = dry->gas[i];
+        gk_real x = dry->mole_fraction[i];
+        if (i < n) {
+            x *= scale;
+        }
+        if (i == k) {
+            g = water;
+            x = (k == n) ? xw : x + xw;
+        }
+        wet->gas[i] = g;
+        wet->mole_fraction[i] = x;
     }
-    if (k == m.count) {
-        m.gas[k] = water;
-        m.mole_fraction[k] = xw;
-        m.count = k + 1u;
-    } else {
-        m.mole_fraction[k] += xw;
-    }
-    *wet = m;
+    wet->count = (k == n) ? n + 1u : n;
     return GK_OK;
 }

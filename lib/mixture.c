@@ -8,25 +8,27 @@
 /* Longest composition text accepted, in characters before the NUL (documented in mixture.h).
    Sixteen components with long names and numbers fit comfortably. */
 #define GK__MIXTURE_TEXT_MAX 1024
-/* Longest gas name or formula passed on to gk_gas_find(); a longer one names no gas. */
+/* Longest gas name or formula looked up (gk__gas_find_n()); a longer one names no gas. */
 #define GK__MIXTURE_NAME_MAX 63
 
 /* Sum with Neumaier's compensation (A. Neumaier, ZAMM 54 (1974) 39; common practice): the
    error stays about one rounding of the result instead of growing with the count, so 16
    float fractions keep well inside the 1e-6 budget. */
+static void gk__neumaier_add(gk_real *s, gk_real *c, gk_real x) {
+    gk_real t = *s + x;
+    if (gk_fabs(*s) >= gk_fabs(x)) {
+        *c += (*s - t) + x;
+    } else {
+        *c += (x - t) + *s;
+    }
+    *s = t;
+}
+
 static gk_real gk__compensated_sum(const gk_real *x, size_t n) {
     gk_real s = GK_LIT(0.0);
     gk_real c = GK_LIT(0.0);
     size_t i;
-    for (i = 0; i < n; ++i) {
-        gk_real t = s + x[i];
-        if (gk_fabs(s) >= gk_fabs(x[i])) {
-            c += (s - t) + x[i];
-        } else {
-            c += (x[i] - t) + s;
-        }
-        s = t;
-    }
+    for (i = 0; i < n; ++i) gk__neumaier_add(&s, &c, x[i]);
     return s + c;
 }
 
@@ -91,115 +93,178 @@ static size_t gk__skip_spaces(const char *text, size_t pos, size_t len) {
  *               "ppm" and "balance" in any ASCII case)
  * A component ends at ',' or at the end of the text; anything else after the value is an error.
  */
+/* One component of the text, as read by parse_item(). */
+typedef struct mix_item {
+    const gk_gas *gas;
+    gk__decimal number;    /* the value, unless is_balance */
+    int32_t scale_exp10;   /* -2 for '%', -6 for "ppm", else 0 */
+    int is_balance;
+    size_t end;            /* where the component ends: len or the index of its ',' */
+} mix_item;
+
+/* Reads the component that starts at text[pos] (syntax and gas; the value is converted by
+   item_fraction()). Writes *it only on GK_OK. */
+static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *it) {
+    size_t eq = pos;
+    size_t name_begin;
+    size_t name_end;
+    size_t v;
+    size_t i;
+    int is_balance = 0;
+    gk__decimal number = {0u, 0, 0};
+    int32_t scale_exp10 = 0;
+    const gk_gas *gas = NULL;
+    gk_status st;
+
+    /* name */
+    while (eq < len && text[eq] != '=') ++eq;
+    if (eq == len) return GK_ERR_PARSE;                 /* no '=': "", "N2", "N2=1," */
+    name_begin = gk__skip_spaces(text, pos, eq);
+    name_end = eq;
+    while (name_end > name_begin && gk__is_space(text[name_end - 1])) --name_end;
+    if (name_end == name_begin) return GK_ERR_PARSE;     /* "=0.5" */
+    if (text[name_begin] == ',' || text[name_end - 1] == ',') return GK_ERR_PARSE;
+
+    /* value */
+    v = gk__skip_spaces(text, eq + 1, len);
+    if (gk__starts_with_ci(text, v, len, "balance")) {
+        is_balance = 1;
+        v += 7u;
+    } else {
+        size_t used = 0;
+        st = gk__decimal_scan(text + v, len - v, &number, &used);
+        if (st != GK_OK) return GK_ERR_PARSE;            /* "N2=", "N2=abc" */
+        v = gk__skip_spaces(text, v + used, len);
+        if (v < len && text[v] == '%') {
+            scale_exp10 = -2;
+            v += 1u;
+        } else if (gk__starts_with_ci(text, v, len, "ppm")) {
+            scale_exp10 = -6;
+            v += 3u;
+        }
+    }
+    v = gk__skip_spaces(text, v, len);
+    if (v < len && text[v] != ',') return GK_ERR_PARSE;  /* "N2=0.5 O2=0.5", "N2=5%%" */
+
+    /* gas */
+    if (name_end - name_begin > GK__MIXTURE_NAME_MAX) return GK_ERR_NOT_FOUND;
+    st = gk__gas_find_n(text + name_begin, name_end - name_begin, &gas);
+    if (st == GK_ERR_NOT_FOUND) {
+        /* "N2=0,5, O2=0,5": a comma inside a name that names no gas was most likely
+           meant as a separator, so the text is malformed rather than the gas unknown. */
+        for (i = name_begin; i < name_end; ++i) {
+            if (text[i] == ',') return GK_ERR_PARSE;
+        }
+    }
+    if (st != GK_OK) return st;
+    it->gas = gas;
+    it->number = number;
+    it->scale_exp10 = scale_exp10;
+    it->is_balance = is_balance;
+    it->end = v;
+    return GK_OK;
+}
+
+/* The mole fraction of a component that is not the balance. */
+static gk_status item_fraction(const mix_item *it, gk_real *x) {
+    gk_real y = GK_LIT(0.0);
+    if (gk__decimal_to_real(it->number, it->scale_exp10, &y) != GK_OK) {
+        return GK_ERR_COMPOSITION;                       /* overflows: far above 1 */
+    }
+    if (it->number.negative && it->number.mantissa != 0u) return GK_ERR_COMPOSITION;
+    if (y > GK_LIT(1.0)) return GK_ERR_COMPOSITION;
+    *x = y;
+    return GK_OK;
+}
+
+/*
+ * Two passes over the text, so that no gk_mixture is built on the stack (firmware stack
+ * budget) while *out stays untouched on every error: the first pass makes every check and
+ * forms the sum (and the balance); the second, which cannot fail, reads the same components
+ * again and writes them into *out. A gas listed twice is found by reading the earlier
+ * components again (at most GK_MIXTURE_MAX of them).
+ */
 gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
-    gk_mixture mix;
+    mix_item it;
     size_t len = 0;
     size_t pos = 0;
+    size_t count = 0;
     size_t i;
     size_t balance_index = GK_MIXTURE_MAX;   /* none yet */
-    gk_real sum;
+    gk_real sum = GK_LIT(0.0), comp = GK_LIT(0.0), rest = GK_LIT(0.0);
+    gk_status st;
 
     if (text == NULL || out == NULL) return GK_ERR_ARGUMENT;
     /* Bounded length: reads at most GK__MIXTURE_TEXT_MAX + 1 characters, never past the NUL. */
     while (len <= GK__MIXTURE_TEXT_MAX && text[len] != '\0') ++len;
     if (len > GK__MIXTURE_TEXT_MAX) return GK_ERR_PARSE;
 
-    mix.count = 0;
-    for (i = 0; i < GK_MIXTURE_MAX; ++i) {
-        mix.gas[i] = NULL;
-        mix.mole_fraction[i] = GK_LIT(0.0);
-    }
-
+    /* pass 1: every check; the first error found is reported. The value is converted before
+       the search for an earlier listing of the gas (no side effect) and its status reported
+       after it, so one mix_item serves both (firmware stack budget). */
     for (;;) {
-        size_t eq = pos;
-        size_t name_begin;
-        size_t name_end;
-        size_t v;
-        int is_balance = 0;
-        gk__decimal number = {0u, 0, 0};
-        int32_t scale_exp10 = 0;
-        char name[GK__MIXTURE_NAME_MAX + 1];
-        const gk_gas *gas = NULL;
-        gk_status st;
-
-        /* name */
-        while (eq < len && text[eq] != '=') ++eq;
-        if (eq == len) return GK_ERR_PARSE;                 /* no '=': "", "N2", "N2=1," */
-        name_begin = gk__skip_spaces(text, pos, eq);
-        name_end = eq;
-        while (name_end > name_begin && gk__is_space(text[name_end - 1])) --name_end;
-        if (name_end == name_begin) return GK_ERR_PARSE;     /* "=0.5" */
-        if (text[name_begin] == ',' || text[name_end - 1] == ',') return GK_ERR_PARSE;
-
-        /* value */
-        v = gk__skip_spaces(text, eq + 1, len);
-        if (gk__starts_with_ci(text, v, len, "balance")) {
-            is_balance = 1;
-            v += 7u;
-        } else {
-            size_t used = 0;
-            st = gk__decimal_scan(text + v, len - v, &number, &used);
-            if (st != GK_OK) return GK_ERR_PARSE;            /* "N2=", "N2=abc" */
-            v = gk__skip_spaces(text, v + used, len);
-            if (v < len && text[v] == '%') {
-                scale_exp10 = -2;
-                v += 1u;
-            } else if (gk__starts_with_ci(text, v, len, "ppm")) {
-                scale_exp10 = -6;
-                v += 3u;
-            }
-        }
-        v = gk__skip_spaces(text, v, len);
-        if (v < len && text[v] != ',') return GK_ERR_PARSE;  /* "N2=0.5 O2=0.5", "N2=5%%" */
-
-        /* gas */
-        if (name_end - name_begin > GK__MIXTURE_NAME_MAX) return GK_ERR_NOT_FOUND;
-        for (i = 0; i < name_end - name_begin; ++i) name[i] = text[name_begin + i];
-        name[name_end - name_begin] = '\0';
-        st = gk_gas_find(name, &gas);
-        if (st == GK_ERR_NOT_FOUND) {
-            /* "N2=0,5, O2=0,5": a comma inside a name that names no gas was most likely
-               meant as a separator, so the text is malformed rather than the gas unknown. */
-            for (i = 0; name[i] != '\0'; ++i) {
-                if (name[i] == ',') return GK_ERR_PARSE;
-            }
-        }
+        size_t q = 0;
+        const gk_gas *gas;
+        size_t end;
+        int is_balance;
+        gk_real x = GK_LIT(0.0);
+        gk_status value_st = GK_OK;
+        st = parse_item(text, len, pos, &it);
         if (st != GK_OK) return st;
-
-        if (mix.count == GK_MIXTURE_MAX) return GK_ERR_COMPOSITION;
-        for (i = 0; i < mix.count; ++i) {
-            if (mix.gas[i] == gas) return GK_ERR_COMPOSITION; /* listed twice */
+        if (count == GK_MIXTURE_MAX) return GK_ERR_COMPOSITION;
+        gas = it.gas;
+        end = it.end;
+        is_balance = it.is_balance;
+        if (!is_balance) value_st = item_fraction(&it, &x);
+        for (i = 0; i < count; ++i) {
+            it.gas = NULL;
+            it.end = len;
+            (void)parse_item(text, len, q, &it);         /* read before: cannot fail */
+            if (it.gas == gas) return GK_ERR_COMPOSITION;  /* listed twice */
+            q = it.end + 1u;
         }
-
         if (is_balance) {
             if (balance_index != GK_MIXTURE_MAX) return GK_ERR_PARSE;  /* two balances */
-            balance_index = mix.count;
+            balance_index = count;
         } else {
-            gk_real x = GK_LIT(0.0);
-            st = gk__decimal_to_real(number, scale_exp10, &x);
-            if (st != GK_OK) return GK_ERR_COMPOSITION;      /* overflows: far above 1 */
-            if (number.negative && number.mantissa != 0u) return GK_ERR_COMPOSITION;
-            if (x > GK_LIT(1.0)) return GK_ERR_COMPOSITION;
-            mix.mole_fraction[mix.count] = x;
+            if (value_st != GK_OK) return value_st;
+            gk__neumaier_add(&sum, &comp, x);
         }
-        mix.gas[mix.count] = gas;
-        mix.count += 1u;
-
-        if (v == len) break;
-        pos = v + 1u;                                        /* past ',' */
+        count += 1u;
+        if (end == len) break;
+        pos = end + 1u;                                      /* past ',' */
     }
 
-    /* the balance slot still holds 0, so this is the sum of the given fractions */
-    sum = gk__compensated_sum(mix.mole_fraction, mix.count);
+    sum += comp;
     if (balance_index != GK_MIXTURE_MAX) {
-        gk_real rest = GK_LIT(1.0) - sum;
+        rest = GK_LIT(1.0) - sum;
         if (rest < -GK__MIXTURE_SUM_TOL) return GK_ERR_COMPOSITION;  /* negative balance */
         if (rest < GK_LIT(0.0)) rest = GK_LIT(0.0);   /* rounding within the 1e-6 budget */
-        mix.mole_fraction[balance_index] = rest;
     } else if (!(gk_fabs(sum - GK_LIT(1.0)) <= GK__MIXTURE_SUM_TOL)) {
         return GK_ERR_COMPOSITION;
     }
-    *out = mix;
+
+    /* pass 2: the same components again, into *out */
+    pos = 0;
+    for (i = 0; i < GK_MIXTURE_MAX; ++i) {
+        gk_real x = GK_LIT(0.0);
+        const gk_gas *gas = NULL;
+        if (i < count) {
+            it.gas = NULL;
+            it.end = len;
+            (void)parse_item(text, len, pos, &it);
+            gas = it.gas;
+            if (i == balance_index) {
+                x = rest;
+            } else {
+                (void)item_fraction(&it, &x);
+            }
+            pos = it.end + 1u;
+        }
+        out->gas[i] = gas;
+        out->mole_fraction[i] = x;
+    }
+    out->count = count;
     return GK_OK;
 }
 

@@ -27,4 +27,9 @@
  */
 gk_status gk__mixture_check(const gk_mixture *mix);
 
+/* gk_gas_find() on the n characters text[0 .. n) (no NUL needed; gases.c): the composition
+   parser looks names up in place, without a copy on the stack. GK_OK (and *out) or
+   GK_ERR_NOT_FOUND; the caller has checked text and out. */
+gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out);
+
 #endif /* GASKIT_MIXTURE_INTERNAL_H */

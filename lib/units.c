@@ -4,7 +4,8 @@
  *
  * One table row per gk_unit (designated initialisers keep it in enum order; a compile-time
  * check keeps it GK_UNIT_COUNT rows long). A row gives the unit's dimension, its symbol and
- * its SI value as a ratio num / den plus an offset for the temperature scales:
+ * its SI value as a ratio num / den plus an offset for the temperature scales (degC, degF:
+ * gk_unit_offset()):
  *
  *     SI = (value + offset) * num / den        value = SI * den / num - offset
  *
@@ -25,16 +26,33 @@ enum gk_dim {
     GK_DIM_MASS_FLOW
 };
 
+/* The symbol is held in the row (the longest, "cm3/mol" and "ft3/min", has 7 characters), so
+ * a row needs no pointer and the table no separate strings (firmware size). In the float build
+ * a row holds the factor num / den itself, rounded once at compile time to the same float the
+ * double-free ratio form gave (the ratio form is kept for exactness in double builds). */
+#define GK_UNIT_SYMBOL_SIZE 8
 typedef struct gk_unit_row {
-    enum gk_dim dim;
-    const char *symbol; /* ASCII symbol returned by gk_unit_symbol() and accepted by gk_unit_parse() */
+    char symbol[GK_UNIT_SYMBOL_SIZE]; /* ASCII symbol returned by gk_unit_symbol() and accepted by gk_unit_parse() */
+#if GK_REAL_IS_FLOAT
+    gk_real factor;     /* one unit (after the offset) is factor SI units */
+#else
     gk_real num;        /* one unit (after the offset) is num / den SI units */
     gk_real den;
-    gk_real offset;     /* added to the value before scaling; 0 except degC and degF */
+#endif
+    unsigned char dim;  /* enum gk_dim */
 } gk_unit_row;
 
-#define ROW(dim, sym, num, den) { GK_DIM_##dim, sym, GK_LIT(num), GK_LIT(den), GK_LIT(0.0) }
-#define TROW(sym, num, den, off) { GK_DIM_TEMPERATURE, sym, GK_LIT(num), GK_LIT(den), GK_LIT(off) }
+#if GK_REAL_IS_FLOAT
+#  define ROW(dim, sym, num, den) { sym, GK_LIT(num) / GK_LIT(den), (unsigned char)GK_DIM_##dim }
+#  define ROW_TO_SI(u) (u)->factor, GK_LIT(1.0)
+#  define ROW_FROM_SI(u) GK_LIT(1.0), (u)->factor
+#else
+#  define ROW(dim, sym, num, den) { sym, GK_LIT(num), GK_LIT(den), (unsigned char)GK_DIM_##dim }
+#  define ROW_TO_SI(u) (u)->num, (u)->den
+#  define ROW_FROM_SI(u) (u)->den, (u)->num
+#endif
+/* Temperature rows; the offsets of degC and degF are given by gk_unit_offset(). */
+#define TROW(sym, num, den) ROW(TEMPERATURE, sym, num, den)
 
 /* SP 811 = NIST Special Publication 811 (2008 edition), Appendix B.8 / B.9 (factors in
  * alphabetical order / by kind of quantity). Where SP 811 prints a rounded factor the exact
@@ -61,10 +79,10 @@ static const gk_unit_row gk_units[] = {
     [GK_UNIT_PSI]  = ROW(PRESSURE, "psi",  4.4482216152605, 6.4516e-4),
 
     /* ---- temperature, SI unit K (converted as temperatures, not differences) */
-    [GK_UNIT_K]    = TROW("K",    1.0, 1.0, 0.0),
-    [GK_UNIT_DEGC] = TROW("degC", 1.0, 1.0, 273.15),             /* SI Brochure: T/K = t/degC + 273.15, exact */
-    [GK_UNIT_DEGF] = TROW("degF", 5.0, 9.0, 459.67),             /* SP 811 B.9: T/K = (t/degF + 459.67)/1.8, exact */
-    [GK_UNIT_DEGR] = TROW("degR", 5.0, 9.0, 0.0),                /* SP 811 B.9: T/K = (T/degR)/1.8, exact */
+    [GK_UNIT_K]    = TROW("K",    1.0, 1.0),
+    [GK_UNIT_DEGC] = TROW("degC", 1.0, 1.0),                     /* offset: gk_unit_offset() */
+    [GK_UNIT_DEGF] = TROW("degF", 5.0, 9.0),                     /* offset: gk_unit_offset() */
+    [GK_UNIT_DEGR] = TROW("degR", 5.0, 9.0),                     /* SP 811 B.9: T/K = (T/degR)/1.8, exact */
 
     /* ---- volume, SI unit m3 */
     [GK_UNIT_M3]     = ROW(VOLUME, "m3",  1.0, 1.0),
@@ -129,7 +147,9 @@ typedef char gk_units_table_has_one_row_per_unit
     [(sizeof gk_units / sizeof gk_units[0] == (size_t)GK_UNIT_COUNT) ? 1 : -1];
 
 /* Extra spellings accepted by gk_unit_parse() besides the symbols of the table. */
-typedef struct gk_unit_alias { const char *text; gk_unit unit; } gk_unit_alias;
+/* The text is held in the entry (the longest, "cm^3/mol" and "ft^3/min", has 8 bytes): no
+   pointers and no separate strings (firmware size). */
+typedef struct gk_unit_alias { char text[9]; unsigned char unit; } gk_unit_alias;
 
 static const gk_unit_alias gk_unit_aliases[] = {
     { "torr", GK_UNIT_TORR },
@@ -178,6 +198,14 @@ static const gk_unit_row *gk_unit_row_of(gk_unit unit) {
     return &gk_units[u];
 }
 
+/* Added to the value before scaling: 0 except for the two temperature scales with an offset
+ * zero (at most 459.67, so adding it cannot overflow a finite value). */
+static gk_real gk_unit_offset(const gk_unit_row *u) {
+    if (u == &gk_units[GK_UNIT_DEGC]) return GK_LIT(273.15); /* SI Brochure: T/K = t/degC + 273.15, exact */
+    if (u == &gk_units[GK_UNIT_DEGF]) return GK_LIT(459.67); /* SP 811 B.9: T/K = (t/degF + 459.67)/1.8, exact */
+    return GK_LIT(0.0);
+}
+
 /* Fast-path bound of gk_scale(): the table ratios num / den lie within [2^-40, 2^40] (they span
  * 1e-6 / 60 .. 1e6), so for |x| within [2^-B, 2^B] the product stays inside the normal range
  * (B = 900 for binary64, B = 60 for binary32: exact powers of two). */
@@ -216,9 +244,9 @@ static gk_status gk_scale(gk_real x, gk_real num, gk_real den, gk_real *out) {
 static gk_status gk_to_si(const gk_unit_row *u, gk_real value, gk_real *si) {
     gk_real x;
     if (!gk_finite(value)) return GK_ERR_DOMAIN;
-    x = value + u->offset; /* offset <= 459.67: cannot overflow a finite value */
+    x = value + gk_unit_offset(u); /* offset <= 459.67: cannot overflow a finite value */
     if (u->dim == GK_DIM_TEMPERATURE && x < GK_LIT(0.0)) return GK_ERR_DOMAIN;
-    return gk_scale(x, u->num, u->den, si);
+    return gk_scale(x, ROW_TO_SI(u), si);
 }
 
 /* SI value -> value in unit row u. Temperature below 0 K is GK_ERR_DOMAIN. */
@@ -227,9 +255,9 @@ static gk_status gk_from_si(const gk_unit_row *u, gk_real si, gk_real *value) {
     gk_status s;
     if (!gk_finite(si)) return GK_ERR_DOMAIN;
     if (u->dim == GK_DIM_TEMPERATURE && si < GK_LIT(0.0)) return GK_ERR_DOMAIN;
-    s = gk_scale(si, u->den, u->num, &x);
+    s = gk_scale(si, ROW_FROM_SI(u), &x);
     if (s != GK_OK) return s;
-    *value = x - u->offset;
+    *value = x - gk_unit_offset(u);
     return GK_OK;
 }
 
@@ -289,7 +317,7 @@ gk_status gk_unit_parse(const char *symbol, gk_unit *out) {
     }
     for (i = 0; i < sizeof gk_unit_aliases / sizeof gk_unit_aliases[0]; ++i) {
         if (gk_text_equal(symbol, gk_unit_aliases[i].text)) {
-            *out = gk_unit_aliases[i].unit;
+            *out = (gk_unit)gk_unit_aliases[i].unit;
             return GK_OK;
         }
     }
@@ -308,7 +336,7 @@ gk_status gk_pressure_from_gauge(gk_real value, gk_unit unit, gk_pressure ambien
     gk_status s;
     if (out == NULL || u == NULL || u->dim != GK_DIM_PRESSURE) return GK_ERR_ARGUMENT;
     if (!gk_finite(value) || !gk_positive(ambient.pa)) return GK_ERR_DOMAIN;
-    s = gk_scale(value, u->num, u->den, &delta); /* a pressure difference: no offset */
+    s = gk_scale(value, ROW_TO_SI(u), &delta); /* a pressure difference: no offset */
     if (s != GK_OK) return s;
     p = delta + ambient.pa;
     if (!gk_finite(p)) return GK_ERR_RANGE;
