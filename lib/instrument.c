@@ -8,7 +8,6 @@
  * state is liquid the amount does not follow from pressure, and the functions that need a gas
  * return GK_ERR_RANGE (see fluid_is_liquid()).
  */
-#include <string.h>
 #include "gk_internal.h"
 #include "mixture_internal.h"
 #include "eos_internal.h"
@@ -459,7 +458,9 @@ static int is_water(const gk_gas *g, const gk_gas *water) {
     if (g == water) {
         return 1;
     }
-    return (g != NULL && g->formula != NULL && strcmp(g->formula, "H2O") == 0) ? 1 : 0;
+    /* the formula compared by hand: the library uses no C library but <math.h> */
+    return (g != NULL && g->formula != NULL && g->formula[0] == 'H' && g->formula[1] == '2' &&
+            g->formula[2] == 'O' && g->formula[3] == '\0') ? 1 : 0;
 }
 
 gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature t,
