@@ -44,7 +44,7 @@ static GK_ALWAYS_INLINE gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid,
     if (fluid->gas != NULL) {
         s = gk__eos_prepare(eos, fluid->gas, p, t, GK_ROOT_STABLE, ab);
     } else {
-        s = gk__mixture_eos_prepare(eos, fluid->mixture, fluid->kij, p, t, GK_ROOT_STABLE, ab);
+        s = gk__mixture_eos_prepare(eos, fluid, p, t, GK_ROOT_STABLE, ab);
     }
     if (s == GK_OK) {
         s = gk__eos_finish(eos, ab, p, t, GK_ROOT_STABLE, r);
