@@ -377,8 +377,9 @@ static GK_NOINLINE gk_status eos_pick(gk__cubic_family family, gk_real vc_over_b
 
 /* gk__eos_solve_ab (see eos_internal.h). gk_eos_solve() calls this directly (same translation
    unit, no wrapper); gk__eos_solve_ab() wraps it for the mixture and van der Waals modules. */
-static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
-                              gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
+static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real p, gk_real t, gk_real a,
+                                     gk_real b, gk_real vc_over_b, gk_root root,
+                                     gk_eos_result *out) {
     gk_real u, w, c2, c1, c0, zr[3], guess, rtp;
     int n;
 
@@ -416,7 +417,7 @@ static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real vc_over_b,
 
 gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
                            gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
-    return eos_solve_ab(family, vc_over_b, a, b, p, t, root, out);
+    return eos_solve_ab(family, p, t, a, b, vc_over_b, root, out);
 }
 
 /* gk__eos_prepare (see eos_internal.h): the checks of gk_eos_solve() and A, B. */
@@ -436,7 +437,8 @@ gk_status gk__eos_finish(gk_eos eos, const gk_real ab[2], gk_pressure p, gk_temp
                          gk_root root, gk_eos_result *out) {
     if (eos == GK_EOS_IDEAL) return gk__eos_ideal(p.pa, t.k, out);
     /* writes *out only on success */
-    return eos_solve_ab(eos_family(eos), eos_vc_over_b(eos), ab[0], ab[1], p.pa, t.k, root, out);
+    /* p, t stay in the registers they arrive in and the call is a plain jump (no frame) */
+    return eos_solve_ab(eos_family(eos), p.pa, t.k, ab[0], ab[1], eos_vc_over_b(eos), root, out);
 }
 
 gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
