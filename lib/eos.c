@@ -330,7 +330,10 @@ static inline gk_real eos_gas_guess(const eos_series *k, gk_real a, gk_real b) {
    and logarithms, are not in the frame that lies under the solver (firmware stack budget). */
 static GK_NOINLINE gk_status eos_pick(gk__cubic_family family, gk_real vc_over_b, gk_real a,
                                       gk_real b, gk_real rtp, gk_root root, const gk_real zr[3],
-                                      int n, gk_eos_result *out) {
+                                      gk_eos_result *out) {
+    /* the number of roots from zr[] itself (one argument less: none passed on the stack): the
+       roots lie above B > 0 and gk__cubic_roots() sets the unused entries to 0 */
+    const int n = (zr[2] > GK_LIT(0.0)) ? 3 : (zr[1] > GK_LIT(0.0)) ? 2 : 1;
     gk_real zsel, phi, vm, attr;
     gk_root branch;
 
@@ -412,7 +415,7 @@ static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real p, gk_real
        cannot be represented, GK_ERR_RANGE, like an overflow. */
     if (n <= 0) return GK_ERR_RANGE;
 
-    return eos_pick(family, vc_over_b, a, b, rtp, root, zr, n, out);
+    return eos_pick(family, vc_over_b, a, b, rtp, root, zr, out);
 }
 
 gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
