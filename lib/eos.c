@@ -122,7 +122,7 @@ static inline gk_status eos_check_gas(gk_eos eos, const gk_gas *gas) {
 }
 
 /* Temperature function alpha(Tr) of each model (Tr > 0). */
-static inline gk_real eos_alpha(gk_eos eos, gk_real tr, gk_real omega) {
+static GK_ALWAYS_INLINE gk_real eos_alpha(gk_eos eos, gk_real tr, gk_real omega) {
     gk_real m, s;
     switch (eos) {
     case GK_EOS_REDLICH_KWONG:
