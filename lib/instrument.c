@@ -35,10 +35,11 @@ static GK_ALWAYS_INLINE gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid,
                              gk_eos_result *r) {
     /* A, B are staged in the result's z_roots[0], z_roots[1]: gk__eos_finish() reads both
        before it writes *r, and no separate array sits in the caller's frame (stack budget) */
-    gk_real *ab = r->z_roots;
+    gk_real *ab;
     gk_status s;
-    ab[0] = GK_LIT(0.0);
-    ab[1] = GK_LIT(0.0);
+    r->z_roots[0] = GK_LIT(0.0);
+    r->z_roots[1] = GK_LIT(0.0);
+    ab = r->z_roots;
     /* as gk_eos_solve() / gk_mixture_eos_solve(), in two halves: the checks and A, B return
        before the cubic is solved, so no public solver frame lies under it (stack budget) */
     if (fluid->gas != NULL) {
