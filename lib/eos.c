@@ -501,7 +501,13 @@ gk_status gk_eos_density(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temper
     gk_status st;
     if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
     if (!gk_positive(gas->molar_mass.kg_per_mol)) return GK_ERR_DOMAIN;
-    st = gk_eos_solve(eos, gas, p, t, GK_ROOT_STABLE, &r);
+    /* gk_eos_solve() in its two halves (its own checks are the ones above), without its frame
+       under the cubic solver; A, B are staged in r.z_roots (see gk__eos_finish()) */
+    r.z_roots[0] = GK_LIT(0.0);
+    r.z_roots[1] = GK_LIT(0.0);
+    st = gk__eos_prepare(eos, gas, p, t, GK_ROOT_STABLE, r.z_roots);
+    if (st != GK_OK) return st;
+    st = gk__eos_finish(eos, r.z_roots, p, t, GK_ROOT_STABLE, &r);
     if (st != GK_OK) return st;
     rho = gas->molar_mass.kg_per_mol / r.molar_volume.m3_per_mol;
     if (!gk_positive(rho)) return GK_ERR_RANGE;
