@@ -418,7 +418,6 @@ gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test
 gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t,
                               gk_real *out) {
     const gk_gas *air = NULL;
-    gk_fluid air_fluid;
     gk_real z = GK_LIT(1.0), z_air = GK_LIT(1.0), m = GK_LIT(0.0), d;
     gk_status s;
     if (out == NULL) {
@@ -443,10 +442,12 @@ gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temp
     if (s != GK_OK) {
         return s;
     }
-    air_fluid.gas = air;
-    air_fluid.mixture = NULL;
-    air_fluid.kij = NULL;
-    s = gas_state(eos, &air_fluid, p, t, &z_air);
+    /* the fluid's own copy (a by-value parameter, not needed any more) now names air: no
+       second gk_fluid in the frame (firmware stack budget) */
+    fluid.gas = air;
+    fluid.mixture = NULL;
+    fluid.kij = NULL;
+    s = gas_state(eos, &fluid, p, t, &z_air);
     if (s != GK_OK) {
         return s;
     }
