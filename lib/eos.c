@@ -122,7 +122,7 @@ static inline gk_status eos_check_gas(gk_eos eos, const gk_gas *gas) {
 }
 
 /* Temperature function alpha(Tr) of each model (Tr > 0). */
-static inline gk_real eos_alpha(gk_eos eos, gk_real tr, gk_real omega) {
+static GK_ALWAYS_INLINE gk_real eos_alpha(gk_eos eos, gk_real tr, gk_real omega) {
     gk_real m, s;
     switch (eos) {
     case GK_EOS_REDLICH_KWONG:
@@ -228,22 +228,26 @@ static inline gk_real eos_atanh_ratio(gk_real y) {
     return p01 + y2 * (p23 + y2 * (p45 + y2 * p6));
 }
 
-/* The attraction term of ln phi at Z (see above); q: A/B (RK, SRK) or A/(2 sqrt2 B) (PR), see
-   eos_log_factor(). */
-static inline gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_real q, gk_real z) {
+static gk_real eos_log_factor(gk__cubic_family family, gk_real a, gk_real b);
+
+/* The attraction term of ln phi at Z (see above); the factor q of the closed form, A/B (RK, SRK)
+   or A/(2 sqrt2 B) (PR) (eos_log_factor()), is formed only where that form is taken: the series
+   needs no division by B, and no q is kept live across the cubic solve (firmware stack). */
+static inline gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
     switch (family) {
     case GK__FAMILY_RK: {
         gk_real inv = GK_LIT(1.0) / (GK_LIT(2.0) * z + b); /* one division for t and A/(2Z + B) */
         gk_real t = b * inv, y = t * t;
         return (y < ATANH_SERIES_MAX) ? GK_LIT(2.0) * (a * inv) * eos_atanh_ratio(y)
-                                      : q * gk_log(GK_LIT(1.0) + b / z);
+                                      : eos_log_factor(family, a, b) * gk_log(GK_LIT(1.0) + b / z);
     }
     case GK__FAMILY_PR: {
         gk_real inv = GK_LIT(1.0) / (z + b); /* one division for t and A/(Z + B) */
         gk_real t = GK_SQRT2 * b * inv, y = t * t;
         return (y < ATANH_SERIES_MAX)
                    ? (a * inv) * eos_atanh_ratio(y)
-                   : q * gk_log(GK_LIT(1.0) + GK_LIT(2.0) * GK_SQRT2 * b /
+                   : eos_log_factor(family, a, b) *
+                         gk_log(GK_LIT(1.0) + GK_LIT(2.0) * GK_SQRT2 * b /
                                                   (z + (GK_LIT(1.0) - GK_SQRT2) * b));
     }
     case GK__FAMILY_VDW:
@@ -252,8 +256,7 @@ static inline gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real
     }
 }
 
-/* A/B (RK, SRK) or A/(2 sqrt2 B) (PR); independent of Z, so it is formed before the cubic is
-   solved and its division overlaps with the solver. */
+/* A/B (RK, SRK) or A/(2 sqrt2 B) (PR): the factor of the closed form of the attraction term. */
 static gk_real eos_log_factor(gk__cubic_family family, gk_real a, gk_real b) {
     switch (family) {
     case GK__FAMILY_RK: return a / b;
@@ -320,13 +323,68 @@ static inline gk_real eos_gas_guess(const eos_series *k, gk_real a, gk_real b) {
     return ((GK_LIT(1.0) + b) + a * c1) + a2 * ((c2 + a * c3) - GK_LIT(5.0) * a2);
 }
 
+/* The second half of eos_solve_ab(): from the n >= 1 roots zr[] (ascending) above B, the root
+   asked for (root; the stable one by the lower fugacity), its phi and molar volume (rtp = R T / p),
+   and the complete result into *out (only on GK_OK). Kept out of line so that the values it needs
+   after the cubic solve are few (a, b, rtp, the Vc/b label) and its own, for the attraction terms
+   and logarithms, are not in the frame that lies under the solver (firmware stack budget). */
+static GK_NOINLINE gk_status eos_pick(gk__cubic_family family, gk_real vc_over_b, gk_real a,
+                                      gk_real b, gk_real rtp, gk_root root, const gk_real zr[3],
+                                      gk_eos_result *out) {
+    /* the number of roots from zr[] itself (one argument less: none passed on the stack): the
+       roots lie above B > 0 and gk__cubic_roots() sets the unused entries to 0 */
+    const int n = (zr[2] > GK_LIT(0.0)) ? 3 : (zr[1] > GK_LIT(0.0)) ? 2 : 1;
+    gk_real zsel, phi, vm, attr;
+    gk_root branch;
+
+    if (n == 1) {
+        zsel = zr[0];
+        branch = (zsel < vc_over_b * b) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
+        attr = eos_attraction(family, a, b, zsel);
+    } else if (root == GK_ROOT_LIQUID) {
+        zsel = zr[0];
+        branch = GK_ROOT_LIQUID;
+        attr = eos_attraction(family, a, b, zsel);
+    } else if (root == GK_ROOT_GAS) {
+        zsel = zr[n - 1];
+        branch = GK_ROOT_GAS;
+        attr = eos_attraction(family, a, b, zsel);
+    } else {
+        /* stable: the lower fugacity (same p, T: the lower Gibbs energy); a tie goes to the gas.
+           ln phi_L - ln phi_G = (zL - zG) - ln((zL - B)/(zG - B)) - (attr_L - attr_G): one
+           logarithm for the first difference, and each attraction term is the one phi needs */
+        gk_real zl = zr[0], zg = zr[n - 1];
+        gk_real al = eos_attraction(family, a, b, zl);
+        gk_real ag = eos_attraction(family, a, b, zg);
+        gk_real dl = (zl - zg) - gk_log((zl - b) / (zg - b)) - (al - ag);
+        if (dl < GK_LIT(0.0)) {
+            zsel = zl; branch = GK_ROOT_LIQUID; attr = al;
+        } else {
+            zsel = zg; branch = GK_ROOT_GAS; attr = ag;
+        }
+    }
+    phi = eos_phi(attr, b, zsel);
+    vm = zsel * rtp;
+    if (!gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
+
+    out->z = zsel;
+    out->molar_volume.m3_per_mol = vm;
+    out->fugacity_coefficient = phi;
+    out->root_count = n;
+    out->z_roots[0] = zr[0];
+    out->z_roots[1] = zr[1];
+    out->z_roots[2] = zr[2];
+    out->branch = branch;
+    return GK_OK;
+}
+
 /* gk__eos_solve_ab (see eos_internal.h). gk_eos_solve() calls this directly (same translation
    unit, no wrapper); gk__eos_solve_ab() wraps it for the mixture and van der Waals modules. */
-static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
-                              gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
-    gk_real u, w, c2, c1, c0, zr[3], zsel, phi, vm, guess, q, rtp, attr;
+static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real p, gk_real t, gk_real a,
+                                     gk_real b, gk_real vc_over_b, gk_root root,
+                                     gk_eos_result *out) {
+    gk_real u, w, c2, c1, c0, zr[3], guess, rtp;
     int n;
-    gk_root branch;
 
     eos_series k;
 
@@ -350,7 +408,6 @@ static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real vc_over_b,
     c0 = -b * (a + w * b * (GK_LIT(1.0) + b));
 
     guess = (a < EOS_GUESS_MAX && b < EOS_GUESS_MAX) ? eos_gas_guess(&k, a, b) : GK_LIT(0.0);
-    q = eos_log_factor(family, a, b);
     rtp = GK_R * t / p;
     n = gk__cubic_roots(c2, c1, c0, b, GK_LIT(1.0) + b, guess, zr);
     /* With A >= 0 and B > 0 a root above B always exists (f(B) < 0 < f(1 + B)); none found means
@@ -358,50 +415,12 @@ static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real vc_over_b,
        cannot be represented, GK_ERR_RANGE, like an overflow. */
     if (n <= 0) return GK_ERR_RANGE;
 
-    if (n == 1) {
-        zsel = zr[0];
-        branch = (zsel < vc_over_b * b) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
-        attr = eos_attraction(family, a, b, q, zsel);
-    } else if (root == GK_ROOT_LIQUID) {
-        zsel = zr[0];
-        branch = GK_ROOT_LIQUID;
-        attr = eos_attraction(family, a, b, q, zsel);
-    } else if (root == GK_ROOT_GAS) {
-        zsel = zr[n - 1];
-        branch = GK_ROOT_GAS;
-        attr = eos_attraction(family, a, b, q, zsel);
-    } else {
-        /* stable: the lower fugacity (same p, T: the lower Gibbs energy); a tie goes to the gas.
-           ln phi_L - ln phi_G = (zL - zG) - ln((zL - B)/(zG - B)) - (attr_L - attr_G): one
-           logarithm for the first difference, and each attraction term is the one phi needs */
-        gk_real zl = zr[0], zg = zr[n - 1];
-        gk_real al = eos_attraction(family, a, b, q, zl);
-        gk_real ag = eos_attraction(family, a, b, q, zg);
-        gk_real dl = (zl - zg) - gk_log((zl - b) / (zg - b)) - (al - ag);
-        if (dl < GK_LIT(0.0)) {
-            zsel = zl; branch = GK_ROOT_LIQUID; attr = al;
-        } else {
-            zsel = zg; branch = GK_ROOT_GAS; attr = ag;
-        }
-    }
-    phi = eos_phi(attr, b, zsel);
-    vm = zsel * rtp;
-    if (!gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
-
-    out->z = zsel;
-    out->molar_volume.m3_per_mol = vm;
-    out->fugacity_coefficient = phi;
-    out->root_count = n;
-    out->z_roots[0] = zr[0];
-    out->z_roots[1] = zr[1];
-    out->z_roots[2] = zr[2];
-    out->branch = branch;
-    return GK_OK;
+    return eos_pick(family, vc_over_b, a, b, rtp, root, zr, out);
 }
 
 gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
                            gk_real p, gk_real t, gk_root root, gk_eos_result *out) {
-    return eos_solve_ab(family, vc_over_b, a, b, p, t, root, out);
+    return eos_solve_ab(family, p, t, a, b, vc_over_b, root, out);
 }
 
 /* gk__eos_prepare (see eos_internal.h): the checks of gk_eos_solve() and A, B. */
@@ -421,7 +440,8 @@ gk_status gk__eos_finish(gk_eos eos, const gk_real ab[2], gk_pressure p, gk_temp
                          gk_root root, gk_eos_result *out) {
     if (eos == GK_EOS_IDEAL) return gk__eos_ideal(p.pa, t.k, out);
     /* writes *out only on success */
-    return eos_solve_ab(eos_family(eos), eos_vc_over_b(eos), ab[0], ab[1], p.pa, t.k, root, out);
+    /* p, t stay in the registers they arrive in and the call is a plain jump (no frame) */
+    return eos_solve_ab(eos_family(eos), p.pa, t.k, ab[0], ab[1], eos_vc_over_b(eos), root, out);
 }
 
 gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
@@ -481,7 +501,13 @@ gk_status gk_eos_density(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temper
     gk_status st;
     if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
     if (!gk_positive(gas->molar_mass.kg_per_mol)) return GK_ERR_DOMAIN;
-    st = gk_eos_solve(eos, gas, p, t, GK_ROOT_STABLE, &r);
+    /* gk_eos_solve() in its two halves (its own checks are the ones above), without its frame
+       under the cubic solver; A, B are staged in r.z_roots (see gk__eos_finish()) */
+    r.z_roots[0] = GK_LIT(0.0);
+    r.z_roots[1] = GK_LIT(0.0);
+    st = gk__eos_prepare(eos, gas, p, t, GK_ROOT_STABLE, r.z_roots);
+    if (st != GK_OK) return st;
+    st = gk__eos_finish(eos, r.z_roots, p, t, GK_ROOT_STABLE, &r);
     if (st != GK_OK) return st;
     rho = gas->molar_mass.kg_per_mol / r.molar_volume.m3_per_mol;
     if (!gk_positive(rho)) return GK_ERR_RANGE;

@@ -57,13 +57,16 @@ gk_status gk__eos_check_state(gk_pressure p, gk_temperature t, gk_root root);
    the public solver's frame on the stack (firmware stack budget):
    - gk__eos_prepare(): every check of gk_eos_solve() but the one of out, in the same order,
      and A, B into ab[0], ab[1] (ab untouched for the ideal gas);
-   - gk__mixture_eos_prepare() (eos_mixture.c): the same for gk_mixture_eos_solve();
+   - gk__mixture_eos_prepare() (eos_mixture.c): the same for gk_mixture_eos_solve(), with the
+     mixture and k_ij of fluid (fluid->gas is not read; four register arguments, so a caller
+     passes none on the stack);
    - gk__eos_finish(): the ideal-gas result or the solve with those A, B; writes *out only on
-     GK_OK. */
+     GK_OK. ab may point into *out (the instrument functions stage A, B in out->z_roots): both
+     are read before *out is written. */
 gk_status gk__eos_prepare(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
                           gk_root root, gk_real ab[2]);
-gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
-                                  gk_pressure p, gk_temperature t, gk_root root, gk_real ab[2]);
+gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_fluid *fluid, gk_pressure p,
+                                  gk_temperature t, gk_root root, gk_real ab[2]);
 gk_status gk__eos_finish(gk_eos eos, const gk_real ab[2], gk_pressure p, gk_temperature t,
                          gk_root root, gk_eos_result *out);
 

@@ -81,9 +81,11 @@ static gk_status mixture_ab(gk_eos eos, const gk_mixture *mix, const gk_real *ki
     return GK_OK;
 }
 
-GK_NOINLINE gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_mixture *mix,
-                                              const gk_real *kij, gk_pressure p,
-                                              gk_temperature t, gk_root root, gk_real ab[2]) {
+GK_NOINLINE gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_fluid *fluid,
+                                              gk_pressure p, gk_temperature t, gk_root root,
+                                              gk_real ab[2]) {
+    const gk_mixture *mix = fluid->mixture;
+    const gk_real *kij = fluid->kij;
     gk_status st;
     size_t i, n;
 
@@ -115,9 +117,13 @@ gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real 
                                gk_pressure p, gk_temperature t, gk_root root,
                                gk_eos_result *out) {
     gk_real ab[2] = {GK_LIT(0.0), GK_LIT(0.0)};
+    gk_fluid fluid;
     gk_status st;
     if (mix == NULL || out == NULL) return GK_ERR_ARGUMENT;
-    st = gk__mixture_eos_prepare(eos, mix, kij, p, t, root, ab);
+    fluid.gas = NULL;
+    fluid.mixture = mix;
+    fluid.kij = kij;
+    st = gk__mixture_eos_prepare(eos, &fluid, p, t, root, ab);
     if (st != GK_OK) return st;
     /* both paths write *out only on GK_OK */
     return gk__eos_finish(eos, ab, p, t, root, out);

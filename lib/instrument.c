@@ -32,14 +32,19 @@ static gk_status fluid_check(gk_eos eos, const gk_fluid *fluid) {
 /* Stable root of the model at p, T. */
 static GK_ALWAYS_INLINE gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t,
                              gk_eos_result *r) {
-    gk_real ab[2] = {GK_LIT(0.0), GK_LIT(0.0)};
+    /* A, B are staged in the result's z_roots[0], z_roots[1]: gk__eos_finish() reads both
+       before it writes *r, and no separate array sits in the caller's frame (stack budget) */
+    gk_real *ab;
     gk_status s;
+    r->z_roots[0] = GK_LIT(0.0);
+    r->z_roots[1] = GK_LIT(0.0);
+    ab = r->z_roots;
     /* as gk_eos_solve() / gk_mixture_eos_solve(), in two halves: the checks and A, B return
        before the cubic is solved, so no public solver frame lies under it (stack budget) */
     if (fluid->gas != NULL) {
         s = gk__eos_prepare(eos, fluid->gas, p, t, GK_ROOT_STABLE, ab);
     } else {
-        s = gk__mixture_eos_prepare(eos, fluid->mixture, fluid->kij, p, t, GK_ROOT_STABLE, ab);
+        s = gk__mixture_eos_prepare(eos, fluid, p, t, GK_ROOT_STABLE, ab);
     }
     if (s == GK_OK) {
         s = gk__eos_finish(eos, ab, p, t, GK_ROOT_STABLE, r);
@@ -412,7 +417,6 @@ gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test
 gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t,
                               gk_real *out) {
     const gk_gas *air = NULL;
-    gk_fluid air_fluid;
     gk_real z = GK_LIT(1.0), z_air = GK_LIT(1.0), m = GK_LIT(0.0), d;
     gk_status s;
     if (out == NULL) {
@@ -437,10 +441,12 @@ gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temp
     if (s != GK_OK) {
         return s;
     }
-    air_fluid.gas = air;
-    air_fluid.mixture = NULL;
-    air_fluid.kij = NULL;
-    s = gas_state(eos, &air_fluid, p, t, &z_air);
+    /* the fluid's own copy (a by-value parameter, not needed any more) now names air: no
+       second gk_fluid in the frame (firmware stack budget) */
+    fluid.gas = air;
+    fluid.mixture = NULL;
+    fluid.kij = NULL;
+    s = gas_state(eos, &fluid, p, t, &z_air);
     if (s != GK_OK) {
         return s;
     }
