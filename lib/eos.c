@@ -464,6 +464,8 @@ gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_
     if (st != GK_OK) return st;
     if (eos == GK_EOS_IDEAL) {
         pa = GK_R * tk / v;
+        /* R T / Vm > 0 for every valid input: 0 is an underflow, not a non-positive pressure */
+        if (!(pa > GK_LIT(0.0))) return GK_ERR_RANGE;
     } else if (eos == GK_EOS_VAN_DER_WAALS) {
         gk_real rtc = GK_R * gas->critical_temperature.k;
         gk_real a = gas->vdw_a > GK_LIT(0.0) ? gas->vdw_a

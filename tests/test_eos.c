@@ -355,6 +355,19 @@ static void contract_pressure_density(void **state) {
     gk_temperature tlow = {100.0};
     assert_status(gk_eos_pressure(GK_EOS_PENG_ROBINSON, &g, vneg, tlow, &ps), GK_ERR_NO_SOLUTION);
     assert_rel(ps.pa, GK_SENTINEL, 0.0);
+    /* ideal gas: R T / Vm is > 0 for every valid input, so a pressure that underflows to 0 is
+       GK_ERR_RANGE (a result that cannot be represented), not GK_ERR_NO_SOLUTION (R T / Vm =
+       8.3e-330 Pa in double, below the smallest subnormal 4.9e-324; 8.3e-50 Pa in float, below
+       1.4e-45: IEEE 754 binary64 / binary32 limits) */
+#if GK_REAL_IS_FLOAT
+    gk_molar_volume vhuge = {(gk_real)1e30};
+    gk_temperature ttiny = {(gk_real)1e-20};
+#else
+    gk_molar_volume vhuge = {1e300};
+    gk_temperature ttiny = {1e-30};
+#endif
+    assert_status(gk_eos_pressure(GK_EOS_IDEAL, &g, vhuge, ttiny, &ps), GK_ERR_RANGE);
+    assert_rel(ps.pa, GK_SENTINEL, 0.0);
     /* round trip: solve at p, T then recompute p from Vm */
     for (int e = GK_EOS_IDEAL; e <= GK_EOS_PENG_ROBINSON; ++e) {
         gk_eos_result r;
