@@ -379,7 +379,7 @@ static GK_NOINLINE gk_status eos_pick(gk__cubic_family family, gk_real vc_over_b
 }
 
 /* gk__eos_solve_ab (see eos_internal.h). gk_eos_solve() calls this directly (same translation
-   unit, no wrapper); gk__eos_solve_ab() wraps it for the mixture and van der Waals modules. */
+   unit, no wrapper); gk__eos_solve_ab() wraps it for the van der Waals module (eos_vdw.c). */
 static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real p, gk_real t, gk_real a,
                                      gk_real b, gk_real vc_over_b, gk_root root,
                                      gk_eos_result *out) {

@@ -37,8 +37,8 @@ gk_status gk__eos_check_gas(gk_eos eos, const gk_gas *gas);
 gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *a_out, gk_real *b_out);
 
 /* Solves the cubic of a family with the given A >= 0, B > 0 at (p, T) and fills a complete
-   result (into *out only on GK_OK). GK_ERR_NO_SOLUTION without a root above B, GK_ERR_RANGE
-   when a result overflows. */
+   result (into *out only on GK_OK). GK_ERR_RANGE when a result overflows or underflows, or when
+   no root is found above B (one always exists; it then lies within rounding of B). */
 gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
                            gk_real p, gk_real t, gk_root root, gk_eos_result *out);
 

@@ -94,6 +94,8 @@ gk_status gk_vdw_volume(gk_vdw c, gk_amount n, gk_pressure p, gk_temperature t, 
         }
         v = n.mol * z / prt;
     } else {
+        /* Vc / b = Zc / Omega_b = (3/8) / (1/8) = 3, exact (van der Waals critical point; the
+           same label as VDW_ZC / VDW_OMEGA_B in eos.c) */
         st = gk__eos_solve_ab(GK__FAMILY_VDW, GK_LIT(3.0), a, b, p.pa, t.k, root, &r);
         if (st != GK_OK) return st;
         v = n.mol * r.molar_volume.m3_per_mol;
