@@ -64,10 +64,6 @@ static inline gk_real eos_vc_over_b(gk_eos eos) {
     }
 }
 
-gk__cubic_family gk__eos_family(gk_eos eos) { return eos_family(eos); }
-
-gk_real gk__eos_vc_over_b(gk_eos eos) { return eos_vc_over_b(eos); }
-
 static int eos_valid(gk_eos eos) {
     switch (eos) {
     case GK_EOS_IDEAL:
@@ -478,7 +474,7 @@ gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_
     } else {
         /* reduced form: p/Pc = Tr/(vr - Ob) - Oa alpha / (vr^2 + u Ob vr + w Ob^2), vr = Vm Pc/(R Tc) */
         gk_real oa, ob, u, w, tr, vr, den;
-        gk__cubic_family fam = gk__eos_family(eos);
+        gk__cubic_family fam = eos_family(eos);
         eos_omegas(eos, &oa, &ob);
         u = fam == GK__FAMILY_PR ? GK_LIT(2.0) : GK_LIT(1.0);
         w = fam == GK__FAMILY_PR ? GK_LIT(-1.0) : GK_LIT(0.0);

@@ -23,9 +23,6 @@ typedef enum gk__cubic_family {
     GK__FAMILY_PR   /* u = 2, w = -1 (Peng-Robinson) */
 } gk__cubic_family;
 
-/* Family of a model (eos must not be GK_EOS_IDEAL). */
-gk__cubic_family gk__eos_family(gk_eos eos);
-
 /* Checks the gas data a model uses: GK_ERR_ARGUMENT for NULL, GK_ERR_DOMAIN for non-physical
    data (Tc, Pc not finite or not > 0, acentric factor not finite, vdw_a / vdw_b negative or not
    finite). The ideal gas uses no gas data (only the molar mass, checked by the density paths). */
@@ -41,10 +38,6 @@ gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_rea
    no root is found above B (one always exists; it then lies within rounding of B). */
 gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
                            gk_real p, gk_real t, gk_root root, gk_eos_result *out);
-
-/* The model's critical Vc / b (Zc / Omega_b), used to label a lone root as liquid (denser than
-   the model's critical density) or gas. */
-gk_real gk__eos_vc_over_b(gk_eos eos);
 
 /* Ideal-gas result at (p, T): Z = 1, phi = 1, one root. GK_ERR_RANGE on overflow. */
 gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out);
