@@ -64,17 +64,6 @@ static inline gk_real eos_vc_over_b(gk_eos eos) {
     }
 }
 
-static int eos_valid(gk_eos eos) {
-    switch (eos) {
-    case GK_EOS_IDEAL:
-    case GK_EOS_VAN_DER_WAALS:
-    case GK_EOS_REDLICH_KWONG:
-    case GK_EOS_SOAVE_REDLICH_KWONG:
-    case GK_EOS_PENG_ROBINSON: return 1;
-    default: return 0;
-    }
-}
-
 static int root_valid(gk_root root) {
     switch (root) {
     case GK_ROOT_STABLE:
@@ -423,7 +412,7 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
 GK_NOINLINE gk_status gk__eos_prepare(gk_eos eos, const gk_gas *gas, gk_pressure p,
                                       gk_temperature t, gk_root root, gk_real ab[2]) {
     gk_status st;
-    if (gas == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
+    if (gas == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
     st = gk__eos_check_state(p, t, root);
     if (st != GK_OK) return st;
     if (eos == GK_EOS_IDEAL) return GK_OK;
@@ -444,7 +433,7 @@ gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperat
                        gk_root root, gk_eos_result *out) {
     gk_real ab[2] = {GK_LIT(0.0), GK_LIT(0.0)};
     gk_status st;
-    if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
+    if (gas == NULL || out == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
     st = gk__eos_prepare(eos, gas, p, t, root, ab);
     if (st != GK_OK) return st;
     return gk__eos_finish(eos, ab, p, t, root, out);
@@ -454,7 +443,7 @@ gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_
                           gk_pressure *out) {
     gk_real v = vm.m3_per_mol, tk = t.k, pa;
     gk_status st;
-    if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
+    if (gas == NULL || out == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
     if (!gk_positive(v) || !gk_positive(tk)) return GK_ERR_DOMAIN;
     st = gk__eos_check_gas(eos, gas);
     if (st != GK_OK) return st;
@@ -497,7 +486,7 @@ gk_status gk_eos_density(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temper
     gk_eos_result r;
     gk_real rho;
     gk_status st;
-    if (gas == NULL || out == NULL || !eos_valid(eos)) return GK_ERR_ARGUMENT;
+    if (gas == NULL || out == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
     if (!gk_positive(gas->molar_mass.kg_per_mol)) return GK_ERR_DOMAIN;
     /* gk_eos_solve() in its two halves (its own checks are the ones above), without its frame
        under the cubic solver; A, B are staged in r.z_roots (see gk__eos_finish()) */

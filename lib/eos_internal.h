@@ -23,6 +23,13 @@ typedef enum gk__cubic_family {
     GK__FAMILY_PR   /* u = 2, w = -1 (Peng-Robinson) */
 } gk__cubic_family;
 
+/* Is eos one of gk_eos? Compared as unsigned: a negative value wraps above the last model, and
+   the test stays meaningful where the enum is one unsigned byte (-fshort-enums, the
+   arm-none-eabi default). The one check of every module (eos, mixture, instrument). */
+static inline int gk__eos_valid(gk_eos eos) {
+    return ((unsigned)eos <= (unsigned)GK_EOS_PENG_ROBINSON) ? 1 : 0;
+}
+
 /* Checks the gas data a model uses: GK_ERR_ARGUMENT for NULL, GK_ERR_DOMAIN for non-physical
    data (Tc, Pc not finite or not > 0, acentric factor not finite, vdw_a / vdw_b negative or not
    finite). The ideal gas uses no gas data (only the molar mass, checked by the density paths). */

@@ -89,15 +89,7 @@ GK_NOINLINE gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_fluid *fluid,
     gk_status st;
     size_t i, n;
 
-    if (mix == NULL) return GK_ERR_ARGUMENT;
-    switch (eos) {
-    case GK_EOS_IDEAL:
-    case GK_EOS_VAN_DER_WAALS:
-    case GK_EOS_REDLICH_KWONG:
-    case GK_EOS_SOAVE_REDLICH_KWONG:
-    case GK_EOS_PENG_ROBINSON: break;
-    default: return GK_ERR_ARGUMENT;
-    }
+    if (mix == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
     st = gk__mixture_check(mix); /* composition (gases module: the one shared check) */
     if (st != GK_OK) return st;
     st = gk__eos_check_state(p, t, root);

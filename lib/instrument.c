@@ -12,15 +12,9 @@
 #include "mixture_internal.h"
 #include "eos_internal.h"
 
-/* Compared as unsigned: a negative value wraps above the last model, and the test stays
-   meaningful where the enum is one unsigned byte (-fshort-enums, the arm-none-eabi default). */
-static int eos_valid(gk_eos eos) {
-    return ((unsigned)eos <= (unsigned)GK_EOS_PENG_ROBINSON) ? 1 : 0;
-}
-
 /* The fluid names exactly one of a gas and a mixture, and the model is one of gk_eos. */
 static gk_status fluid_check(gk_eos eos, const gk_fluid *fluid) {
-    if (!eos_valid(eos)) {
+    if (!gk__eos_valid(eos)) {
         return GK_ERR_ARGUMENT;
     }
     if ((fluid->gas == NULL) == (fluid->mixture == NULL)) {
