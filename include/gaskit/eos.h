@@ -61,7 +61,7 @@ GK_API gk_status gk_vdw_pressure(gk_vdw c, gk_amount n, gk_volume v, gk_temperat
  * @retval GK_OK           @p out written.
  * @retval GK_ERR_ARGUMENT @p out is NULL.
  * @retval GK_ERR_DOMAIN   An input is not finite, n, V, p not > 0, a or b < 0, or V <= n b.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval GK_ERR_RANGE    The result overflows, or underflows to 0.
  */
 GK_API gk_status gk_vdw_temperature(gk_vdw c, gk_amount n, gk_volume v, gk_pressure p, gk_temperature *out);
 
