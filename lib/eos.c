@@ -441,7 +441,7 @@ gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperat
 
 gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_temperature t,
                           gk_pressure *out) {
-    gk_real v = vm.m3_per_mol, tk = t.k, pa;
+    gk_real v = vm.m3_per_mol, tk = t.k, pa, rep, red;
     gk_status st;
     if (gas == NULL || out == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
     if (!gk_positive(v) || !gk_positive(tk)) return GK_ERR_DOMAIN;
@@ -459,7 +459,10 @@ gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_
                     : VDW_OMEGA_B * rtc / gas->critical_pressure.pa;
         if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
         if (!(v > b)) return GK_ERR_DOMAIN;
-        pa = GK_R * tk / (v - b) - (a / v) / v;
+        rep = GK_R * tk / (v - b);
+        /* the repulsive term R T / (V - b) is > 0 for every valid input: 0 is an underflow */
+        if (!(rep > GK_LIT(0.0))) return GK_ERR_RANGE;
+        pa = rep - (a / v) / v;
     } else {
         /* reduced form: p/Pc = Tr/(vr - Ob) - Oa alpha / (vr^2 + u Ob vr + w Ob^2), vr = Vm Pc/(R Tc) */
         gk_real oa, ob, u, w, tr, vr, den;
@@ -472,8 +475,13 @@ gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_
         if (!gk_finite(vr) || !gk_finite(tr)) return GK_ERR_RANGE;
         if (!(vr > ob)) return GK_ERR_DOMAIN;
         den = vr * vr + (u * vr + w * ob) * ob;
-        pa = (tr / (vr - ob) - oa * eos_alpha(eos, tr, gas->acentric_factor) / den) *
-             gas->critical_pressure.pa;
+        rep = tr / (vr - ob);
+        /* as above: the repulsive term is > 0, and so is a reduced pressure that the scaling by
+           Pc rounds to 0 */
+        if (!(rep > GK_LIT(0.0))) return GK_ERR_RANGE;
+        red = rep - oa * eos_alpha(eos, tr, gas->acentric_factor) / den;
+        pa = red * gas->critical_pressure.pa;
+        if (red > GK_LIT(0.0) && !(pa > GK_LIT(0.0))) return GK_ERR_RANGE;
     }
     if (!gk_finite(pa)) return GK_ERR_RANGE;
     if (!(pa > GK_LIT(0.0))) return GK_ERR_NO_SOLUTION;

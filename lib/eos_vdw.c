@@ -30,14 +30,18 @@ gk_status gk_vdw_from_critical(gk_temperature tc, gk_pressure pc, gk_vdw *out) {
 }
 
 gk_status gk_vdw_pressure(gk_vdw c, gk_amount n, gk_volume v, gk_temperature t, gk_pressure *out) {
-    gk_real vm, p;
+    gk_real vm, rep, p;
     if (out == NULL) return GK_ERR_ARGUMENT;
     if (!vdw_valid(c) || !gk_positive(n.mol) || !gk_positive(v.m3) || !gk_positive(t.k))
         return GK_ERR_DOMAIN;
     vm = v.m3 / n.mol;
     if (!gk_finite(vm)) return GK_ERR_RANGE;
     if (!(vm > c.b)) return GK_ERR_DOMAIN;
-    p = GK_R * t.k / (vm - c.b) - (c.a / vm) / vm;
+    rep = GK_R * t.k / (vm - c.b);
+    /* the repulsive term n R T / (V - n b) is > 0 for every valid input: 0 is an underflow,
+       GK_ERR_RANGE, not a non-positive pressure of the model */
+    if (!(rep > GK_LIT(0.0))) return GK_ERR_RANGE;
+    p = rep - (c.a / vm) / vm;
     if (!gk_finite(p)) return GK_ERR_RANGE;
     if (!(p > GK_LIT(0.0))) return GK_ERR_NO_SOLUTION;
     out->pa = p;

@@ -368,6 +368,12 @@ static void contract_pressure_density(void **state) {
 #endif
     assert_status(gk_eos_pressure(GK_EOS_IDEAL, &g, vhuge, ttiny, &ps), GK_ERR_RANGE);
     assert_rel(ps.pa, GK_SENTINEL, 0.0);
+    /* the same underflow in every cubic model: the repulsive term R T / (Vm - b) underflows
+       to 0, which is GK_ERR_RANGE, not GK_ERR_NO_SOLUTION */
+    for (int e = GK_EOS_VAN_DER_WAALS; e <= GK_EOS_PENG_ROBINSON; ++e) {
+        assert_status(gk_eos_pressure((gk_eos)e, &g, vhuge, ttiny, &ps), GK_ERR_RANGE);
+        assert_rel(ps.pa, GK_SENTINEL, 0.0);
+    }
     /* round trip: solve at p, T then recompute p from Vm */
     for (int e = GK_EOS_IDEAL; e <= GK_EOS_PENG_ROBINSON; ++e) {
         gk_eos_result r;

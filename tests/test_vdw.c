@@ -179,6 +179,15 @@ static void error_contract(void **state) {
         assert_status(gk_vdw_pressure(kc, n, v15, th, &po), GK_ERR_NO_SOLUTION);
     }
     assert_rel(po.pa, GK_SENTINEL, 0.0);
+    /* n R T / (V - n b) underflows to 0 (8.3e-330 Pa in double, 8.3e-50 Pa in float: below the
+       smallest subnormal of IEEE 754 binary64 / binary32): GK_ERR_RANGE, not a non-positive
+       pressure of the model */
+    {
+        gk_volume vhuge = {(gk_real)GK_TOL(1e300, 1e30)};
+        gk_temperature ttiny = {(gk_real)GK_TOL(1e-30, 1e-20)};
+        assert_status(gk_vdw_pressure(k, n, vhuge, ttiny, &po), GK_ERR_RANGE);
+    }
+    assert_rel(po.pa, GK_SENTINEL, 0.0);
 
     /* gk_vdw_temperature */
     assert_status(gk_vdw_temperature(k, n, v, p, NULL), GK_ERR_ARGUMENT);
