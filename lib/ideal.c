@@ -1,11 +1,13 @@
 /*
  * ideal.c - the ideal gas law p V = n R T, changes of state and Dalton's law.
  *
- * R = GK_R, CODATA 2018 (exact, N_A k). Every formula is a product of ratios evaluated by
- * gk_scaled_product() (gk_scaled.h): no intermediate over/underflow, a GK_OK result is finite
- * and of normal magnitude, anything else is GK_ERR_RANGE. Error budget: at most 2 count - 1
- * roundings of half an ulp each (count <= 4, so 7), i.e. below 8e-16 relative in double and
- * 4.2e-7 in float, on top of the rounding of the inputs and of R to gk_real.
+ * R = GK_R = 8.314462618 J/(mol K), the 10 digits CODATA 2018 prints (fixed by API.md); the
+ * exact N_A k = 8.31446261815324 J/(mol K) (SI 2019 defining constants) is 1.8e-11 relative
+ * larger. Every formula is a product of ratios evaluated by gk_scaled_product()
+ * (gk_scaled.h): no intermediate over/underflow, a GK_OK result is finite and of normal
+ * magnitude, anything else is GK_ERR_RANGE. Error budget: at most 2 count - 1 roundings of
+ * half an ulp each (count <= 4, so 7), i.e. below 8e-16 relative in double and 4.2e-7 in
+ * float, on top of the rounding of the inputs and of R to gk_real, and the 1.8e-11 of GK_R.
  */
 #include "gk_scaled.h"
 
