@@ -60,14 +60,10 @@ static int gk__is_space(char c) {
     return (c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\v' || c == '\f') ? 1 : 0;
 }
 
-static char gk__lower(char c) {
-    return (c >= 'A' && c <= 'Z') ? (char)(c - 'A' + 'a') : c;
-}
-
 /* Does text[pos .. len) start with the lower-case word w, without regard to ASCII case? */
 static int gk__starts_with_ci(const char *text, size_t pos, size_t len, const char *w) {
     while (*w != '\0') {
-        if (pos >= len || gk__lower(text[pos]) != *w) return 0;
+        if (pos >= len || gk__ascii_lower(text[pos]) != *w) return 0;
         ++pos;
         ++w;
     }
