@@ -325,11 +325,6 @@ static const gk__gas_row gk__gases[] = {
 
 #define GK__GAS_COUNT (sizeof gk__gases / sizeof gk__gases[0])
 
-/* ASCII lower case; no locale, no <ctype.h>. */
-static char gk__ascii_lower(char c) {
-    return (c >= 'A' && c <= 'Z') ? (char)(c - 'A' + 'a') : c;
-}
-
 /* Does text[0 .. n) equal the NUL-terminated b, exactly (fold = 0) or without regard to ASCII
    case (fold = 1)? Reads no further than n in text and than its NUL in b. */
 static int gk__same_n(const char *text, size_t n, const char *b, int fold) {

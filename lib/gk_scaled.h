@@ -108,4 +108,16 @@ static inline gk_status gk_scaled_product(const gk_real *num, const gk_real *den
     return GK_OK;
 }
 
+/* The evaluation of ideal.c and kinetic.c: GK_ERR_ARGUMENT for a NULL out, GK_ERR_DOMAIN unless
+ * every factor is finite and > 0, else out = prod num[i] / den[i] by gk_scaled_product(). */
+static inline gk_status gk_scaled_eval(const gk_real *num, const gk_real *den, int count,
+                                       gk_real *out) {
+    int i;
+    if (out == NULL) return GK_ERR_ARGUMENT;
+    for (i = 0; i < count; ++i) {
+        if (!gk_positive(num[i]) || !gk_positive(den[i])) return GK_ERR_DOMAIN;
+    }
+    return gk_scaled_product(num, den, count, out);
+}
+
 #endif /* GASKIT_SCALED_H */

@@ -14,16 +14,6 @@
  */
 #include "gk_scaled.h"
 
-/* Checks out and the inputs (all finite, > 0), then out = prod num[i] / den[i]. */
-static gk_status gk_kinetic_eval(const gk_real *num, const gk_real *den, int count, gk_real *out) {
-    int i;
-    if (out == NULL) return GK_ERR_ARGUMENT;
-    for (i = 0; i < count; ++i) {
-        if (!gk_positive(num[i]) || !gk_positive(den[i])) return GK_ERR_DOMAIN;
-    }
-    return gk_scaled_product(num, den, count, out);
-}
-
 /* sqrt(c R T / M), for the three characteristic speeds and the speed of sound. The inputs
  * are checked before any square root is taken (sqrt of a negative is NaN, not an error). */
 static gk_status gk_speed_factor(gk_real c, gk_temperature t, gk_molar_mass m, gk_real *out) {
@@ -32,7 +22,7 @@ static gk_status gk_speed_factor(gk_real c, gk_temperature t, gk_molar_mass m, g
     if (!gk_positive(t.k) || !gk_positive(m.kg_per_mol)) return GK_ERR_DOMAIN;
     num[0] = gk_sqrt(t.k);        den[0] = gk_sqrt(m.kg_per_mol);
     num[1] = gk_sqrt(c * GK_R);   den[1] = GK_LIT(1.0);
-    return gk_kinetic_eval(num, den, 2, out);
+    return gk_scaled_eval(num, den, 2, out);
 }
 
 gk_status gk_speed_rms(gk_temperature t, gk_molar_mass m, gk_speed *out) {
@@ -66,7 +56,7 @@ gk_status gk_effusion_ratio(gk_molar_mass a, gk_molar_mass b, gk_real *rate_a_ov
     if (!gk_positive(a.kg_per_mol) || !gk_positive(b.kg_per_mol)) return GK_ERR_DOMAIN;
     num[0] = gk_sqrt(b.kg_per_mol);
     den[0] = gk_sqrt(a.kg_per_mol);
-    return gk_kinetic_eval(num, den, 1, rate_a_over_b);
+    return gk_scaled_eval(num, den, 1, rate_a_over_b);
 }
 
 gk_status gk_effusion_molar_mass(gk_molar_mass reference,
@@ -76,7 +66,7 @@ gk_status gk_effusion_molar_mass(gk_molar_mass reference,
     const gk_real r = time_ratio_unknown_over_reference;
     const gk_real num[3] = { reference.kg_per_mol, r, r };
     const gk_real den[3] = { GK_LIT(1.0), GK_LIT(1.0), GK_LIT(1.0) };
-    return gk_kinetic_eval(num, den, 3, out != NULL ? &out->kg_per_mol : NULL);
+    return gk_scaled_eval(num, den, 3, out != NULL ? &out->kg_per_mol : NULL);
 }
 
 gk_status gk_mean_free_path(gk_pressure p, gk_temperature t, gk_real collision_diameter_m,
@@ -85,7 +75,7 @@ gk_status gk_mean_free_path(gk_pressure p, gk_temperature t, gk_real collision_d
     const gk_real d = collision_diameter_m;
     const gk_real num[4] = { GK_BOLTZMANN, t.k, GK_LIT(1.0), GK_LIT(1.0) };
     const gk_real den[4] = { gk_sqrt(GK_LIT(2.0)) * GK_PI, p.pa, d, d };
-    return gk_kinetic_eval(num, den, 4, out_m);
+    return gk_scaled_eval(num, den, 4, out_m);
 }
 
 gk_status gk_wall_flux(gk_pressure p, gk_temperature t, gk_molar_mass m,
@@ -97,5 +87,5 @@ gk_status gk_wall_flux(gk_pressure p, gk_temperature t, gk_molar_mass m,
     num[0] = p.pa;                                 den[0] = gk_sqrt(GK_LIT(2.0) * GK_PI * GK_R);
     num[1] = GK_LIT(1.0);                          den[1] = gk_sqrt(m.kg_per_mol);
     num[2] = GK_LIT(1.0);                          den[2] = gk_sqrt(t.k);
-    return gk_kinetic_eval(num, den, 3, out_mol_per_m2_s);
+    return gk_scaled_eval(num, den, 3, out_mol_per_m2_s);
 }

@@ -8,8 +8,6 @@
 /* Longest composition text accepted, in characters before the NUL (documented in mixture.h).
    Sixteen components with long names and numbers fit comfortably. */
 #define GK__MIXTURE_TEXT_MAX 1024
-/* Longest gas name or formula looked up (gk__gas_find_n()); a longer one names no gas. */
-#define GK__MIXTURE_NAME_MAX 63
 
 /* Sum with Neumaier's compensation (A. Neumaier, ZAMM 54 (1974) 39; common practice): the
    error stays about one rounding of the result instead of growing with the count, so 16
@@ -60,14 +58,10 @@ static int gk__is_space(char c) {
     return (c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\v' || c == '\f') ? 1 : 0;
 }
 
-static char gk__lower(char c) {
-    return (c >= 'A' && c <= 'Z') ? (char)(c - 'A' + 'a') : c;
-}
-
 /* Does text[pos .. len) start with the lower-case word w, without regard to ASCII case? */
 static int gk__starts_with_ci(const char *text, size_t pos, size_t len, const char *w) {
     while (*w != '\0') {
-        if (pos >= len || gk__lower(text[pos]) != *w) return 0;
+        if (pos >= len || gk__ascii_lower(text[pos]) != *w) return 0;
         ++pos;
         ++w;
     }
@@ -147,7 +141,6 @@ static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *
     if (v < len && text[v] != ',') return GK_ERR_PARSE;  /* "N2=0.5 O2=0.5", "N2=5%%" */
 
     /* gas */
-    if (name_end - name_begin > GK__MIXTURE_NAME_MAX) return GK_ERR_NOT_FOUND;
     st = gk__gas_find_n(text + name_begin, name_end - name_begin, &gas);
     if (st == GK_ERR_NOT_FOUND) {
         /* "N2=0,5, O2=0,5": a comma inside a name that names no gas was most likely

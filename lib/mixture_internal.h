@@ -27,6 +27,11 @@
  */
 gk_status gk__mixture_check(const gk_mixture *mix);
 
+/* ASCII lower case; no locale, no <ctype.h> (gas names and composition keywords). */
+static inline char gk__ascii_lower(char c) {
+    return (c >= 'A' && c <= 'Z') ? (char)(c - 'A' + 'a') : c;
+}
+
 /* gk_gas_find() on the n characters text[0 .. n) (no NUL needed; gases.c): the composition
    parser looks names up in place, without a copy on the stack. GK_OK (and *out) or
    GK_ERR_NOT_FOUND; the caller has checked text and out. */

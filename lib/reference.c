@@ -14,7 +14,7 @@
  * 0 degC = 273.15 K exactly (SI definition of the Celsius scale); 1 atm = 101325 Pa exactly
  * (CGPM 1954).
  */
-#include "gk_internal.h"
+#include "gk_scaled.h"
 
 gk_status gk_reference_get(gk_reference_id id, gk_reference *out) {
     gk_reference r;
@@ -68,9 +68,10 @@ gk_status gk_reference_factor(gk_pressure p, gk_temperature t, gk_real z,
     }
     /* factor = (p / p_ref) (T_ref / T) (z_ref / z): V_ref = n z_ref R T_ref / p_ref and
        V = n z R T / p for the same amount n. Three ratios, each finite for finite positive
-       inputs unless it overflows or underflows; both give GK_ERR_RANGE. */
+       inputs unless it overflows or underflows; both give GK_ERR_RANGE, and so does a factor
+       below the smallest normal number (digits lost; the rule of gk_scaled.h). */
     f = (p.pa / ref.p.pa) * (ref.t.k / t.k) * (z_ref / z);
-    if (!gk_positive(f)) {
+    if (!(f >= GK_REAL_MIN_NORMAL && f <= GK_REAL_MAX)) {   /* also NaN, 0 and inf */
         return GK_ERR_RANGE;
     }
     *factor = f;

@@ -234,8 +234,8 @@ static gk_status gk_scale(gk_real x, gk_real num, gk_real den, gk_real *out) {
     fn = gk_frexp(num, &en);
     fd = gk_frexp(den, &ed);
     r = gk_ldexp(fx * (fn / fd), ex + en - ed);
-    if (gk_check_normal(r) != GK_OK) return GK_ERR_RANGE;
-    if (gk_fabs(x) > GK_LIT(0.0) && !(gk_fabs(r) > GK_LIT(0.0))) return GK_ERR_RANGE;
+    /* here x != 0 (0 takes the fast path): an r of 0 has underflowed as a subnormal has */
+    if (!(gk_fabs(r) >= GK_REAL_MIN_NORMAL && gk_fabs(r) <= GK_REAL_MAX)) return GK_ERR_RANGE;
     *out = r;
     return GK_OK;
 }

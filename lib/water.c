@@ -127,7 +127,9 @@ static gk_real subl_p(gk_real t) {
 static gk_real subl_t(gk_real p_pa) {
     const gk_real target = gk_log(p_pa / P_TRIPLE);
     gk_real lo = T_LOW, hi = T_TRIPLE;
-    /* Start from the Clausius-Clapeyron-like straight line in 1/T between the bracket ends. */
+    /* Fixed start inside the bracket (a design choice, not a published value); a Newton step
+       that leaves the bracket is replaced by bisection below, so the start only sets the
+       iteration count. */
     gk_real t = GK_LIT(250.0);
     int i;
     for (i = 0; i < 60; ++i) {

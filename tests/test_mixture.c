@@ -235,7 +235,7 @@ static void unknown_gases(void **state) {
     assert_parse_fails("1,1,1,2-tetrafluoroethan=1", GK_ERR_PARSE);
     assert_parse_fails("N2=0.5, O2 0.5, Ar=0.5", GK_ERR_PARSE); /* "0.5 O2" is not a value */
     assert_parse_fails("N2=0.5, O 2=0.5", GK_ERR_NOT_FOUND);
-    /* names longer than any gas name: 63 characters reach gk_gas_find, 64 and more do not */
+    /* names longer than any gas name */
     memset(long_name, 'x', sizeof long_name);
     memcpy(long_name + 63, "=1", 3);
     assert_parse_fails(long_name, GK_ERR_NOT_FOUND);
@@ -245,6 +245,11 @@ static void unknown_gases(void **state) {
     memset(long_name, 'x', sizeof long_name);
     memcpy(long_name + 150, "=1", 3);
     assert_parse_fails(long_name, GK_ERR_NOT_FOUND);
+    /* a long name with a comma inside is malformed too, as mixture.h says of any such name */
+    memset(long_name, 'x', sizeof long_name);
+    memcpy(long_name, "N2=0.5,", 7);
+    memcpy(long_name + 100, ", O2=0.5", 9);
+    assert_parse_fails(long_name, GK_ERR_PARSE);
 }
 
 static void bad_compositions(void **state) {

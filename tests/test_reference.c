@@ -118,6 +118,11 @@ static void error_contract(void **state) {
     assert_status(gk_reference_factor(PA(huge), t, RV(1.0), (gk_reference){PA(1e-3), ok.t}, RV(1.0), &f),
                   GK_ERR_RANGE);
     assert_untouched(f);
+    /* a factor below the smallest normal number has lost digits: underflow, f untouched */
+    const gk_real tiny = RV(GK_REAL_IS_FLOAT ? 1e-30 : 1e-300);
+    assert_status(gk_reference_factor(PA(tiny), t, RV(1.0), (gk_reference){PA(1e10), ok.t}, RV(1.0), &f),
+                  GK_ERR_RANGE);
+    assert_untouched(f);
 }
 
 int main(void) {

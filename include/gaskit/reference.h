@@ -47,7 +47,8 @@ GK_API gk_status gk_reference_get(gk_reference_id id, gk_reference *out);
  * @retval GK_OK           @p factor written.
  * @retval GK_ERR_ARGUMENT @p factor is NULL.
  * @retval GK_ERR_DOMAIN   An input is not finite or not > 0.
- * @retval GK_ERR_RANGE    The factor overflows.
+ * @retval GK_ERR_RANGE    The factor (or one of its three ratios) overflows, or the factor
+ *                         falls below the smallest normal number (underflow).
  */
 GK_API gk_status gk_reference_factor(gk_pressure p, gk_temperature t, gk_real z,
                                      gk_reference ref, gk_real z_ref, gk_real *factor);

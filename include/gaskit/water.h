@@ -45,7 +45,11 @@ GK_API gk_status gk_water_saturation_temperature(gk_pressure p, gk_temperature *
  * @brief Partial pressure of the dry gas in a wet gas: p_dry = p - RH p_ws(T).
  *
  * RH = 1 is gas collected over water (saturated). The enhancement factor of moist gas
- * (about 1.004 near ambient) is neglected.
+ * (about 1.004 near ambient) is neglected. Below the triple point (273.16 K) p_ws is the
+ * pressure over ice (gk_water_vapour_pressure()), so RH is taken with respect to ice there;
+ * hygrometers and weather data commonly give RH with respect to supercooled liquid water
+ * below 0 degC (WMO convention, common practice), which has no curve in gaskit: convert such
+ * a reading to a water partial pressure p_w outside gaskit and take p - p_w.
  * @param total Total (wet-gas) absolute pressure, > 0.
  * @param t Temperature of the gas, > 0 K.
  * @param relative_humidity RH as a fraction in [0, 1].
