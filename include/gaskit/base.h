@@ -89,8 +89,9 @@ typedef enum gk_status {
 GK_API const char *gk_status_string(gk_status status);
 
 /* ------------------------------------------------------------------ constants */
-/* CODATA 2018 / SI 2019: exact values. */
-/** Molar gas constant, J/(mol K) (CODATA 2018, exact: N_A times k). */
+/* CODATA 2018 / SI 2019. */
+/** Molar gas constant, J/(mol K): the value CODATA 2018 prints, 8.314462618. N_A times k is
+ *  exact since SI 2019 (8.31446261815324...); the printed figure is 1.8e-11 relative below it. */
 #define GK_R GK_REAL_C(8.314462618)
 /** Boltzmann constant, J/K (SI 2019 defining constant, exact). */
 #define GK_BOLTZMANN GK_REAL_C(1.380649e-23)
