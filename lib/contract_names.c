@@ -12,11 +12,11 @@
 
 #if defined(__GNUC__) && defined(__ELF__)
 GK_API gk_status gk__mass_flow_symbol(gk_eos eos, gk_fluid fluid, gk_volume_flow actual,
-                                      gk_pressure p, gk_temperature t, gk_mass_flow *out)
-    __asm__("gk_mass_flow");
+                                      gk_pressure p, gk_temperature t,
+                                      gk_mass_flow *out) __asm__("gk_mass_flow");
 
-gk_status gk__mass_flow_symbol(gk_eos eos, gk_fluid fluid, gk_volume_flow actual,
-                               gk_pressure p, gk_temperature t, gk_mass_flow *out) {
+gk_status gk__mass_flow_symbol(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
+                               gk_temperature t, gk_mass_flow *out) {
     return gk_flow_to_mass(eos, fluid, actual, p, t, out);
 }
 #else

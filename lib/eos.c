@@ -36,46 +36,54 @@
 /* Critical compressibility of each model with its exact constants: 3/8 (van der Waals), 1/3
    (Redlich-Kwong, Soave), 0.30740 (Peng-Robinson 1976); Vc/b = Zc/Omega_b labels a lone root. */
 #define VDW_ZC GK_LIT(0.375)
-#define RK_ZC  GK_LIT(0.333333333333333333)
-#define PR_ZC  GK_LIT(0.30740)
+#define RK_ZC GK_LIT(0.333333333333333333)
+#define PR_ZC GK_LIT(0.30740)
 
 /* sqrt(2) to 20 digits (common practice). */
 #define GK_SQRT2 GK_LIT(1.4142135623730950488)
 
 static inline gk__cubic_family eos_family(gk_eos eos) {
     switch (eos) {
-    case GK_EOS_REDLICH_KWONG:
-    case GK_EOS_SOAVE_REDLICH_KWONG: return GK__FAMILY_RK;
-    case GK_EOS_PENG_ROBINSON:       return GK__FAMILY_PR;
-    case GK_EOS_IDEAL:
-    case GK_EOS_VAN_DER_WAALS:
-    default:                         return GK__FAMILY_VDW;
+        case GK_EOS_REDLICH_KWONG:
+        case GK_EOS_SOAVE_REDLICH_KWONG:
+            return GK__FAMILY_RK;
+        case GK_EOS_PENG_ROBINSON:
+            return GK__FAMILY_PR;
+        case GK_EOS_IDEAL:
+        case GK_EOS_VAN_DER_WAALS:
+        default:
+            return GK__FAMILY_VDW;
     }
 }
 
 static inline gk_real eos_vc_over_b(gk_eos eos) {
     switch (eos) {
-    case GK_EOS_REDLICH_KWONG:
-    case GK_EOS_SOAVE_REDLICH_KWONG: return RK_ZC / RK_OMEGA_B;
-    case GK_EOS_PENG_ROBINSON:       return PR_ZC / PR_OMEGA_B;
-    case GK_EOS_IDEAL:
-    case GK_EOS_VAN_DER_WAALS:
-    default:                         return VDW_ZC / VDW_OMEGA_B;
+        case GK_EOS_REDLICH_KWONG:
+        case GK_EOS_SOAVE_REDLICH_KWONG:
+            return RK_ZC / RK_OMEGA_B;
+        case GK_EOS_PENG_ROBINSON:
+            return PR_ZC / PR_OMEGA_B;
+        case GK_EOS_IDEAL:
+        case GK_EOS_VAN_DER_WAALS:
+        default:
+            return VDW_ZC / VDW_OMEGA_B;
     }
 }
 
 static int root_valid(gk_root root) {
     switch (root) {
-    case GK_ROOT_STABLE:
-    case GK_ROOT_GAS:
-    case GK_ROOT_LIQUID: return 1;
-    default: return 0;
+        case GK_ROOT_STABLE:
+        case GK_ROOT_GAS:
+        case GK_ROOT_LIQUID:
+            return 1;
+        default:
+            return 0;
     }
 }
 
 gk_status gk__eos_check_state(gk_pressure p, gk_temperature t, gk_root root) {
-    if (!root_valid(root)) return GK_ERR_ARGUMENT;
-    if (!gk_positive(p.pa) || !gk_positive(t.k)) return GK_ERR_DOMAIN;
+    if (!root_valid(root)) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(p.pa) || !gk_positive(t.k)) { return GK_ERR_DOMAIN; }
     return GK_OK;
 }
 
@@ -84,25 +92,27 @@ static int critical_ok(const gk_gas *gas) {
 }
 
 static inline gk_status eos_check_gas(gk_eos eos, const gk_gas *gas) {
-    if (gas == NULL) return GK_ERR_ARGUMENT;
+    if (gas == NULL) { return GK_ERR_ARGUMENT; }
     switch (eos) {
-    case GK_EOS_IDEAL:
-        return GK_OK;
-    case GK_EOS_VAN_DER_WAALS:
-        if (!gk_finite(gas->vdw_a) || !gk_finite(gas->vdw_b) ||
-            gas->vdw_a < GK_LIT(0.0) || gas->vdw_b < GK_LIT(0.0))
-            return GK_ERR_DOMAIN;
-        /* Tc, Pc are needed only for a constant the gas does not list */
-        if ((!(gas->vdw_a > GK_LIT(0.0)) || !(gas->vdw_b > GK_LIT(0.0))) && !critical_ok(gas))
-            return GK_ERR_DOMAIN;
-        return GK_OK;
-    case GK_EOS_REDLICH_KWONG:
-    case GK_EOS_SOAVE_REDLICH_KWONG:
-    case GK_EOS_PENG_ROBINSON:
-        if (!critical_ok(gas) || !gk_finite(gas->acentric_factor)) return GK_ERR_DOMAIN;
-        return GK_OK;
-    default:
-        return GK_ERR_ARGUMENT;
+        case GK_EOS_IDEAL:
+            return GK_OK;
+        case GK_EOS_VAN_DER_WAALS:
+            if (!gk_finite(gas->vdw_a) || !gk_finite(gas->vdw_b) || gas->vdw_a < GK_LIT(0.0) ||
+                gas->vdw_b < GK_LIT(0.0)) {
+                return GK_ERR_DOMAIN;
+            }
+            /* Tc, Pc are needed only for a constant the gas does not list */
+            if ((!(gas->vdw_a > GK_LIT(0.0)) || !(gas->vdw_b > GK_LIT(0.0))) && !critical_ok(gas)) {
+                return GK_ERR_DOMAIN;
+            }
+            return GK_OK;
+        case GK_EOS_REDLICH_KWONG:
+        case GK_EOS_SOAVE_REDLICH_KWONG:
+        case GK_EOS_PENG_ROBINSON:
+            if (!critical_ok(gas) || !gk_finite(gas->acentric_factor)) { return GK_ERR_DOMAIN; }
+            return GK_OK;
+        default:
+            return GK_ERR_ARGUMENT;
     }
 }
 
@@ -110,18 +120,18 @@ static inline gk_status eos_check_gas(gk_eos eos, const gk_gas *gas) {
 static GK_ALWAYS_INLINE gk_real eos_alpha(gk_eos eos, gk_real tr, gk_real omega) {
     gk_real m, s;
     switch (eos) {
-    case GK_EOS_REDLICH_KWONG:
-        return GK_LIT(1.0) / gk_sqrt(tr); /* a / sqrt(T), normalised at Tc */
-    case GK_EOS_SOAVE_REDLICH_KWONG:
-        m = SRK_M0 + (SRK_M1 - SRK_M2 * omega) * omega;
-        break;
-    case GK_EOS_PENG_ROBINSON:
-        m = PR_K0 + (PR_K1 - PR_K2 * omega) * omega;
-        break;
-    case GK_EOS_IDEAL:
-    case GK_EOS_VAN_DER_WAALS:
-    default:
-        return GK_LIT(1.0);
+        case GK_EOS_REDLICH_KWONG:
+            return GK_LIT(1.0) / gk_sqrt(tr); /* a / sqrt(T), normalised at Tc */
+        case GK_EOS_SOAVE_REDLICH_KWONG:
+            m = SRK_M0 + (SRK_M1 - SRK_M2 * omega) * omega;
+            break;
+        case GK_EOS_PENG_ROBINSON:
+            m = PR_K0 + (PR_K1 - PR_K2 * omega) * omega;
+            break;
+        case GK_EOS_IDEAL:
+        case GK_EOS_VAN_DER_WAALS:
+        default:
+            return GK_LIT(1.0);
     }
     s = GK_LIT(1.0) + m * (GK_LIT(1.0) - gk_sqrt(tr));
     return s * s;
@@ -129,17 +139,26 @@ static GK_ALWAYS_INLINE gk_real eos_alpha(gk_eos eos, gk_real tr, gk_real omega)
 
 static inline void eos_omegas(gk_eos eos, gk_real *oa, gk_real *ob) {
     switch (eos) {
-    case GK_EOS_REDLICH_KWONG:
-    case GK_EOS_SOAVE_REDLICH_KWONG: *oa = RK_OMEGA_A; *ob = RK_OMEGA_B; break;
-    case GK_EOS_PENG_ROBINSON:       *oa = PR_OMEGA_A; *ob = PR_OMEGA_B; break;
-    case GK_EOS_IDEAL:
-    case GK_EOS_VAN_DER_WAALS:
-    default:                         *oa = VDW_OMEGA_A; *ob = VDW_OMEGA_B; break;
+        case GK_EOS_REDLICH_KWONG:
+        case GK_EOS_SOAVE_REDLICH_KWONG:
+            *oa = RK_OMEGA_A;
+            *ob = RK_OMEGA_B;
+            break;
+        case GK_EOS_PENG_ROBINSON:
+            *oa = PR_OMEGA_A;
+            *ob = PR_OMEGA_B;
+            break;
+        case GK_EOS_IDEAL:
+        case GK_EOS_VAN_DER_WAALS:
+        default:
+            *oa = VDW_OMEGA_A;
+            *ob = VDW_OMEGA_B;
+            break;
     }
 }
 
 static inline gk_status eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *a_out,
-                        gk_real *b_out) {
+                               gk_real *b_out) {
     gk_real a, b, oa, ob;
     if (eos == GK_EOS_VAN_DER_WAALS && (gas->vdw_a > GK_LIT(0.0) || gas->vdw_b > GK_LIT(0.0))) {
         /* handbook constant(s) in SI; the other (if 0) from Tc, Pc */
@@ -165,14 +184,14 @@ static inline gk_status eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real
         gk_real itr = gas->critical_temperature.k / t;
         gk_real pr = p / gas->critical_pressure.pa;
         gk_real pitr = pr * itr;
-        gk_real alpha = (eos == GK_EOS_REDLICH_KWONG) ? gk_sqrt(itr)
-                                                      : eos_alpha(eos, tr, gas->acentric_factor);
+        gk_real alpha =
+            (eos == GK_EOS_REDLICH_KWONG) ? gk_sqrt(itr) : eos_alpha(eos, tr, gas->acentric_factor);
         eos_omegas(eos, &oa, &ob);
         a = alpha * (oa * pitr * itr);
         b = ob * pitr;
     }
-    if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
-    if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE; /* underflow: covolume lost */
+    if (!gk_finite(a) || !gk_finite(b)) { return GK_ERR_RANGE; }
+    if (!(b > GK_LIT(0.0))) { return GK_ERR_RANGE; /* underflow: covolume lost */ }
     *a_out = a;
     *b_out = b;
     return GK_OK;
@@ -220,34 +239,39 @@ static gk_real eos_log_factor(gk__cubic_family family, gk_real a, gk_real b);
    needs no division by B, and no q is kept live across the cubic solve (firmware stack). */
 static inline gk_real eos_attraction(gk__cubic_family family, gk_real a, gk_real b, gk_real z) {
     switch (family) {
-    case GK__FAMILY_RK: {
-        gk_real inv = GK_LIT(1.0) / (GK_LIT(2.0) * z + b); /* one division for t and A/(2Z + B) */
-        gk_real t = b * inv, y = t * t;
-        return (y < ATANH_SERIES_MAX) ? GK_LIT(2.0) * (a * inv) * eos_atanh_ratio(y)
-                                      : eos_log_factor(family, a, b) * gk_log(GK_LIT(1.0) + b / z);
-    }
-    case GK__FAMILY_PR: {
-        gk_real inv = GK_LIT(1.0) / (z + b); /* one division for t and A/(Z + B) */
-        gk_real t = GK_SQRT2 * b * inv, y = t * t;
-        return (y < ATANH_SERIES_MAX)
-                   ? (a * inv) * eos_atanh_ratio(y)
-                   : eos_log_factor(family, a, b) *
-                         gk_log(GK_LIT(1.0) + GK_LIT(2.0) * GK_SQRT2 * b /
-                                                  (z + (GK_LIT(1.0) - GK_SQRT2) * b));
-    }
-    case GK__FAMILY_VDW:
-    default:
-        return a / z;
+        case GK__FAMILY_RK: {
+            gk_real inv =
+                GK_LIT(1.0) / (GK_LIT(2.0) * z + b); /* one division for t and A/(2Z + B) */
+            gk_real t = b * inv, y = t * t;
+            return (y < ATANH_SERIES_MAX)
+                       ? GK_LIT(2.0) * (a * inv) * eos_atanh_ratio(y)
+                       : eos_log_factor(family, a, b) * gk_log(GK_LIT(1.0) + b / z);
+        }
+        case GK__FAMILY_PR: {
+            gk_real inv = GK_LIT(1.0) / (z + b); /* one division for t and A/(Z + B) */
+            gk_real t = GK_SQRT2 * b * inv, y = t * t;
+            return (y < ATANH_SERIES_MAX)
+                       ? (a * inv) * eos_atanh_ratio(y)
+                       : eos_log_factor(family, a, b) *
+                             gk_log(GK_LIT(1.0) + GK_LIT(2.0) * GK_SQRT2 * b /
+                                                      (z + (GK_LIT(1.0) - GK_SQRT2) * b));
+        }
+        case GK__FAMILY_VDW:
+        default:
+            return a / z;
     }
 }
 
 /* A/B (RK, SRK) or A/(2 sqrt2 B) (PR): the factor of the closed form of the attraction term. */
 static gk_real eos_log_factor(gk__cubic_family family, gk_real a, gk_real b) {
     switch (family) {
-    case GK__FAMILY_RK: return a / b;
-    case GK__FAMILY_PR: return a / (GK_LIT(2.0) * GK_SQRT2 * b);
-    case GK__FAMILY_VDW:
-    default:            return GK_LIT(0.0);
+        case GK__FAMILY_RK:
+            return a / b;
+        case GK__FAMILY_PR:
+            return a / (GK_LIT(2.0) * GK_SQRT2 * b);
+        case GK__FAMILY_VDW:
+        default:
+            return GK_LIT(0.0);
     }
 }
 
@@ -259,13 +283,13 @@ static gk_real eos_phi(gk_real attraction, gk_real b, gk_real z) {
     gk_real inv = GK_LIT(1.0) / (z - b);
     gk_real e = (z - GK_LIT(1.0)) - attraction;
     gk_real phi = gk_exp(e) * inv;
-    if (!(phi > GK_LIT(0.0)) || !gk_finite(phi)) phi = gk_exp(e - gk_log(z - b));
+    if (!(phi > GK_LIT(0.0)) || !gk_finite(phi)) { phi = gk_exp(e - gk_log(z - b)); }
     return phi;
 }
 
 gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
     gk_real vm = GK_R * t / p;
-    if (!gk_positive(vm)) return GK_ERR_RANGE;
+    if (!gk_positive(vm)) { return GK_ERR_RANGE; }
     out->z = GK_LIT(1.0);
     out->molar_volume.m3_per_mol = vm;
     out->fugacity_coefficient = GK_LIT(1.0);
@@ -293,7 +317,9 @@ gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out) {
  */
 #define EOS_GUESS_MAX GK_LIT(1.0)
 
-typedef struct eos_series { gk_real k2, k3, k4, k5; } eos_series;
+typedef struct eos_series {
+    gk_real k2, k3, k4, k5;
+} eos_series;
 
 /* The series as a polynomial in A whose coefficients depend on B only,
      Z = (1 + B) + A C1 + A^2 (C2 + A C3 - 5 A^2),
@@ -343,14 +369,18 @@ static GK_NOINLINE gk_status eos_pick(gk__cubic_family family, gk_real vc_over_b
         gk_real ag = eos_attraction(family, a, b, zg);
         gk_real dl = (zl - zg) - gk_log((zl - b) / (zg - b)) - (al - ag);
         if (dl < GK_LIT(0.0)) {
-            zsel = zl; branch = GK_ROOT_LIQUID; attr = al;
+            zsel = zl;
+            branch = GK_ROOT_LIQUID;
+            attr = al;
         } else {
-            zsel = zg; branch = GK_ROOT_GAS; attr = ag;
+            zsel = zg;
+            branch = GK_ROOT_GAS;
+            attr = ag;
         }
     }
     phi = eos_phi(attr, b, zsel);
     vm = zsel * rtp;
-    if (!gk_positive(phi) || !gk_positive(vm)) return GK_ERR_RANGE;
+    if (!gk_positive(phi) || !gk_positive(vm)) { return GK_ERR_RANGE; }
 
     out->z = zsel;
     out->molar_volume.m3_per_mol = vm;
@@ -374,19 +404,31 @@ static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real p, gk_real
     eos_series k;
 
     switch (family) {
-    case GK__FAMILY_RK:
-        u = GK_LIT(1.0); w = GK_LIT(0.0);
-        k.k2 = GK_LIT(3.0); k.k3 = GK_LIT(7.0); k.k4 = GK_LIT(46.0); k.k5 = GK_LIT(15.0);
-        break;
-    case GK__FAMILY_PR:
-        u = GK_LIT(2.0); w = GK_LIT(-1.0);
-        k.k2 = GK_LIT(4.0); k.k3 = GK_LIT(14.0); k.k4 = GK_LIT(88.0); k.k5 = GK_LIT(48.0);
-        break;
-    case GK__FAMILY_VDW:
-    default:
-        u = GK_LIT(0.0); w = GK_LIT(0.0);
-        k.k2 = GK_LIT(2.0); k.k3 = GK_LIT(3.0); k.k4 = GK_LIT(20.0); k.k5 = GK_LIT(4.0);
-        break;
+        case GK__FAMILY_RK:
+            u = GK_LIT(1.0);
+            w = GK_LIT(0.0);
+            k.k2 = GK_LIT(3.0);
+            k.k3 = GK_LIT(7.0);
+            k.k4 = GK_LIT(46.0);
+            k.k5 = GK_LIT(15.0);
+            break;
+        case GK__FAMILY_PR:
+            u = GK_LIT(2.0);
+            w = GK_LIT(-1.0);
+            k.k2 = GK_LIT(4.0);
+            k.k3 = GK_LIT(14.0);
+            k.k4 = GK_LIT(88.0);
+            k.k5 = GK_LIT(48.0);
+            break;
+        case GK__FAMILY_VDW:
+        default:
+            u = GK_LIT(0.0);
+            w = GK_LIT(0.0);
+            k.k2 = GK_LIT(2.0);
+            k.k3 = GK_LIT(3.0);
+            k.k4 = GK_LIT(20.0);
+            k.k5 = GK_LIT(4.0);
+            break;
     }
     c2 = -(GK_LIT(1.0) + b - u * b);
     c1 = a - b * (u + (u - w) * b);
@@ -398,7 +440,7 @@ static inline gk_status eos_solve_ab(gk__cubic_family family, gk_real p, gk_real
     /* With A >= 0 and B > 0 a root above B always exists (f(B) < 0 < f(1 + B)); none found means
        it lies within rounding of B (e.g. Z - B ~ B^2/A below u B at absurdly large A): the result
        cannot be represented, GK_ERR_RANGE, like an overflow. */
-    if (n <= 0) return GK_ERR_RANGE;
+    if (n <= 0) { return GK_ERR_RANGE; }
 
     return eos_pick(family, vc_over_b, a, b, rtp, root, zr, out);
 }
@@ -412,30 +454,30 @@ gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a
 GK_NOINLINE gk_status gk__eos_prepare(gk_eos eos, const gk_gas *gas, gk_pressure p,
                                       gk_temperature t, gk_root root, gk_real ab[2]) {
     gk_status st;
-    if (gas == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
+    if (gas == NULL || !gk__eos_valid(eos)) { return GK_ERR_ARGUMENT; }
     st = gk__eos_check_state(p, t, root);
-    if (st != GK_OK) return st;
-    if (eos == GK_EOS_IDEAL) return GK_OK;
+    if (st != GK_OK) { return st; }
+    if (eos == GK_EOS_IDEAL) { return GK_OK; }
     st = eos_check_gas(eos, gas);
-    if (st != GK_OK) return st;
+    if (st != GK_OK) { return st; }
     return eos_ab(eos, gas, p.pa, t.k, &ab[0], &ab[1]);
 }
 
 gk_status gk__eos_finish(gk_eos eos, const gk_real ab[2], gk_pressure p, gk_temperature t,
                          gk_root root, gk_eos_result *out) {
-    if (eos == GK_EOS_IDEAL) return gk__eos_ideal(p.pa, t.k, out);
+    if (eos == GK_EOS_IDEAL) { return gk__eos_ideal(p.pa, t.k, out); }
     /* writes *out only on success */
     /* p, t stay in the registers they arrive in and the call is a plain jump (no frame) */
     return eos_solve_ab(eos_family(eos), p.pa, t.k, ab[0], ab[1], eos_vc_over_b(eos), root, out);
 }
 
-gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
-                       gk_root root, gk_eos_result *out) {
-    gk_real ab[2] = {GK_LIT(0.0), GK_LIT(0.0)};
+gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t, gk_root root,
+                       gk_eos_result *out) {
+    gk_real ab[2] = { GK_LIT(0.0), GK_LIT(0.0) };
     gk_status st;
-    if (gas == NULL || out == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
+    if (gas == NULL || out == NULL || !gk__eos_valid(eos)) { return GK_ERR_ARGUMENT; }
     st = gk__eos_prepare(eos, gas, p, t, root, ab);
-    if (st != GK_OK) return st;
+    if (st != GK_OK) { return st; }
     return gk__eos_finish(eos, ab, p, t, root, out);
 }
 
@@ -443,25 +485,26 @@ gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_
                           gk_pressure *out) {
     gk_real v = vm.m3_per_mol, tk = t.k, pa, rep, red;
     gk_status st;
-    if (gas == NULL || out == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
-    if (!gk_positive(v) || !gk_positive(tk)) return GK_ERR_DOMAIN;
+    if (gas == NULL || out == NULL || !gk__eos_valid(eos)) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(v) || !gk_positive(tk)) { return GK_ERR_DOMAIN; }
     st = gk__eos_check_gas(eos, gas);
-    if (st != GK_OK) return st;
+    if (st != GK_OK) { return st; }
     if (eos == GK_EOS_IDEAL) {
         pa = GK_R * tk / v;
         /* R T / Vm > 0 for every valid input: 0 is an underflow, not a non-positive pressure */
-        if (!(pa > GK_LIT(0.0))) return GK_ERR_RANGE;
+        if (!(pa > GK_LIT(0.0))) { return GK_ERR_RANGE; }
     } else if (eos == GK_EOS_VAN_DER_WAALS) {
         gk_real rtc = GK_R * gas->critical_temperature.k;
-        gk_real a = gas->vdw_a > GK_LIT(0.0) ? gas->vdw_a
-                    : VDW_OMEGA_A * (rtc / gas->critical_pressure.pa) * rtc;
-        gk_real b = gas->vdw_b > GK_LIT(0.0) ? gas->vdw_b
-                    : VDW_OMEGA_B * rtc / gas->critical_pressure.pa;
-        if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
-        if (!(v > b)) return GK_ERR_DOMAIN;
+        gk_real a = gas->vdw_a > GK_LIT(0.0)
+                        ? gas->vdw_a
+                        : VDW_OMEGA_A * (rtc / gas->critical_pressure.pa) * rtc;
+        gk_real b =
+            gas->vdw_b > GK_LIT(0.0) ? gas->vdw_b : VDW_OMEGA_B * rtc / gas->critical_pressure.pa;
+        if (!gk_finite(a) || !gk_finite(b)) { return GK_ERR_RANGE; }
+        if (!(v > b)) { return GK_ERR_DOMAIN; }
         rep = GK_R * tk / (v - b);
         /* the repulsive term R T / (V - b) is > 0 for every valid input: 0 is an underflow */
-        if (!(rep > GK_LIT(0.0))) return GK_ERR_RANGE;
+        if (!(rep > GK_LIT(0.0))) { return GK_ERR_RANGE; }
         pa = rep - (a / v) / v;
     } else {
         /* reduced form: p/Pc = Tr/(vr - Ob) - Oa alpha / (vr^2 + u Ob vr + w Ob^2), vr = Vm Pc/(R Tc) */
@@ -472,19 +515,19 @@ gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_
         w = fam == GK__FAMILY_PR ? GK_LIT(-1.0) : GK_LIT(0.0);
         tr = tk / gas->critical_temperature.k;
         vr = v * (gas->critical_pressure.pa / (GK_R * gas->critical_temperature.k));
-        if (!gk_finite(vr) || !gk_finite(tr)) return GK_ERR_RANGE;
-        if (!(vr > ob)) return GK_ERR_DOMAIN;
+        if (!gk_finite(vr) || !gk_finite(tr)) { return GK_ERR_RANGE; }
+        if (!(vr > ob)) { return GK_ERR_DOMAIN; }
         den = vr * vr + (u * vr + w * ob) * ob;
         rep = tr / (vr - ob);
         /* as above: the repulsive term is > 0, and so is a reduced pressure that the scaling by
            Pc rounds to 0 */
-        if (!(rep > GK_LIT(0.0))) return GK_ERR_RANGE;
+        if (!(rep > GK_LIT(0.0))) { return GK_ERR_RANGE; }
         red = rep - oa * eos_alpha(eos, tr, gas->acentric_factor) / den;
         pa = red * gas->critical_pressure.pa;
-        if (red > GK_LIT(0.0) && !(pa > GK_LIT(0.0))) return GK_ERR_RANGE;
+        if (red > GK_LIT(0.0) && !(pa > GK_LIT(0.0))) { return GK_ERR_RANGE; }
     }
-    if (!gk_finite(pa)) return GK_ERR_RANGE;
-    if (!(pa > GK_LIT(0.0))) return GK_ERR_NO_SOLUTION;
+    if (!gk_finite(pa)) { return GK_ERR_RANGE; }
+    if (!(pa > GK_LIT(0.0))) { return GK_ERR_NO_SOLUTION; }
     out->pa = pa;
     return GK_OK;
 }
@@ -494,18 +537,18 @@ gk_status gk_eos_density(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temper
     gk_eos_result r;
     gk_real rho;
     gk_status st;
-    if (gas == NULL || out == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
-    if (!gk_positive(gas->molar_mass.kg_per_mol)) return GK_ERR_DOMAIN;
+    if (gas == NULL || out == NULL || !gk__eos_valid(eos)) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(gas->molar_mass.kg_per_mol)) { return GK_ERR_DOMAIN; }
     /* gk_eos_solve() in its two halves (its own checks are the ones above), without its frame
        under the cubic solver; A, B are staged in r.z_roots (see gk__eos_finish()) */
     r.z_roots[0] = GK_LIT(0.0);
     r.z_roots[1] = GK_LIT(0.0);
     st = gk__eos_prepare(eos, gas, p, t, GK_ROOT_STABLE, r.z_roots);
-    if (st != GK_OK) return st;
+    if (st != GK_OK) { return st; }
     st = gk__eos_finish(eos, r.z_roots, p, t, GK_ROOT_STABLE, &r);
-    if (st != GK_OK) return st;
+    if (st != GK_OK) { return st; }
     rho = gas->molar_mass.kg_per_mol / r.molar_volume.m3_per_mol;
-    if (!gk_positive(rho)) return GK_ERR_RANGE;
+    if (!gk_positive(rho)) { return GK_ERR_RANGE; }
     out->kg_per_m3 = rho;
     return GK_OK;
 }

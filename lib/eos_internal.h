@@ -38,7 +38,8 @@ gk_status gk__eos_check_gas(gk_eos eos, const gk_gas *gas);
 /* Dimensionless A = a(T) p / (R T)^2 and B = b p / (R T) of a pure gas at (p, T). The caller has
    checked eos (not ideal), gas (gk__eos_check_gas) and p, T (finite, > 0).
    GK_ERR_RANGE when A or B overflows. */
-gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *a_out, gk_real *b_out);
+gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *a_out,
+                     gk_real *b_out);
 
 /* Solves the cubic of a family with the given A >= 0, B > 0 at (p, T) and fills a complete
    result (into *out only on GK_OK). GK_ERR_RANGE when a result overflows or underflows, or when

@@ -18,13 +18,15 @@
 #define KIJ_MAX GK_LIT(1.0)
 static gk_status kij_check(size_t count, const gk_real *kij) {
     size_t i, j;
-    if (kij == NULL) return GK_OK;
+    if (kij == NULL) { return GK_OK; }
     for (i = 0; i < count; ++i) {
         for (j = 0; j < count; ++j) {
             gk_real k = kij[i * count + j];
-            if (!gk_finite(k) || gk_fabs(k) > KIJ_MAX) return GK_ERR_DOMAIN;
-            if (i == j && (k < GK_LIT(0.0) || k > GK_LIT(0.0))) return GK_ERR_DOMAIN;
-            if (j < i && (k < kij[j * count + i] || k > kij[j * count + i])) return GK_ERR_DOMAIN;
+            if (!gk_finite(k) || gk_fabs(k) > KIJ_MAX) { return GK_ERR_DOMAIN; }
+            if (i == j && (k < GK_LIT(0.0) || k > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
+            if (j < i && (k < kij[j * count + i] || k > kij[j * count + i])) {
+                return GK_ERR_DOMAIN;
+            }
         }
     }
     return GK_OK;
@@ -32,8 +34,8 @@ static gk_status kij_check(size_t count, const gk_real *kij) {
 
 /* sqrt(a_i) (dimensionless, as sqrt(A_i)) of component i, recomputed where it is needed so that
    no per-component array is kept on the stack (firmware stack budget). */
-static gk_status component_sqrt_a(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t,
-                                  gk_real *s, gk_real *b) {
+static gk_status component_sqrt_a(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *s,
+                                  gk_real *b) {
     gk_real a = GK_LIT(0.0);
     gk_status st = gk__eos_ab(eos, gas, p, t, &a, b);
     *s = gk_sqrt(a);
@@ -54,69 +56,67 @@ static gk_status mixture_ab(gk_eos eos, const gk_mixture *mix, const gk_real *ki
         for (j = 0; j < n; ++j) {
             gk_real sj = GK_LIT(0.0), bj = GK_LIT(0.0);
             st = component_sqrt_a(eos, mix->gas[j], p, t, &sj, &bj);
-            if (st != GK_OK) return st;
+            if (st != GK_OK) { return st; }
             sx += mix->mole_fraction[j] * sj;
         }
     }
     for (i = 0; i < n; ++i) {
         gk_real xi = mix->mole_fraction[i], si = GK_LIT(0.0), bi = GK_LIT(0.0), row = sx;
         st = component_sqrt_a(eos, mix->gas[i], p, t, &si, &bi);
-        if (st != GK_OK) return st;
+        if (st != GK_OK) { return st; }
         if (kij != NULL) {
             row = GK_LIT(0.0);
             for (j = 0; j < n; ++j) {
                 gk_real sj = GK_LIT(0.0), bj = GK_LIT(0.0);
                 st = component_sqrt_a(eos, mix->gas[j], p, t, &sj, &bj);
-                if (st != GK_OK) return st;
+                if (st != GK_OK) { return st; }
                 row += mix->mole_fraction[j] * sj * (GK_LIT(1.0) - kij[i * n + j]);
             }
         }
         a += xi * si * row;
         b += xi * bi;
     }
-    if (!gk_finite(a) || !gk_finite(b)) return GK_ERR_RANGE;
-    if (!(b > GK_LIT(0.0))) return GK_ERR_RANGE;
+    if (!gk_finite(a) || !gk_finite(b)) { return GK_ERR_RANGE; }
+    if (!(b > GK_LIT(0.0))) { return GK_ERR_RANGE; }
     *a_out = a;
     *b_out = b;
     return GK_OK;
 }
 
-GK_NOINLINE gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_fluid *fluid,
-                                              gk_pressure p, gk_temperature t, gk_root root,
-                                              gk_real ab[2]) {
+GK_NOINLINE gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_fluid *fluid, gk_pressure p,
+                                              gk_temperature t, gk_root root, gk_real ab[2]) {
     const gk_mixture *mix = fluid->mixture;
     const gk_real *kij = fluid->kij;
     gk_status st;
     size_t i, n;
 
-    if (mix == NULL || !gk__eos_valid(eos)) return GK_ERR_ARGUMENT;
+    if (mix == NULL || !gk__eos_valid(eos)) { return GK_ERR_ARGUMENT; }
     st = gk__mixture_check(mix); /* composition (gases module: the one shared check) */
-    if (st != GK_OK) return st;
+    if (st != GK_OK) { return st; }
     st = gk__eos_check_state(p, t, root);
-    if (st != GK_OK) return st;
+    if (st != GK_OK) { return st; }
     n = mix->count;
     for (i = 0; i < n; ++i) {
         st = gk__eos_check_gas(eos, mix->gas[i]);
-        if (st != GK_OK) return st;
+        if (st != GK_OK) { return st; }
     }
     st = kij_check(n, kij);
-    if (st != GK_OK) return st;
-    if (eos == GK_EOS_IDEAL) return GK_OK;
+    if (st != GK_OK) { return st; }
+    if (eos == GK_EOS_IDEAL) { return GK_OK; }
     return mixture_ab(eos, mix, kij, p.pa, t.k, &ab[0], &ab[1]);
 }
 
-gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
-                               gk_pressure p, gk_temperature t, gk_root root,
-                               gk_eos_result *out) {
-    gk_real ab[2] = {GK_LIT(0.0), GK_LIT(0.0)};
+gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij, gk_pressure p,
+                               gk_temperature t, gk_root root, gk_eos_result *out) {
+    gk_real ab[2] = { GK_LIT(0.0), GK_LIT(0.0) };
     gk_fluid fluid;
     gk_status st;
-    if (mix == NULL || out == NULL) return GK_ERR_ARGUMENT;
+    if (mix == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     fluid.gas = NULL;
     fluid.mixture = mix;
     fluid.kij = kij;
     st = gk__mixture_eos_prepare(eos, &fluid, p, t, root, ab);
-    if (st != GK_OK) return st;
+    if (st != GK_OK) { return st; }
     /* both paths write *out only on GK_OK */
     return gk__eos_finish(eos, ab, p, t, root, out);
 }

@@ -60,6 +60,7 @@ typedef struct gk__gas_row {
     const char *aliases;
 } gk__gas_row;
 
+/* clang-format off */
 #define GK__ROW(name, formula, m, tc, pc, omega, a, b, gamma, sigma, alias)                     \
     { { name, formula, { GK_LIT(m) }, { GK_LIT(tc) }, { GK_LIT(pc) }, GK_LIT(omega),           \
         GK_LIT(a), GK_LIT(b), GK_LIT(gamma), GK_LIT(sigma) },                                  \
@@ -322,6 +323,7 @@ static const gk__gas_row gk__gases[] = {
             0.0,                        /* sigma: not known */
             GK__ALIAS3("r-134a", "r134a", "hfc-134a")),
 };
+/* clang-format on */
 
 #define GK__GAS_COUNT (sizeof gk__gases / sizeof gk__gases[0])
 
@@ -331,12 +333,12 @@ static int gk__same_n(const char *text, size_t n, const char *b, int fold) {
     size_t i;
     for (i = 0; i < n; ++i) {
         char ca = text[i], cb = b[i];
-        if (cb == '\0') return 0;
+        if (cb == '\0') { return 0; }
         if (fold) {
             ca = gk__ascii_lower(ca);
             cb = gk__ascii_lower(cb);
         }
-        if (ca != cb) return 0;
+        if (ca != cb) { return 0; }
     }
     return (b[n] == '\0') ? 1 : 0;
 }
@@ -362,7 +364,7 @@ gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out) {
                 *out = &gk__gases[i].gas;
                 return GK_OK;
             }
-            while (*alias != '\0') ++alias;
+            while (*alias != '\0') { ++alias; }
             ++alias; /* past the NUL that ends this name */
         }
     }
@@ -371,8 +373,8 @@ gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out) {
 
 gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out) {
     size_t n = 0;
-    if (name_or_formula == NULL || out == NULL) return GK_ERR_ARGUMENT;
-    while (name_or_formula[n] != '\0') ++n;
+    if (name_or_formula == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
+    while (name_or_formula[n] != '\0') { ++n; }
     return gk__gas_find_n(name_or_formula, n, out);
 }
 

@@ -15,28 +15,28 @@
 #define GK_LIT(x) GK_REAL_C(x)
 
 #if GK_REAL_IS_FLOAT
-#  define gk_sqrt  sqrtf
-#  define gk_cbrt  cbrtf
-#  define gk_fabs  fabsf
-#  define gk_log   logf
-#  define gk_exp   expf
-#  define gk_pow   powf
-#  define gk_cos   cosf
-#  define gk_acos  acosf
-#  define gk_fma   fmaf
+#  define gk_sqrt sqrtf
+#  define gk_cbrt cbrtf
+#  define gk_fabs fabsf
+#  define gk_log logf
+#  define gk_exp expf
+#  define gk_pow powf
+#  define gk_cos cosf
+#  define gk_acos acosf
+#  define gk_fma fmaf
 #  define gk_copysign copysignf
 #  define GK_REAL_MAX 3.402823466e+38f /* FLT_MAX, IEEE 754 binary32 (common practice) */
 #  define GK_REAL_EPS 1.1920929e-7f    /* FLT_EPSILON, 2^-23 (IEEE 754 binary32) */
 #else
-#  define gk_sqrt  sqrt
-#  define gk_cbrt  cbrt
-#  define gk_fabs  fabs
-#  define gk_log   log
-#  define gk_exp   exp
-#  define gk_pow   pow
-#  define gk_cos   cos
-#  define gk_acos  acos
-#  define gk_fma   fma
+#  define gk_sqrt sqrt
+#  define gk_cbrt cbrt
+#  define gk_fabs fabs
+#  define gk_log log
+#  define gk_exp exp
+#  define gk_pow pow
+#  define gk_cos cos
+#  define gk_acos acos
+#  define gk_fma fma
 #  define gk_copysign copysign
 #  define GK_REAL_MAX 1.7976931348623157e+308 /* DBL_MAX, IEEE 754 binary64 (common practice) */
 #  define GK_REAL_EPS 2.220446049250313e-16   /* DBL_EPSILON, 2^-52 (IEEE 754 binary64) */
@@ -73,8 +73,6 @@ static inline gk_status gk_check_positive(gk_real x) {
 }
 
 /* Status of a computed result: finite is GK_OK, anything else (overflow) GK_ERR_RANGE. */
-static inline gk_status gk_check_result(gk_real x) {
-    return gk_finite(x) ? GK_OK : GK_ERR_RANGE;
-}
+static inline gk_status gk_check_result(gk_real x) { return gk_finite(x) ? GK_OK : GK_ERR_RANGE; }
 
 #endif /* GASKIT_INTERNAL_H */

@@ -14,18 +14,14 @@
 
 /* The fluid names exactly one of a gas and a mixture, and the model is one of gk_eos. */
 static gk_status fluid_check(gk_eos eos, const gk_fluid *fluid) {
-    if (!gk__eos_valid(eos)) {
-        return GK_ERR_ARGUMENT;
-    }
-    if ((fluid->gas == NULL) == (fluid->mixture == NULL)) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (!gk__eos_valid(eos)) { return GK_ERR_ARGUMENT; }
+    if ((fluid->gas == NULL) == (fluid->mixture == NULL)) { return GK_ERR_ARGUMENT; }
     return GK_OK;
 }
 
 /* Stable root of the model at p, T. */
-static GK_ALWAYS_INLINE gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t,
-                             gk_eos_result *r) {
+static GK_ALWAYS_INLINE gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid, gk_pressure p,
+                                              gk_temperature t, gk_eos_result *r) {
     /* A, B are staged in the result's z_roots[0], z_roots[1]: gk__eos_finish() reads both
        before it writes *r, and no separate array sits in the caller's frame (stack budget) */
     gk_real *ab;
@@ -40,32 +36,22 @@ static GK_ALWAYS_INLINE gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid,
     } else {
         s = gk__mixture_eos_prepare(eos, fluid, p, t, GK_ROOT_STABLE, ab);
     }
-    if (s == GK_OK) {
-        s = gk__eos_finish(eos, ab, p, t, GK_ROOT_STABLE, r);
-    }
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s == GK_OK) { s = gk__eos_finish(eos, ab, p, t, GK_ROOT_STABLE, r); }
+    if (s != GK_OK) { return s; }
     /* Defensive: every later formula divides by Z. */
-    if (!gk_positive(r->z) || !gk_positive(r->molar_volume.m3_per_mol)) {
-        return GK_ERR_RANGE;
-    }
+    if (!gk_positive(r->z) || !gk_positive(r->molar_volume.m3_per_mol)) { return GK_ERR_RANGE; }
     return GK_OK;
 }
 
 static gk_status fluid_molar_mass(const gk_fluid *fluid, gk_real *m) {
     if (fluid->gas != NULL) {
-        if (!gk_positive(fluid->gas->molar_mass.kg_per_mol)) {
-            return GK_ERR_DOMAIN;
-        }
+        if (!gk_positive(fluid->gas->molar_mass.kg_per_mol)) { return GK_ERR_DOMAIN; }
         *m = fluid->gas->molar_mass.kg_per_mol;
         return GK_OK;
     } else {
         gk_molar_mass mm;
         const gk_status s = gk_mixture_molar_mass(fluid->mixture, &mm);
-        if (s != GK_OK) {
-            return s;
-        }
+        if (s != GK_OK) { return s; }
         *m = mm.kg_per_mol;
         return GK_OK;
     }
@@ -96,14 +82,11 @@ static gk_real component_tc(gk_eos eos, const gk_gas *g) {
  * Limitation (documented): a mixture between its dew and bubble points (two phases) is not
  * detected by a single-phase root; no flash calculation is made.
  */
-static int fluid_is_liquid(gk_eos eos, const gk_fluid *fluid, gk_temperature t, const gk_eos_result *r) {
+static int fluid_is_liquid(gk_eos eos, const gk_fluid *fluid, gk_temperature t,
+                           const gk_eos_result *r) {
     gk_real tc = GK_LIT(0.0);
-    if (eos == GK_EOS_IDEAL || r->branch != GK_ROOT_LIQUID) {
-        return 0;
-    }
-    if (r->root_count >= 2) {
-        return 1;
-    }
+    if (eos == GK_EOS_IDEAL || r->branch != GK_ROOT_LIQUID) { return 0; }
+    if (r->root_count >= 2) { return 1; }
     if (fluid->gas != NULL) {
         tc = component_tc(eos, fluid->gas);
     } else {
@@ -116,15 +99,12 @@ static int fluid_is_liquid(gk_eos eos, const gk_fluid *fluid, gk_temperature t, 
 }
 
 /* Solve and require a gas (or supercritical) stable state. */
-static gk_status gas_state(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t, gk_real *z) {
+static gk_status gas_state(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t,
+                           gk_real *z) {
     gk_eos_result r;
     const gk_status s = fluid_solve(eos, fluid, p, t, &r);
-    if (s != GK_OK) {
-        return s;
-    }
-    if (fluid_is_liquid(eos, fluid, t, &r)) {
-        return GK_ERR_RANGE;
-    }
+    if (s != GK_OK) { return s; }
+    if (fluid_is_liquid(eos, fluid, t, &r)) { return GK_ERR_RANGE; }
     *z = r.z;
     return GK_OK;
 }
@@ -138,17 +118,11 @@ static gk_status reference_check(gk_reference ref) {
 gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t, gk_real *z) {
     gk_eos_result r;
     gk_status s;
-    if (z == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (z == NULL) { return GK_ERR_ARGUMENT; }
     s = fluid_check(eos, &fluid);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = fluid_solve(eos, &fluid, p, t, &r);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     *z = r.z;
     return GK_OK;
 }
@@ -158,13 +132,9 @@ static gk_status flow_factor(gk_eos eos, const gk_fluid *fluid, gk_pressure p, g
                              gk_reference ref, gk_real *factor) {
     gk_real z = GK_LIT(1.0), z_ref = GK_LIT(1.0);
     gk_status s = gas_state(eos, fluid, p, t, &z);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = gas_state(eos, fluid, ref.p, ref.t, &z_ref);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     return gk_reference_factor(p, t, z, ref, z_ref, factor);
 }
 
@@ -175,28 +145,16 @@ static gk_status flow_convert(gk_eos eos, const gk_fluid *fluid, gk_real q_in, g
                               gk_volume_flow *out) {
     gk_real f = GK_LIT(1.0), q;
     gk_status s;
-    if (out == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     s = fluid_check(eos, fluid);
-    if (s != GK_OK) {
-        return s;
-    }
-    if (!gk_finite(q_in) || !gk_positive(p.pa) || !gk_positive(t.k)) {
-        return GK_ERR_DOMAIN;
-    }
+    if (s != GK_OK) { return s; }
+    if (!gk_finite(q_in) || !gk_positive(p.pa) || !gk_positive(t.k)) { return GK_ERR_DOMAIN; }
     s = reference_check(ref);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = flow_factor(eos, fluid, p, t, ref, &f);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     q = to_reference ? q_in * f : q_in / f;
-    if (!gk_finite(q)) {
-        return GK_ERR_RANGE;
-    }
+    if (!gk_finite(q)) { return GK_ERR_RANGE; }
     out->m3_per_s = q;
     return GK_OK;
 }
@@ -216,30 +174,20 @@ gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_
                           gk_temperature t, gk_mass_flow *out) {
     gk_real z = GK_LIT(1.0), m = GK_LIT(0.0), rho, w;
     gk_status s;
-    if (out == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     s = fluid_check(eos, &fluid);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     if (!gk_finite(actual.m3_per_s) || !gk_positive(p.pa) || !gk_positive(t.k)) {
         return GK_ERR_DOMAIN;
     }
     s = fluid_molar_mass(&fluid, &m);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = gas_state(eos, &fluid, p, t, &z);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     /* rho = p M / (Z R T) */
     rho = (p.pa / (z * GK_R * t.k)) * m;
     w = actual.m3_per_s * rho;
-    if (!gk_positive(rho) || !gk_finite(w)) {
-        return GK_ERR_RANGE;
-    }
+    if (!gk_positive(rho) || !gk_finite(w)) { return GK_ERR_RANGE; }
     out->kg_per_s = w;
     return GK_OK;
 }
@@ -249,40 +197,26 @@ gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel, gk_pr
     gk_real z = GK_LIT(1.0), z_ref = GK_LIT(1.0), m = GK_LIT(0.0);
     gk_real n, mass, v_ref;
     gk_status s;
-    if (out == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     s = fluid_check(eos, &fluid);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     if (!gk_positive(vessel.m3) || !gk_positive(p.pa) || !gk_positive(t.k)) {
         return GK_ERR_DOMAIN;
     }
     s = reference_check(ref);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = fluid_molar_mass(&fluid, &m);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = gas_state(eos, &fluid, p, t, &z);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = gas_state(eos, &fluid, ref.p, ref.t, &z_ref);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     /* n = p V / (Z R T); the reference volume n Z_ref R T_ref / p_ref */
     n = (p.pa / (z * GK_R * t.k)) * vessel.m3;
     mass = n * m;
     v_ref = n * (z_ref * GK_R * ref.t.k / ref.p.pa);
     /* an amount, mass or volume that overflows or underflows to 0 cannot be reported */
-    if (!gk_positive(n) || !gk_positive(mass) || !gk_positive(v_ref)) {
-        return GK_ERR_RANGE;
-    }
+    if (!gk_positive(n) || !gk_positive(mass) || !gk_positive(v_ref)) { return GK_ERR_RANGE; }
     out->amount.mol = n;
     out->mass.kg = mass;
     out->reference_volume.m3 = v_ref;
@@ -318,9 +252,7 @@ static gk_status leak_dz(gk_eos eos, const gk_fluid *fluid, gk_pressure ps, gk_t
     gk_pressure pm, pp;
     gk_temperature tm, tp;
     *dz = ze - zs;
-    if (eos == GK_EOS_IDEAL || !(h < LEAK_H) || !(h > GK_LIT(0.0))) {
-        return GK_OK;
-    }
+    if (eos == GK_EOS_IDEAL || !(h < LEAK_H) || !(h > GK_LIT(0.0))) { return GK_OK; }
     k = GK_LIT(0.5) * LEAK_H / h; /* half the stretched step, in units of (end - start) */
     pm.pa = GK_LIT(0.5) * (ps.pa + pe.pa) - k * dp;
     pp.pa = GK_LIT(0.5) * (ps.pa + pe.pa) + k * dp;
@@ -336,42 +268,28 @@ static gk_status leak_dz(gk_eos eos, const gk_fluid *fluid, gk_pressure ps, gk_t
 
 gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test_volume,
                                       gk_pressure p_start, gk_temperature t_start,
-                                      gk_pressure p_end, gk_temperature t_end,
-                                      gk_real elapsed_s, gk_reference ref, gk_leak *out) {
+                                      gk_pressure p_end, gk_temperature t_end, gk_real elapsed_s,
+                                      gk_reference ref, gk_leak *out) {
     gk_real zs = GK_LIT(1.0), ze = GK_LIT(1.0), z_ref = GK_LIT(1.0), m = GK_LIT(0.0);
     gk_real num, dn, rate, w, q, dz = GK_LIT(0.0);
     gk_status s;
-    if (out == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     s = fluid_check(eos, &fluid);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     if (!gk_positive(elapsed_s) || !gk_positive(test_volume.m3) || !gk_positive(p_start.pa) ||
         !gk_positive(t_start.k) || !gk_positive(p_end.pa) || !gk_positive(t_end.k)) {
         return GK_ERR_DOMAIN;
     }
     s = reference_check(ref);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = fluid_molar_mass(&fluid, &m);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = gas_state(eos, &fluid, p_start, t_start, &zs);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = gas_state(eos, &fluid, p_end, t_end, &ze);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = gas_state(eos, &fluid, ref.p, ref.t, &z_ref);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     /*
      * dn = n_start - n_end = (V / R) (ps / (Zs Ts) - pe / (Ze Te))
      *    = (V / R) [ (ps - pe) Ze Te + pe (Ze (Te - Ts) + Ts (Ze - Zs)) ] / (Zs Ts Ze Te).
@@ -384,24 +302,18 @@ gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test
      * of Z along the same straight line in (p, T), stretched to LEAK_H (see leak_dz()).
      */
     s = leak_dz(eos, &fluid, p_start, t_start, p_end, t_end, zs, ze, &dz);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     num = (p_start.pa - p_end.pa) * ze * t_end.k +
           p_end.pa * (ze * (t_end.k - t_start.k) + t_start.k * dz);
     dn = test_volume.m3 * (num / (zs * t_start.k * ze * t_end.k)) / GK_R;
-    if (!gk_finite(dn)) {
-        return GK_ERR_RANGE;
-    }
+    if (!gk_finite(dn)) { return GK_ERR_RANGE; }
     if (dn < GK_LIT(0.0)) {
         return GK_ERR_NO_SOLUTION; /* the end state holds more gas than the start */
     }
     rate = dn / elapsed_s;
     w = rate * m;
     q = rate * (z_ref * GK_R * ref.t.k / ref.p.pa);
-    if (!gk_finite(rate) || !gk_finite(w) || !gk_finite(q)) {
-        return GK_ERR_RANGE;
-    }
+    if (!gk_finite(rate) || !gk_finite(w) || !gk_finite(q)) { return GK_ERR_RANGE; }
     out->mol_per_s = rate;
     out->mass_flow.kg_per_s = w;
     out->reference_flow.m3_per_s = q;
@@ -413,54 +325,38 @@ gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temp
     const gk_gas *air = NULL;
     gk_real z = GK_LIT(1.0), z_air = GK_LIT(1.0), m = GK_LIT(0.0), d;
     gk_status s;
-    if (out == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     s = fluid_check(eos, &fluid);
-    if (s != GK_OK) {
-        return s;
-    }
-    if (!gk_positive(p.pa) || !gk_positive(t.k)) {
-        return GK_ERR_DOMAIN;
-    }
+    if (s != GK_OK) { return s; }
+    if (!gk_positive(p.pa) || !gk_positive(t.k)) { return GK_ERR_DOMAIN; }
     s = gk_gas_find("air", &air);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = fluid_molar_mass(&fluid, &m);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     s = gas_state(eos, &fluid, p, t, &z);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     /* the fluid's own copy (a by-value parameter, not needed any more) now names air: no
        second gk_fluid in the frame (firmware stack budget) */
     fluid.gas = air;
     fluid.mixture = NULL;
     fluid.kij = NULL;
     s = gas_state(eos, &fluid, p, t, &z_air);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     /* rho = p M / (Z R T) for both at the same p, T: d = (M / M_air) (Z_air / Z) */
     d = (m / air->molar_mass.kg_per_mol) * (z_air / z);
-    if (!gk_positive(d)) {
-        return GK_ERR_RANGE;
-    }
+    if (!gk_positive(d)) { return GK_ERR_RANGE; }
     *out = d;
     return GK_OK;
 }
 
 /* Is this component water? The built-in entry, or a caller's entry with formula "H2O". */
 static int is_water(const gk_gas *g, const gk_gas *water) {
-    if (g == water) {
-        return 1;
-    }
+    if (g == water) { return 1; }
     /* the formula compared by hand: the library uses no C library but <math.h> */
     return (g != NULL && g->formula != NULL && g->formula[0] == 'H' && g->formula[1] == '2' &&
-            g->formula[2] == 'O' && g->formula[3] == '\0') ? 1 : 0;
+            g->formula[2] == 'O' && g->formula[3] == '\0')
+               ? 1
+               : 0;
 }
 
 gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature t,
@@ -470,29 +366,19 @@ gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature 
     gk_real xw, scale;
     size_t i, k, n;
     gk_status s;
-    if (dry == NULL || wet == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (dry == NULL || wet == NULL) { return GK_ERR_ARGUMENT; }
     s = gk__mixture_check(dry);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     if (!gk_positive(p.pa) || !gk_positive(t.k) || !gk_finite(relative_humidity) ||
         relative_humidity < GK_LIT(0.0) || relative_humidity > GK_LIT(1.0)) {
         return GK_ERR_DOMAIN;
     }
     s = gk_water_vapour_pressure(t, &pws);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     xw = relative_humidity * pws.pa / p.pa;
-    if (!(xw < GK_LIT(1.0))) {
-        return GK_ERR_NO_SOLUTION; /* water partial pressure not below p */
-    }
+    if (!(xw < GK_LIT(1.0))) { return GK_ERR_NO_SOLUTION; /* water partial pressure not below p */ }
     s = gk_gas_find("H2O", &water);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     n = dry->count;
     k = n;
     for (i = 0; i < n; ++i) {
@@ -501,18 +387,14 @@ gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature 
             break;
         }
     }
-    if (k == n && n >= GK_MIXTURE_MAX) {
-        return GK_ERR_COMPOSITION; /* no room to append water */
-    }
+    if (k == n && n >= GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; /* no room to append water */ }
     /* Every check has passed: write *wet entry by entry, each read from dry before it is
        written, so wet may be the same object as dry (no copy of a gk_mixture on the stack). */
     scale = GK_LIT(1.0) - xw;
     for (i = 0; i < GK_MIXTURE_MAX; ++i) {
         const gk_gas *g = dry->gas[i];
         gk_real x = dry->mole_fraction[i];
-        if (i < n) {
-            x *= scale;
-        }
+        if (i < n) { x *= scale; }
         if (i == k) {
             g = water;
             x = (k == n) ? xw : x + xw;

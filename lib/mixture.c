@@ -26,7 +26,7 @@ static gk_real gk__compensated_sum(const gk_real *x, size_t n) {
     gk_real s = GK_LIT(0.0);
     gk_real c = GK_LIT(0.0);
     size_t i;
-    for (i = 0; i < n; ++i) gk__neumaier_add(&s, &c, x[i]);
+    for (i = 0; i < n; ++i) { gk__neumaier_add(&s, &c, x[i]); }
     return s + c;
 }
 
@@ -34,20 +34,20 @@ gk_status gk__mixture_check(const gk_mixture *mix) {
     size_t i;
     gk_real sum;
 
-    if (mix == NULL) return GK_ERR_ARGUMENT;
-    if (mix->count == 0u || mix->count > GK_MIXTURE_MAX) return GK_ERR_COMPOSITION;
+    if (mix == NULL) { return GK_ERR_ARGUMENT; }
+    if (mix->count == 0u || mix->count > GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; }
     for (i = 0; i < mix->count; ++i) {
-        if (mix->gas[i] == NULL) return GK_ERR_ARGUMENT;
+        if (mix->gas[i] == NULL) { return GK_ERR_ARGUMENT; }
     }
     for (i = 0; i < mix->count; ++i) {
         gk_real x = mix->mole_fraction[i];
         /* written so that NaN fails too */
-        if (!(x >= GK_LIT(0.0) && x <= GK_LIT(1.0))) return GK_ERR_COMPOSITION;
+        if (!(x >= GK_LIT(0.0) && x <= GK_LIT(1.0))) { return GK_ERR_COMPOSITION; }
     }
     sum = gk__compensated_sum(mix->mole_fraction, mix->count);
-    if (!(gk_fabs(sum - GK_LIT(1.0)) <= GK__MIXTURE_SUM_TOL)) return GK_ERR_COMPOSITION;
+    if (!(gk_fabs(sum - GK_LIT(1.0)) <= GK__MIXTURE_SUM_TOL)) { return GK_ERR_COMPOSITION; }
     for (i = 0; i < mix->count; ++i) {
-        if (!gk_positive(mix->gas[i]->molar_mass.kg_per_mol)) return GK_ERR_DOMAIN;
+        if (!gk_positive(mix->gas[i]->molar_mass.kg_per_mol)) { return GK_ERR_DOMAIN; }
     }
     return GK_OK;
 }
@@ -61,7 +61,7 @@ static int gk__is_space(char c) {
 /* Does text[pos .. len) start with the lower-case word w, without regard to ASCII case? */
 static int gk__starts_with_ci(const char *text, size_t pos, size_t len, const char *w) {
     while (*w != '\0') {
-        if (pos >= len || gk__ascii_lower(text[pos]) != *w) return 0;
+        if (pos >= len || gk__ascii_lower(text[pos]) != *w) { return 0; }
         ++pos;
         ++w;
     }
@@ -69,7 +69,7 @@ static int gk__starts_with_ci(const char *text, size_t pos, size_t len, const ch
 }
 
 static size_t gk__skip_spaces(const char *text, size_t pos, size_t len) {
-    while (pos < len && gk__is_space(text[pos])) ++pos;
+    while (pos < len && gk__is_space(text[pos])) { ++pos; }
     return pos;
 }
 
@@ -90,10 +90,10 @@ static size_t gk__skip_spaces(const char *text, size_t pos, size_t len) {
 /* One component of the text, as read by parse_item(). */
 typedef struct mix_item {
     const gk_gas *gas;
-    gk__decimal number;    /* the value, unless is_balance */
-    int32_t scale_exp10;   /* -2 for '%', -6 for "ppm", else 0 */
+    gk__decimal number;  /* the value, unless is_balance */
+    int32_t scale_exp10; /* -2 for '%', -6 for "ppm", else 0 */
     int is_balance;
-    size_t end;            /* where the component ends: len or the index of its ',' */
+    size_t end; /* where the component ends: len or the index of its ',' */
 } mix_item;
 
 /* Reads the component that starts at text[pos] (syntax and gas; the value is converted by
@@ -105,19 +105,19 @@ static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *
     size_t v;
     size_t i;
     int is_balance = 0;
-    gk__decimal number = {0u, 0, 0};
+    gk__decimal number = { 0u, 0, 0 };
     int32_t scale_exp10 = 0;
     const gk_gas *gas = NULL;
     gk_status st;
 
     /* name */
-    while (eq < len && text[eq] != '=') ++eq;
-    if (eq == len) return GK_ERR_PARSE;                 /* no '=': "", "N2", "N2=1," */
+    while (eq < len && text[eq] != '=') { ++eq; }
+    if (eq == len) { return GK_ERR_PARSE; /* no '=': "", "N2", "N2=1," */ }
     name_begin = gk__skip_spaces(text, pos, eq);
     name_end = eq;
-    while (name_end > name_begin && gk__is_space(text[name_end - 1])) --name_end;
-    if (name_end == name_begin) return GK_ERR_PARSE;     /* "=0.5" */
-    if (text[name_begin] == ',' || text[name_end - 1] == ',') return GK_ERR_PARSE;
+    while (name_end > name_begin && gk__is_space(text[name_end - 1])) { --name_end; }
+    if (name_end == name_begin) { return GK_ERR_PARSE; /* "=0.5" */ }
+    if (text[name_begin] == ',' || text[name_end - 1] == ',') { return GK_ERR_PARSE; }
 
     /* value */
     v = gk__skip_spaces(text, eq + 1, len);
@@ -127,7 +127,7 @@ static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *
     } else {
         size_t used = 0;
         st = gk__decimal_scan(text + v, len - v, &number, &used);
-        if (st != GK_OK) return GK_ERR_PARSE;            /* "N2=", "N2=abc" */
+        if (st != GK_OK) { return GK_ERR_PARSE; /* "N2=", "N2=abc" */ }
         v = gk__skip_spaces(text, v + used, len);
         if (v < len && text[v] == '%') {
             scale_exp10 = -2;
@@ -138,7 +138,7 @@ static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *
         }
     }
     v = gk__skip_spaces(text, v, len);
-    if (v < len && text[v] != ',') return GK_ERR_PARSE;  /* "N2=0.5 O2=0.5", "N2=5%%" */
+    if (v < len && text[v] != ',') { return GK_ERR_PARSE; /* "N2=0.5 O2=0.5", "N2=5%%" */ }
 
     /* gas */
     st = gk__gas_find_n(text + name_begin, name_end - name_begin, &gas);
@@ -146,10 +146,10 @@ static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *
         /* "N2=0,5, O2=0,5": a comma inside a name that names no gas was most likely
            meant as a separator, so the text is malformed rather than the gas unknown. */
         for (i = name_begin; i < name_end; ++i) {
-            if (text[i] == ',') return GK_ERR_PARSE;
+            if (text[i] == ',') { return GK_ERR_PARSE; }
         }
     }
-    if (st != GK_OK) return st;
+    if (st != GK_OK) { return st; }
     it->gas = gas;
     it->number = number;
     it->scale_exp10 = scale_exp10;
@@ -162,10 +162,10 @@ static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *
 static gk_status item_fraction(const mix_item *it, gk_real *x) {
     gk_real y = GK_LIT(0.0);
     if (gk__decimal_to_real(it->number, it->scale_exp10, &y) != GK_OK) {
-        return GK_ERR_COMPOSITION;                       /* overflows: far above 1 */
+        return GK_ERR_COMPOSITION; /* overflows: far above 1 */
     }
-    if (it->number.negative && it->number.mantissa != 0u) return GK_ERR_COMPOSITION;
-    if (y > GK_LIT(1.0)) return GK_ERR_COMPOSITION;
+    if (it->number.negative && it->number.mantissa != 0u) { return GK_ERR_COMPOSITION; }
+    if (y > GK_LIT(1.0)) { return GK_ERR_COMPOSITION; }
     *x = y;
     return GK_OK;
 }
@@ -183,14 +183,14 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
     size_t pos = 0;
     size_t count = 0;
     size_t i;
-    size_t balance_index = GK_MIXTURE_MAX;   /* none yet */
+    size_t balance_index = GK_MIXTURE_MAX; /* none yet */
     gk_real sum = GK_LIT(0.0), comp = GK_LIT(0.0), rest = GK_LIT(0.0);
     gk_status st;
 
-    if (text == NULL || out == NULL) return GK_ERR_ARGUMENT;
+    if (text == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     /* Bounded length: reads at most GK__MIXTURE_TEXT_MAX + 1 characters, never past the NUL. */
-    while (len <= GK__MIXTURE_TEXT_MAX && text[len] != '\0') ++len;
-    if (len > GK__MIXTURE_TEXT_MAX) return GK_ERR_PARSE;
+    while (len <= GK__MIXTURE_TEXT_MAX && text[len] != '\0') { ++len; }
+    if (len > GK__MIXTURE_TEXT_MAX) { return GK_ERR_PARSE; }
 
     /* pass 1: every check; the first error found is reported. The value is converted before
        the search for an earlier listing of the gas (no side effect) and its status reported
@@ -203,36 +203,36 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
         gk_real x = GK_LIT(0.0);
         gk_status value_st = GK_OK;
         st = parse_item(text, len, pos, &it);
-        if (st != GK_OK) return st;
-        if (count == GK_MIXTURE_MAX) return GK_ERR_COMPOSITION;
+        if (st != GK_OK) { return st; }
+        if (count == GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; }
         gas = it.gas;
         end = it.end;
         is_balance = it.is_balance;
-        if (!is_balance) value_st = item_fraction(&it, &x);
+        if (!is_balance) { value_st = item_fraction(&it, &x); }
         for (i = 0; i < count; ++i) {
             it.gas = NULL;
             it.end = len;
-            (void)parse_item(text, len, q, &it);         /* read before: cannot fail */
-            if (it.gas == gas) return GK_ERR_COMPOSITION;  /* listed twice */
+            (void)parse_item(text, len, q, &it); /* read before: cannot fail */
+            if (it.gas == gas) { return GK_ERR_COMPOSITION; /* listed twice */ }
             q = it.end + 1u;
         }
         if (is_balance) {
-            if (balance_index != GK_MIXTURE_MAX) return GK_ERR_PARSE;  /* two balances */
+            if (balance_index != GK_MIXTURE_MAX) { return GK_ERR_PARSE; /* two balances */ }
             balance_index = count;
         } else {
-            if (value_st != GK_OK) return value_st;
+            if (value_st != GK_OK) { return value_st; }
             gk__neumaier_add(&sum, &comp, x);
         }
         count += 1u;
-        if (end == len) break;
-        pos = end + 1u;                                      /* past ',' */
+        if (end == len) { break; }
+        pos = end + 1u; /* past ',' */
     }
 
     sum += comp;
     if (balance_index != GK_MIXTURE_MAX) {
         rest = GK_LIT(1.0) - sum;
-        if (rest < -GK__MIXTURE_SUM_TOL) return GK_ERR_COMPOSITION;  /* negative balance */
-        if (rest < GK_LIT(0.0)) rest = GK_LIT(0.0);   /* rounding within the 1e-6 budget */
+        if (rest < -GK__MIXTURE_SUM_TOL) { return GK_ERR_COMPOSITION; /* negative balance */ }
+        if (rest < GK_LIT(0.0)) { rest = GK_LIT(0.0); /* rounding within the 1e-6 budget */ }
     } else if (!(gk_fabs(sum - GK_LIT(1.0)) <= GK__MIXTURE_SUM_TOL)) {
         return GK_ERR_COMPOSITION;
     }
@@ -270,31 +270,31 @@ gk_status gk_mixture_normalize(gk_mixture *mix) {
     size_t i;
     size_t n;
 
-    if (mix == NULL) return GK_ERR_ARGUMENT;
+    if (mix == NULL) { return GK_ERR_ARGUMENT; }
     n = mix->count;
-    if (n == 0u || n > GK_MIXTURE_MAX) return GK_ERR_COMPOSITION;
+    if (n == 0u || n > GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; }
     for (i = 0; i < n; ++i) {
-        if (mix->gas[i] == NULL) return GK_ERR_ARGUMENT;
+        if (mix->gas[i] == NULL) { return GK_ERR_ARGUMENT; }
     }
     for (i = 0; i < n; ++i) {
         gk_real x = mix->mole_fraction[i];
-        if (!gk_finite(x) || x < GK_LIT(0.0)) return GK_ERR_COMPOSITION;
-        if (x > largest) largest = x;
+        if (!gk_finite(x) || x < GK_LIT(0.0)) { return GK_ERR_COMPOSITION; }
+        if (x > largest) { largest = x; }
         y[i] = x;
     }
-    if (!(largest > GK_LIT(0.0))) return GK_ERR_COMPOSITION;   /* all zero */
+    if (!(largest > GK_LIT(0.0))) { return GK_ERR_COMPOSITION; /* all zero */ }
 
     sum = gk__compensated_sum(y, n);
     if (!gk_finite(sum)) {
         /* Huge proportions: bring them to [0, 1] first so the sum cannot overflow. */
-        for (i = 0; i < n; ++i) y[i] /= largest;
+        for (i = 0; i < n; ++i) { y[i] /= largest; }
         sum = gk__compensated_sum(y, n);
     }
     for (i = 0; i < n; ++i) {
-        y[i] /= sum;                                   /* one rounding per fraction */
-        if (y[i] > GK_LIT(1.0)) y[i] = GK_LIT(1.0);    /* guard an ulp above 1 */
+        y[i] /= sum; /* one rounding per fraction */
+        if (y[i] > GK_LIT(1.0)) { y[i] = GK_LIT(1.0); /* guard an ulp above 1 */ }
     }
-    for (i = 0; i < n; ++i) mix->mole_fraction[i] = y[i];
+    for (i = 0; i < n; ++i) { mix->mole_fraction[i] = y[i]; }
     return GK_OK;
 }
 
@@ -304,14 +304,14 @@ gk_status gk_mixture_molar_mass(const gk_mixture *mix, gk_molar_mass *out) {
     size_t i;
     gk_status st;
 
-    if (mix == NULL || out == NULL) return GK_ERR_ARGUMENT;
+    if (mix == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__mixture_check(mix);
-    if (st != GK_OK) return st;
+    if (st != GK_OK) { return st; }
     for (i = 0; i < mix->count; ++i) {
         terms[i] = mix->mole_fraction[i] * mix->gas[i]->molar_mass.kg_per_mol;
     }
     m = gk__compensated_sum(terms, mix->count);
-    if (!gk_positive(m)) return GK_ERR_RANGE;   /* overflow of absurd molar masses */
+    if (!gk_positive(m)) { return GK_ERR_RANGE; /* overflow of absurd molar masses */ }
     out->kg_per_mol = m;
     return GK_OK;
 }

@@ -24,8 +24,8 @@ extern "C" {
 
 /** Van der Waals constants. */
 typedef struct gk_vdw {
-    gk_real a;  /**< attraction, Pa m^6 mol^-2 */
-    gk_real b;  /**< covolume, m^3 mol^-1 */
+    gk_real a; /**< attraction, Pa m^6 mol^-2 */
+    gk_real b; /**< covolume, m^3 mol^-1 */
 } gk_vdw;
 
 /** Which root of a cubic equation of state to return. */
@@ -54,7 +54,8 @@ GK_API gk_status gk_vdw_from_critical(gk_temperature tc, gk_pressure pc, gk_vdw 
  *                            of the model with negative pressure).
  * @retval GK_ERR_RANGE    The result overflows.
  */
-GK_API gk_status gk_vdw_pressure(gk_vdw c, gk_amount n, gk_volume v, gk_temperature t, gk_pressure *out);
+GK_API gk_status gk_vdw_pressure(gk_vdw c, gk_amount n, gk_volume v, gk_temperature t,
+                                 gk_pressure *out);
 
 /**
  * @brief Van der Waals temperature T = (p + a n^2 / V^2)(V - n b) / (n R).
@@ -63,7 +64,8 @@ GK_API gk_status gk_vdw_pressure(gk_vdw c, gk_amount n, gk_volume v, gk_temperat
  * @retval GK_ERR_DOMAIN   An input is not finite, n, V, p not > 0, a or b < 0, or V <= n b.
  * @retval GK_ERR_RANGE    The result overflows, or underflows to 0.
  */
-GK_API gk_status gk_vdw_temperature(gk_vdw c, gk_amount n, gk_volume v, gk_pressure p, gk_temperature *out);
+GK_API gk_status gk_vdw_temperature(gk_vdw c, gk_amount n, gk_volume v, gk_pressure p,
+                                    gk_temperature *out);
 
 /**
  * @brief Van der Waals volume: the chosen real root V > n b of the cubic in V.
@@ -101,17 +103,21 @@ typedef enum gk_eos {
  * See docs/cubic-solver.md.
  */
 typedef struct gk_eos_result {
-    gk_real z;                      /**< compressibility factor of the returned root */
-    gk_molar_volume molar_volume;   /**< molar volume of the returned root, Z R T / p */
-    gk_real fugacity_coefficient;   /**< fugacity coefficient phi of the returned root (1 for the ideal
-                                         gas; for a mixture, that of the mixture as a pseudo-pure fluid) */
-    int root_count;                 /**< distinct real roots above the covolume, as decided in working
-                                         precision: 1 or 3, 2 when a double root is detected exactly;
-                                         1 at a triple root and for the ideal gas */
-    gk_real z_roots[3];             /**< those roots of Z, ascending; unused entries 0 */
-    gk_root branch;                 /**< GK_ROOT_GAS or GK_ROOT_LIQUID: the branch returned. With a
-                                         lone root: GK_ROOT_LIQUID when it is denser than the model's
-                                         critical density (Z/B < Zc/Omega_b), else GK_ROOT_GAS */
+    gk_real z;                    /**< compressibility factor of the returned root */
+    gk_molar_volume molar_volume; /**< molar volume of the returned root, Z R T / p */
+    /** fugacity coefficient phi of the returned root (1 for the ideal gas; for a mixture, that of
+     * the mixture as a pseudo-pure fluid)
+     */
+    gk_real fugacity_coefficient;
+    /** distinct real roots above the covolume, as decided in working precision: 1 or 3, 2 when a
+     * double root is detected exactly; 1 at a triple root and for the ideal gas
+     */
+    int root_count;
+    gk_real z_roots[3]; /**< those roots of Z, ascending; unused entries 0 */
+    /** GK_ROOT_GAS or GK_ROOT_LIQUID: the branch returned. With a lone root: GK_ROOT_LIQUID when
+     * it is denser than the model's critical density (Z/B < Zc/Omega_b), else GK_ROOT_GAS
+     */
+    gk_root branch;
 } gk_eos_result;
 
 /**
@@ -159,8 +165,8 @@ GK_API gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_t
  * @retval GK_ERR_NO_SOLUTION The model gives a pressure that is not > 0.
  * @retval GK_ERR_RANGE    The result overflows.
  */
-GK_API gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_temperature t,
-                                 gk_pressure *out);
+GK_API gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm,
+                                 gk_temperature t, gk_pressure *out);
 
 /**
  * @brief Mass density of the stable root: rho = M / Vm.

@@ -19,16 +19,21 @@ extern "C" {
  * its own const tables of these and pass them to every function that takes a gk_gas.
  */
 typedef struct gk_gas {
-    const char *name;                     /**< lower-case name, e.g. "carbon dioxide" */
-    const char *formula;                  /**< formula or short label, e.g. "CO2" */
-    gk_molar_mass molar_mass;             /**< molar mass */
-    gk_temperature critical_temperature;  /**< critical temperature Tc */
-    gk_pressure critical_pressure;        /**< critical pressure Pc */
-    gk_real acentric_factor;              /**< Pitzer acentric factor (dimensionless) */
-    gk_real vdw_a;                        /**< van der Waals a, Pa m^6 mol^-2, handbook value; 0 = derive from Tc, Pc */
-    gk_real vdw_b;                        /**< van der Waals b, m^3 mol^-1; 0 = derive from Tc, Pc */
-    gk_real heat_capacity_ratio;          /**< ideal-gas cp/cv near 298 K; 0 = not known */
-    gk_real collision_diameter;           /**< collision diameter (Lennard-Jones sigma from viscosity, used as a hard-sphere diameter), m; 0 = not known */
+    const char *name;                    /**< lower-case name, e.g. "carbon dioxide" */
+    const char *formula;                 /**< formula or short label, e.g. "CO2" */
+    gk_molar_mass molar_mass;            /**< molar mass */
+    gk_temperature critical_temperature; /**< critical temperature Tc */
+    gk_pressure critical_pressure;       /**< critical pressure Pc */
+    gk_real acentric_factor;             /**< Pitzer acentric factor (dimensionless) */
+    /** van der Waals a, Pa m^6 mol^-2, handbook value; 0 = derive from Tc, Pc */
+    gk_real vdw_a;
+    /** van der Waals b, m^3 mol^-1; 0 = derive from Tc, Pc */
+    gk_real vdw_b;
+    gk_real heat_capacity_ratio; /**< ideal-gas cp/cv near 298 K; 0 = not known */
+    /** collision diameter (Lennard-Jones sigma from viscosity, used as a hard-sphere diameter), m;
+     * 0 = not known
+     */
+    gk_real collision_diameter;
 } gk_gas;
 
 /**

@@ -30,9 +30,9 @@ extern "C" {
 
 /** What is in the vessel or the line: exactly one of gas and mixture is non-NULL. */
 typedef struct gk_fluid {
-    const gk_gas *gas;          /**< a pure gas, or NULL */
-    const gk_mixture *mixture;  /**< a mixture, or NULL */
-    const gk_real *kij;         /**< with a mixture: count*count interaction parameters, or NULL */
+    const gk_gas *gas;         /**< a pure gas, or NULL */
+    const gk_mixture *mixture; /**< a mixture, or NULL */
+    const gk_real *kij;        /**< with a mixture: count*count interaction parameters, or NULL */
 } gk_fluid;
 
 /**
@@ -43,7 +43,8 @@ typedef struct gk_fluid {
  * @retval GK_ERR_ARGUMENT @p z is NULL, @p eos out of range, or not exactly one of gas and mixture.
  * @retval Others          As gk_eos_solve() / gk_mixture_eos_solve().
  */
-GK_API gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t, gk_real *z);
+GK_API gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t,
+                            gk_real *z);
 
 /**
  * @brief Actual volume flow at p, T to the volume flow at a reference condition, with Z from
@@ -54,8 +55,9 @@ GK_API gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temper
  *         finite or not > 0; GK_ERR_RANGE for a stable state that is liquid at either
  *         condition, or a result that overflows.
  */
-GK_API gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
-                                      gk_temperature t, gk_reference ref, gk_volume_flow *out);
+GK_API gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual,
+                                      gk_pressure p, gk_temperature t, gk_reference ref,
+                                      gk_volume_flow *out);
 
 /**
  * @brief Volume flow at a reference condition to the actual volume flow at p, T (the inverse of
@@ -83,14 +85,15 @@ GK_API gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actu
                                  gk_temperature t, gk_mass_flow *out);
 
 /** Contract spelling of gk_flow_to_mass() (see there). */
-#define gk_mass_flow(eos, fluid, actual, p, t, out) gk_flow_to_mass((eos), (fluid), (actual), (p), (t), (out))
+#define gk_mass_flow(eos, fluid, actual, p, t, out) \
+  gk_flow_to_mass((eos), (fluid), (actual), (p), (t), (out))
 
 /** Contents of a vessel. */
 typedef struct gk_contents {
-    gk_amount amount;            /**< amount of gas in the vessel */
-    gk_mass mass;                /**< its mass */
-    gk_volume reference_volume;  /**< its volume at the reference condition (as free gas) */
-    gk_real z;                   /**< compressibility factor in the vessel */
+    gk_amount amount;           /**< amount of gas in the vessel */
+    gk_mass mass;               /**< its mass */
+    gk_volume reference_volume; /**< its volume at the reference condition (as free gas) */
+    gk_real z;                  /**< compressibility factor in the vessel */
 } gk_contents;
 
 /**
@@ -108,9 +111,9 @@ GK_API gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel
 
 /** A leak rate, in three forms. */
 typedef struct gk_leak {
-    gk_real mol_per_s;              /**< amount lost per second */
-    gk_mass_flow mass_flow;         /**< mass lost per second */
-    gk_volume_flow reference_flow;  /**< volume lost per second at the reference condition */
+    gk_real mol_per_s;             /**< amount lost per second */
+    gk_mass_flow mass_flow;        /**< mass lost per second */
+    gk_volume_flow reference_flow; /**< volume lost per second at the reference condition */
 } gk_leak;
 
 /**

@@ -20,9 +20,9 @@ extern "C" {
 
 /** A mixture: component gases with their mole fractions. Plain data, kept on the stack. */
 typedef struct gk_mixture {
-    size_t count;                           /**< components in use, 1 ... GK_MIXTURE_MAX */
-    const gk_gas *gas[GK_MIXTURE_MAX];      /**< component gases */
-    gk_real mole_fraction[GK_MIXTURE_MAX];  /**< mole fractions, each in [0, 1], summing to 1 */
+    size_t count;                          /**< components in use, 1 ... GK_MIXTURE_MAX */
+    const gk_gas *gas[GK_MIXTURE_MAX];     /**< component gases */
+    gk_real mole_fraction[GK_MIXTURE_MAX]; /**< mole fractions, each in [0, 1], summing to 1 */
 } gk_mixture;
 
 /**

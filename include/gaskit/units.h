@@ -19,38 +19,59 @@ extern "C" {
  *  @{ */
 
 /** A absolute pressure in pascal (absolute) (Pa). Always absolute; see gk_pressure_from_gauge() for gauge readings. */
-typedef struct gk_pressure { gk_real pa; /**< value in Pa */ } gk_pressure;
+typedef struct gk_pressure {
+    gk_real pa; /**< value in Pa */
+} gk_pressure;
 
 /** A thermodynamic temperature in kelvin (K). */
-typedef struct gk_temperature { gk_real k; /**< value in K */ } gk_temperature;
+typedef struct gk_temperature {
+    gk_real k; /**< value in K */
+} gk_temperature;
 
 /** A volume in cubic metre (m3). */
-typedef struct gk_volume { gk_real m3; /**< value in m3 */ } gk_volume;
+typedef struct gk_volume {
+    gk_real m3; /**< value in m3 */
+} gk_volume;
 
 /** A amount of substance in mole (mol). */
-typedef struct gk_amount { gk_real mol; /**< value in mol */ } gk_amount;
+typedef struct gk_amount {
+    gk_real mol; /**< value in mol */
+} gk_amount;
 
 /** A molar mass in kilogram per mole (kg/mol). */
-typedef struct gk_molar_mass { gk_real kg_per_mol; /**< value in kg/mol */ } gk_molar_mass;
+typedef struct gk_molar_mass {
+    gk_real kg_per_mol; /**< value in kg/mol */
+} gk_molar_mass;
 
 /** A molar volume in cubic metre per mole (m3/mol). */
-typedef struct gk_molar_volume { gk_real m3_per_mol; /**< value in m3/mol */ } gk_molar_volume;
+typedef struct gk_molar_volume {
+    gk_real m3_per_mol; /**< value in m3/mol */
+} gk_molar_volume;
 
 /** A mass density in kilogram per cubic metre (kg/m3). */
-typedef struct gk_density { gk_real kg_per_m3; /**< value in kg/m3 */ } gk_density;
+typedef struct gk_density {
+    gk_real kg_per_m3; /**< value in kg/m3 */
+} gk_density;
 
 /** A speed in metre per second (m/s). */
-typedef struct gk_speed { gk_real m_per_s; /**< value in m/s */ } gk_speed;
+typedef struct gk_speed {
+    gk_real m_per_s; /**< value in m/s */
+} gk_speed;
 
 /** A mass in kilogram (kg). */
-typedef struct gk_mass { gk_real kg; /**< value in kg */ } gk_mass;
+typedef struct gk_mass {
+    gk_real kg; /**< value in kg */
+} gk_mass;
 
 /** A volume flow rate in cubic metre per second (m3/s). */
-typedef struct gk_volume_flow { gk_real m3_per_s; /**< value in m3/s */ } gk_volume_flow;
+typedef struct gk_volume_flow {
+    gk_real m3_per_s; /**< value in m3/s */
+} gk_volume_flow;
 
 /** A mass flow rate in kilogram per second (kg/s). */
-typedef struct gk_mass_flow { gk_real kg_per_s; /**< value in kg/s */ } gk_mass_flow;
-
+typedef struct gk_mass_flow {
+    gk_real kg_per_s; /**< value in kg/s */
+} gk_mass_flow;
 
 /**
  * Units known to gaskit. Each has one dimension; gk_convert() only converts within one.
@@ -59,30 +80,67 @@ typedef struct gk_mass_flow { gk_real kg_per_s; /**< value in kg/s */ } gk_mass_
  */
 typedef enum gk_unit {
     /* pressure */
-    GK_UNIT_PA, GK_UNIT_HPA, GK_UNIT_KPA, GK_UNIT_MPA, GK_UNIT_BAR, GK_UNIT_MBAR,
-    GK_UNIT_ATM, GK_UNIT_AT, GK_UNIT_TORR, GK_UNIT_MMHG, GK_UNIT_INHG, GK_UNIT_PSI,
+    GK_UNIT_PA,
+    GK_UNIT_HPA,
+    GK_UNIT_KPA,
+    GK_UNIT_MPA,
+    GK_UNIT_BAR,
+    GK_UNIT_MBAR,
+    GK_UNIT_ATM,
+    GK_UNIT_AT,
+    GK_UNIT_TORR,
+    GK_UNIT_MMHG,
+    GK_UNIT_INHG,
+    GK_UNIT_PSI,
     /* temperature */
-    GK_UNIT_K, GK_UNIT_DEGC, GK_UNIT_DEGF, GK_UNIT_DEGR,
+    GK_UNIT_K,
+    GK_UNIT_DEGC,
+    GK_UNIT_DEGF,
+    GK_UNIT_DEGR,
     /* volume */
-    GK_UNIT_M3, GK_UNIT_L, GK_UNIT_ML, GK_UNIT_FT3, GK_UNIT_IN3, GK_UNIT_GAL_US,
+    GK_UNIT_M3,
+    GK_UNIT_L,
+    GK_UNIT_ML,
+    GK_UNIT_FT3,
+    GK_UNIT_IN3,
+    GK_UNIT_GAL_US,
     /* amount */
-    GK_UNIT_MOL, GK_UNIT_MMOL, GK_UNIT_KMOL, GK_UNIT_LBMOL,
+    GK_UNIT_MOL,
+    GK_UNIT_MMOL,
+    GK_UNIT_KMOL,
+    GK_UNIT_LBMOL,
     /* molar mass */
-    GK_UNIT_KG_PER_MOL, GK_UNIT_G_PER_MOL,
+    GK_UNIT_KG_PER_MOL,
+    GK_UNIT_G_PER_MOL,
     /* molar volume */
-    GK_UNIT_M3_PER_MOL, GK_UNIT_L_PER_MOL, GK_UNIT_CM3_PER_MOL,
+    GK_UNIT_M3_PER_MOL,
+    GK_UNIT_L_PER_MOL,
+    GK_UNIT_CM3_PER_MOL,
     /* density */
-    GK_UNIT_KG_PER_M3, GK_UNIT_G_PER_L, GK_UNIT_G_PER_CM3, GK_UNIT_LB_PER_FT3,
+    GK_UNIT_KG_PER_M3,
+    GK_UNIT_G_PER_L,
+    GK_UNIT_G_PER_CM3,
+    GK_UNIT_LB_PER_FT3,
     /* speed */
-    GK_UNIT_M_PER_S, GK_UNIT_KM_PER_H, GK_UNIT_FT_PER_S,
+    GK_UNIT_M_PER_S,
+    GK_UNIT_KM_PER_H,
+    GK_UNIT_FT_PER_S,
     /* mass */
-    GK_UNIT_KG, GK_UNIT_G, GK_UNIT_LB,
+    GK_UNIT_KG,
+    GK_UNIT_G,
+    GK_UNIT_LB,
     /* volume flow */
-    GK_UNIT_M3_PER_S, GK_UNIT_M3_PER_H, GK_UNIT_L_PER_MIN, GK_UNIT_ML_PER_MIN,
+    GK_UNIT_M3_PER_S,
+    GK_UNIT_M3_PER_H,
+    GK_UNIT_L_PER_MIN,
+    GK_UNIT_ML_PER_MIN,
     GK_UNIT_FT3_PER_MIN,
     /* mass flow */
-    GK_UNIT_KG_PER_S, GK_UNIT_KG_PER_H, GK_UNIT_G_PER_MIN, GK_UNIT_LB_PER_H,
-    GK_UNIT_COUNT     /**< not a unit: the number of units */
+    GK_UNIT_KG_PER_S,
+    GK_UNIT_KG_PER_H,
+    GK_UNIT_G_PER_MIN,
+    GK_UNIT_LB_PER_H,
+    GK_UNIT_COUNT /**< not a unit: the number of units */
 } gk_unit;
 
 /**
