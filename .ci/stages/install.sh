@@ -14,15 +14,19 @@ warn=(-Wall -Wextra -Wpedantic -Wconversion -Wsign-conversion -Wshadow -Wdouble-
 scratch=$(mktemp -d)
 trap 'rm -rf "$scratch"' EXIT
 
-# 1. Without CMake.
+# 1. Without CMake (cc, and clang when installed).
 nsrc=$(ls lib/*.c | wc -l)
-for variant in "" "-DGK_REAL_IS_FLOAT=1"; do
-  mkdir -p "$scratch/obj"
-  # shellcheck disable=SC2086
-  (cd "$scratch/obj" && cc -std=c99 "${warn[@]}" $variant -I"$OLDPWD/include" -c "$OLDPWD"/lib/*.c)
-  rm -rf "$scratch/obj"
+compilers=(cc)
+if command -v clang >/dev/null; then compilers+=(clang); fi
+for compiler in "${compilers[@]}"; do
+  for variant in "" "-DGK_REAL_IS_FLOAT=1"; do
+    mkdir -p "$scratch/obj"
+    # shellcheck disable=SC2086
+    (cd "$scratch/obj" && $compiler -std=c99 "${warn[@]}" $variant -I"$OLDPWD/include" -c "$OLDPWD"/lib/*.c)
+    rm -rf "$scratch/obj"
+  done
 done
-echo "summary: install: cc -std=c99 -Iinclude -c lib/*.c ($nsrc files) compiles warning-free without CMake, double and -DGK_REAL_IS_FLOAT=1"
+echo "summary: install: <compiler> -std=c99 -Iinclude -c lib/*.c ($nsrc files) compiles warning-free without CMake with ${compilers[*]}, double and -DGK_REAL_IS_FLOAT=1"
 
 # 2. Installed package.
 [ -f build/CMakeCache.txt ] || cmake -B build -DGASKIT_WERROR=ON
@@ -46,6 +50,19 @@ export PKG_CONFIG_PATH="$prefix/lib/pkgconfig"
 gcc -std=c99 tests/install/consumer.c $(pkg-config --cflags --libs gaskit) -o build-install/consumer_pc
 LD_LIBRARY_PATH="$prefix/lib" build-install/consumer_pc
 echo "summary: install: headers, libgaskit.a, libgaskit.so.0, gaskit.pc and the CMake package work from a scratch prefix: find_package (shared, static) and pkg-config consumers pass; libm exported by name"
+
+# 2b. A static-only package (GASKIT_SHARED=OFF): gaskit::gaskit and gaskit::gaskit_static both exist.
+cmake -B build-install-lib-static -DGASKIT_SHARED=OFF -DGASKIT_TESTS=OFF -DGASKIT_EXAMPLES=OFF \
+      -DGASKIT_TOOLS=OFF -DGASKIT_WERROR=ON >/dev/null
+cmake --build build-install-lib-static -j2
+cmake --install build-install-lib-static --prefix "$scratch/static"
+[ ! -e "$scratch/static/lib/libgaskit.so" ] || { echo "install: GASKIT_SHARED=OFF installed a shared library"; exit 1; }
+rm -rf build-install-static
+cmake -S tests/install -B build-install-static -DCMAKE_PREFIX_PATH="$scratch/static" >/dev/null
+cmake --build build-install-static
+build-install-static/consumer
+build-install-static/consumer_static
+echo "summary: install: a static-only package (GASKIT_SHARED=OFF) gives gaskit::gaskit and gaskit::gaskit_static; both consumers pass"
 
 # 3. add_subdirectory.
 for precision in OFF ON; do
