@@ -228,8 +228,8 @@ static void air_is_the_iso_2533_pseudo_pure_gas(void **state) {
 static void water_critical_point_is_iapws(void **state) {
     (void)state;
     const gk_gas *w = must_find("water");
-    /* Critical point of water 647.096 K, 22.064 MPa (IAPWS-95 release, the IAPWS critical
-       parameters). */
+    /* Critical point of water 647.096 K, 22.064 MPa (IAPWS R2-83(1992), the release on the
+       critical-point values of ordinary and heavy water; also used by IAPWS-95 and IF97). */
     assert_rel(w->critical_temperature.k, 647.096, GK_TOL(1e-12, 1e-6));
     assert_rel(w->critical_pressure.pa, 22.064e6, GK_TOL(1e-12, 1e-6));
 }
