@@ -28,7 +28,8 @@ static gk_gas ref_gas(double omega) {
     return g;
 }
 
-/* Model constants (same sources as lib/eos.c: check-values.md) for the long double check. */
+/* Model constants (same sources as lib/eos.c: van der Waals from Tc, Pc; Redlich and Kwong 1949;
+   Soave 1972; Peng and Robinson 1976) for the long double check. */
 static void ref_ab(gk_eos eos, long double tr, long double pr, long double omega,
                    long double *a, long double *b, long double *u, long double *w) {
     long double m, s;
@@ -170,8 +171,9 @@ static void published_example_n_butane(void **state) {
    pressure. Peng-Robinson CO2 at 280 K (Tc = 304.1282 K, Pc = 7.3773 MPa, omega = 0.22394: Span
    and Wagner 1996, from memory). The saturation pressure of the model is found here by bisection
    on equal fugacity of the gas and liquid roots; it must lie near the measured vapour pressure of
-   CO2 at 280 K, 4.160 MPa (NIST Chemistry WebBook / Span-Wagner, from memory; Peng-Robinson
-   reproduces vapour pressures of simple non-polar fluids to about 1-2 %, tolerance 3 %). */
+   CO2 at 280 K, 4.160 MPa (Span and Wagner, J. Phys. Chem. Ref. Data 25 (1996) 1509, from
+   memory; Peng-Robinson reproduces vapour pressures of simple non-polar fluids to about 1-2 %,
+   tolerance 3 %). */
 static void stable_root_switches_at_saturation(void **state) {
     (void)state;
     gk_gas co2 = {"carbon dioxide", "CO2", {(gk_real)0.0440095}, {(gk_real)304.1282},
@@ -296,7 +298,7 @@ static void contract_solve(void **state) {
 
 /* Extreme magnitudes: p and T over the whole floating-point range, every model and root choice.
    GK_OK must come with finite, positive Z, Vm and phi; any other status must leave the sentinel
-   in place (error contract, API.md). */
+   in place (the error contract of gk_status, include/gaskit/base.h). */
 static void extreme_magnitudes(void **state) {
     (void)state;
     gk_gas g = ref_gas(0.3);

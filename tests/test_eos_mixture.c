@@ -5,7 +5,7 @@
  * against the same rules evaluated independently here in long double, and the error contract.
  *
  * Test gases (critical constants and acentric factors from memory, as published in Poling et al.
- * 5th ed. Appendix A and the NIST Chemistry WebBook): methane 190.56 K, 4.599 MPa, 0.011;
+ * 5th ed. Appendix A): methane 190.56 K, 4.599 MPa, 0.011;
  * ethane 305.32 K, 4.872 MPa, 0.099; carbon dioxide 304.13 K, 7.377 MPa, 0.224;
  * nitrogen 126.2 K, 3.398 MPa, 0.037.
  */
@@ -21,16 +21,18 @@ static const gk_gas CO2 = {"carbon dioxide", "CO2", {(gk_real)0.044009}, {(gk_re
 static const gk_gas N2 = {"nitrogen", "N2", {(gk_real)0.028013}, {(gk_real)126.2}, {(gk_real)3.398e6},
                           (gk_real)0.037, 0, 0, 0, 0};
 
-#define R_EXACT 8.314462618L /* CODATA 2018 (check-values.md) */
+/* CODATA 2018 printed value of R (10 digits; N_A k is 8.31446261815324, exact since SI 2019). */
+#define R_CODATA 8.314462618L
 
-/* Peng-Robinson a(T), b of a pure gas in SI, long double (constants: check-values.md). */
+/* Peng-Robinson a(T), b of a pure gas in SI, long double (constants: Peng and Robinson,
+   Ind. Eng. Chem. Fundam. 15 (1976) 59, from memory). */
 static void pr_ab(const gk_gas *g, long double t, long double *a, long double *b) {
     long double tc = (long double)g->critical_temperature.k, pc = (long double)g->critical_pressure.pa;
     long double w = (long double)g->acentric_factor;
     long double k = 0.37464L + 1.54226L * w - 0.26992L * w * w;
     long double s = 1.0L + k * (1.0L - sqrtl(t / tc));
-    *a = 0.45724L * R_EXACT * R_EXACT * tc * tc / pc * s * s;
-    *b = 0.07780L * R_EXACT * tc / pc;
+    *a = 0.45724L * R_CODATA * R_CODATA * tc * tc / pc * s * s;
+    *b = 0.07780L * R_CODATA * tc / pc;
 }
 
 /* Pressure of a Peng-Robinson mixture at Vm, T from the mixing rules, long double. */
@@ -44,7 +46,7 @@ static long double pr_mix_pressure(const gk_mixture *m, const double *kij, long 
             a += (long double)m->mole_fraction[i] * (long double)m->mole_fraction[j] * sqrtl(ai[i] * ai[j]) *
                  (1.0L - (kij ? (long double)kij[i * n + j] : 0.0L));
     }
-    return R_EXACT * t / (vm - b) - a / (vm * vm + 2.0L * b * vm - b * b);
+    return R_CODATA * t / (vm - b) - a / (vm * vm + 2.0L * b * vm - b * b);
 }
 
 static gk_mixture natural_gas(void) {
