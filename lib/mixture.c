@@ -1,8 +1,10 @@
 /*
  * mixture.c - composition text, normalization, mean molar mass, and the shared composition
- * check (mixture_internal.h). The mixture equation of state lives in its own module.
+ * check (mixture_internal.h). A mixture's equation of state goes through the fluid layer
+ * (fluid.c) and the mixing rules of the model layer (eos.c).
  */
 #include "mixture_internal.h"
+#include "gas_internal.h"
 #include "number_parse.h"
 
 /* Longest composition text accepted, in characters before the NUL (documented in mixture.h).
@@ -30,6 +32,16 @@ static gk_real gk__compensated_sum(const gk_real *x, size_t n) {
     return s + c;
 }
 
+gk_real gk__mixture_molar_mass(const gk_mixture *mix) {
+    gk_real s = GK_LIT(0.0);
+    gk_real c = GK_LIT(0.0);
+    size_t i;
+    for (i = 0; i < mix->count; ++i) {
+        gk__neumaier_add(&s, &c, mix->mole_fraction[i] * mix->gas[i]->molar_mass.kg_per_mol);
+    }
+    return s + c;
+}
+
 gk_status gk__mixture_check(const gk_mixture *mix) {
     size_t i;
     gk_real sum;
@@ -54,18 +66,18 @@ gk_status gk__mixture_check(const gk_mixture *mix) {
 
 /* ------------------------------------------------------------------ text */
 
-static int gk__is_space(char c) {
-    return (c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\v' || c == '\f') ? 1 : 0;
+static bool gk__is_space(char c) {
+    return c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\v' || c == '\f';
 }
 
 /* Does text[pos .. len) start with the lower-case word w, without regard to ASCII case? */
-static int gk__starts_with_ci(const char *text, size_t pos, size_t len, const char *w) {
+static bool gk__starts_with_ci(const char *text, size_t pos, size_t len, const char *w) {
     while (*w != '\0') {
-        if (pos >= len || gk__ascii_lower(text[pos]) != *w) { return 0; }
+        if (pos >= len || gk__ascii_lower(text[pos]) != *w) { return false; }
         ++pos;
         ++w;
     }
-    return 1;
+    return true;
 }
 
 static size_t gk__skip_spaces(const char *text, size_t pos, size_t len) {
@@ -299,18 +311,13 @@ gk_status gk_mixture_normalize(gk_mixture *mix) {
 }
 
 gk_status gk_mixture_molar_mass(const gk_mixture *mix, gk_molar_mass *out) {
-    gk_real terms[GK_MIXTURE_MAX];
     gk_real m;
-    size_t i;
     gk_status st;
 
     if (mix == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__mixture_check(mix);
     if (st != GK_OK) { return st; }
-    for (i = 0; i < mix->count; ++i) {
-        terms[i] = mix->mole_fraction[i] * mix->gas[i]->molar_mass.kg_per_mol;
-    }
-    m = gk__compensated_sum(terms, mix->count);
+    m = gk__mixture_molar_mass(mix);
     if (!gk_positive(m)) { return GK_ERR_RANGE; /* overflow of absurd molar masses */ }
     out->kg_per_mol = m;
     return GK_OK;

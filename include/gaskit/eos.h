@@ -28,11 +28,18 @@ typedef struct gk_vdw {
     gk_real b; /**< covolume, m^3 mol^-1 */
 } gk_vdw;
 
-/** Which root of a cubic equation of state to return. */
+/**
+ * Which root of a cubic equation of state to return (an input: the first three values), and
+ * which branch a result lies on (gk_eos_result.branch: GAS, LIQUID or SUPERCRITICAL).
+ */
 typedef enum gk_root {
     GK_ROOT_STABLE, /**< the root with the lower fugacity (lower Gibbs energy) */
     GK_ROOT_GAS,    /**< the largest real root above the covolume */
-    GK_ROOT_LIQUID  /**< the smallest real root above the covolume */
+    GK_ROOT_LIQUID, /**< the smallest real root above the covolume */
+    /** Output only: a lone root above the model's critical temperature (for a mixture, its
+     *  pseudo-critical temperature sum x_i Tc_i), neither gas nor liquid. As an input it is
+     *  GK_ERR_ARGUMENT. */
+    GK_ROOT_SUPERCRITICAL
 } gk_root;
 
 /**
@@ -114,8 +121,11 @@ typedef struct gk_eos_result {
      */
     int root_count;
     gk_real z_roots[3]; /**< those roots of Z, ascending; unused entries 0 */
-    /** GK_ROOT_GAS or GK_ROOT_LIQUID: the branch returned. With a lone root: GK_ROOT_LIQUID when
-     * it is denser than the model's critical density (Z/B < Zc/Omega_b), else GK_ROOT_GAS
+    /** The branch returned: GK_ROOT_GAS or GK_ROOT_LIQUID for the root chosen among two or
+     * three. A lone root is GK_ROOT_SUPERCRITICAL at T above the model's critical temperature
+     * (for a mixture the pseudo-critical sum x_i Tc_i; Tc = 8 a / (27 R b) for van der Waals
+     * with the gas's handbook a, b), else GK_ROOT_LIQUID when it is denser than the model's
+     * critical density (Z/B < Zc/Omega_b), else GK_ROOT_GAS. The ideal gas: GK_ROOT_GAS.
      */
     gk_root branch;
 } gk_eos_result;

@@ -1,5 +1,5 @@
 /*
- * gases.c - the built-in gas table and its lookup by formula or name.
+ * gas.c - the built-in gas table and its lookup by formula or name.
  *
  * Conventions
  * - name: lower-case English name, IUPAC spelling where the trade uses it ("sulfur dioxide"),
@@ -47,7 +47,7 @@
  *           value engineers use as "the" molecular diameter in mean-free-path estimates; it
  *           is not a rigid-sphere diameter. 0 where the gas is not in that table.
  */
-#include "mixture_internal.h"
+#include "gas_internal.h"
 
 /* Most aliases per row. */
 #define GK__ALIAS_MAX 3
@@ -329,18 +329,18 @@ static const gk__gas_row gk__gases[] = {
 
 /* Does text[0 .. n) equal the NUL-terminated b, exactly (fold = 0) or without regard to ASCII
    case (fold = 1)? Reads no further than n in text and than its NUL in b. */
-static int gk__same_n(const char *text, size_t n, const char *b, int fold) {
+static bool gk__same_n(const char *text, size_t n, const char *b, bool fold) {
     size_t i;
     for (i = 0; i < n; ++i) {
         char ca = text[i], cb = b[i];
-        if (cb == '\0') { return 0; }
+        if (cb == '\0') { return false; }
         if (fold) {
             ca = gk__ascii_lower(ca);
             cb = gk__ascii_lower(cb);
         }
-        if (ca != cb) { return 0; }
+        if (ca != cb) { return false; }
     }
-    return (b[n] == '\0') ? 1 : 0;
+    return b[n] == '\0';
 }
 
 gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out) {
@@ -348,19 +348,19 @@ gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out) {
     const char *alias;
     /* Formulas first, exactly: "CO" must never fall through to a case-blind match. */
     for (i = 0; i < GK__GAS_COUNT; ++i) {
-        if (gk__same_n(text, n, gk__gases[i].gas.formula, 0)) {
+        if (gk__same_n(text, n, gk__gases[i].gas.formula, false)) {
             *out = &gk__gases[i].gas;
             return GK_OK;
         }
     }
     for (i = 0; i < GK__GAS_COUNT; ++i) {
-        if (gk__same_n(text, n, gk__gases[i].gas.name, 1)) {
+        if (gk__same_n(text, n, gk__gases[i].gas.name, true)) {
             *out = &gk__gases[i].gas;
             return GK_OK;
         }
         alias = gk__gases[i].aliases;
         while (alias != NULL && *alias != '\0') {
-            if (gk__same_n(text, n, alias, 1)) {
+            if (gk__same_n(text, n, alias, true)) {
                 *out = &gk__gases[i].gas;
                 return GK_OK;
             }
@@ -374,7 +374,10 @@ gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out) {
 gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out) {
     size_t n = 0;
     if (name_or_formula == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
-    while (name_or_formula[n] != '\0') { ++n; }
+    /* bounded: reads at most GK_GAS_KEY_MAX + 1 characters, never past the NUL; a longer key
+       names no gas */
+    while (n <= GK_GAS_KEY_MAX && name_or_formula[n] != '\0') { ++n; }
+    if (n > GK_GAS_KEY_MAX) { return GK_ERR_NOT_FOUND; }
     return gk__gas_find_n(name_or_formula, n, out);
 }
 
