@@ -64,7 +64,7 @@ typedef struct gk_gas {
 GK_API gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out);
 
 /**
- * @brief Number of gases in the built-in table (31 in version 0.1).
+ * @brief Number of gases in the built-in table (31 in version 0.2).
  * @return The count; gk_gas_at() accepts 0 ... count - 1.
  */
 GK_API size_t gk_gas_count(void);

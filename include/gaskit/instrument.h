@@ -69,24 +69,12 @@ GK_API gk_status gk_flow_from_reference(gk_eos eos, gk_fluid fluid, gk_volume_fl
                                         gk_volume_flow *out);
 
 /**
- * @brief Mass flow of an actual volume flow at p, T: w = q rho(p, T).
- *
- * The API contract names this function gk_mass_flow, but in C that name is already the
- * typedef of the mass-flow quantity (gk_mass_flow), and a function and a typedef cannot share
- * an identifier. The linked symbol is therefore gk_flow_to_mass; the function-like macro
- * gk_mass_flow() below keeps the contract's call syntax working from C and C++ source (it
- * expands only where the name is followed by '(', so the type name is unaffected).
- * Foreign callers may bind either symbol: on ELF targets built with GCC or clang the library
- * also exports gk_mass_flow, a thin wrapper (lib/contract_names.c).
- * Density rho = p M / (Z R T) with M the molar mass of the gas or the mixture.
+ * @brief Mass flow of an actual volume flow at p, T: w = q rho(p, T), rho = p M / (Z R T)
+ *        with M the molar mass of the gas or the mixture.
  * @retval As gk_flow_to_reference() (liquid at p, T: GK_ERR_RANGE).
  */
 GK_API gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
                                  gk_temperature t, gk_mass_flow *out);
-
-/** Contract spelling of gk_flow_to_mass() (see there). */
-#define gk_mass_flow(eos, fluid, actual, p, t, out) \
-  gk_flow_to_mass((eos), (fluid), (actual), (p), (t), (out))
 
 /** Contents of a vessel. */
 typedef struct gk_contents {
