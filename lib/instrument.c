@@ -263,7 +263,7 @@ gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature 
     }
     if (k == n && n >= GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; /* no room to append water */ }
     /* Every check has passed: write *wet entry by entry, each read from dry before it is
-       written, so wet may be the same object as dry (no copy of a gk_mixture on the stack). */
+       written, so wet may be the same object as dry. */
     scale = GK_LIT(1.0) - xw;
     for (i = 0; i < GK_MIXTURE_MAX; ++i) {
         const gk_gas *g = dry->gas[i];

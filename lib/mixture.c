@@ -191,7 +191,7 @@ typedef struct mix_tally {
 
 /* Is gas among the first count components of the text (already read without error)? */
 static bool listed_before(const char *text, size_t len, size_t count, const gk_gas *gas) {
-    mix_item it;
+    mix_item it = { NULL, { 0u, 0, 0 }, 0, false, 0u };
     size_t i, q = 0;
     for (i = 0; i < count; ++i) {
         it.gas = NULL;
@@ -225,7 +225,7 @@ static gk_status tally_item(const char *text, size_t len, const mix_item *it, mi
 /* Pass 1: every check of the text, the first error from left to right, then the sum; *rest is
    the balance fraction (0 without a balance). */
 static gk_status check_text(const char *text, size_t len, mix_tally *tally, gk_real *rest) {
-    mix_item it;
+    mix_item it = { NULL, { 0u, 0, 0 }, 0, false, 0u };
     size_t pos = 0;
     gk_real sum;
     gk_status st;
@@ -251,7 +251,7 @@ static gk_status check_text(const char *text, size_t len, mix_tally *tally, gk_r
 /* Pass 2 over a checked text: the same components again, into *out (cannot fail). */
 static void write_mixture(const char *text, size_t len, const mix_tally *tally, gk_real rest,
                           gk_mixture *out) {
-    mix_item it;
+    mix_item it = { NULL, { 0u, 0, 0 }, 0, false, 0u };
     size_t i, pos = 0;
     for (i = 0; i < GK_MIXTURE_MAX; ++i) {
         gk_real x = GK_LIT(0.0);
