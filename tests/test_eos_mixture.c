@@ -181,11 +181,34 @@ static void error_contract(void **state) {
     assert_memory_equal(&r, &keep, sizeof r);
 }
 
+/* Order of the statuses (mixture.h): the mixture is checked before the state, so an input with
+   a fault in each reports the mixture's; one fault reports its own. */
+static void fluid_checked_before_state(void **state) {
+    (void)state;
+    gk_mixture m = natural_gas();
+    gk_eos_result r;
+    const double bad_kij[16] = {0, 2, 0, 0, 2, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0}; /* |k| > 1 */
+    gk_real kij[16];
+    gk_pressure p = {(gk_real)5e6}, p_bad = {(gk_real)-1.0};
+    gk_temperature t = {(gk_real)300.0};
+    for (int i = 0; i < 16; ++i) kij[i] = (gk_real)bad_kij[i];
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &m, kij, p, t, GK_ROOT_STABLE, &r),
+                  GK_ERR_DOMAIN);
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &m, kij, p, t, (gk_root)7, &r),
+                  GK_ERR_DOMAIN);
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &m, NULL, p, t, (gk_root)7, &r),
+                  GK_ERR_ARGUMENT);
+    m.mole_fraction[0] = (gk_real)0.5; /* sum 0.6 */
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &m, NULL, p_bad, t, (gk_root)7, &r),
+                  GK_ERR_COMPOSITION);
+}
+
 int main(void) {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(pure_limits),
         cmocka_unit_test(mixing_rules_independent_check),
         cmocka_unit_test(error_contract),
+        cmocka_unit_test(fluid_checked_before_state),
     };
     return cmocka_run_group_tests_name("eos_mixture", tests, NULL, NULL);
 }

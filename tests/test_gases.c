@@ -294,6 +294,22 @@ static void graham_ratio_of_hydrogen_to_oxygen(void **state) {
     assert_rel(ratio, 3.98, 1e-3);
 }
 
+/* The scan of a key is bounded (gas.h): a text of GK_GAS_KEY_MAX + 1 characters without a NUL
+   within them is not found and is read no further (AddressSanitizer would catch a read past the
+   array); every key of the table fits. */
+static void key_scan_is_bounded(void **state) {
+    (void)state;
+    char longest[GK_GAS_KEY_MAX + 1];
+    const gk_gas *g = NULL;
+    memset(longest, 'N', sizeof longest);
+    assert_status(gk_gas_find(longest, &g), GK_ERR_NOT_FOUND);
+    assert_null(g);
+    for (size_t i = 0; i < gk_gas_count(); ++i) {
+        assert_true(strlen(gk_gas_at(i)->name) <= GK_GAS_KEY_MAX);
+        assert_true(strlen(gk_gas_at(i)->formula) <= GK_GAS_KEY_MAX);
+    }
+}
+
 int main(void) {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(finds_by_exact_formula),
@@ -311,6 +327,7 @@ int main(void) {
         cmocka_unit_test(critical_data_reproduce_handbook_van_der_waals),
         cmocka_unit_test(heat_capacity_ratios_follow_kinetic_theory),
         cmocka_unit_test(graham_ratio_of_hydrogen_to_oxygen),
+        cmocka_unit_test(key_scan_is_bounded),
     };
     return cmocka_run_group_tests_name("gases", tests, NULL, NULL);
 }
