@@ -25,8 +25,8 @@ size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk_real *
             /* NAN is a float constant (C99 7.12): the cast keeps -Wdouble-promotion quiet */
             out_kg_per_m3[i] = (s == GK_OK) ? rho.kg_per_m3 : (gk_real)NAN;
         }
-        if (status_out != NULL) status_out[i] = s;
-        if (s == GK_OK) ++ok;
+        if (status_out != NULL) { status_out[i] = s; }
+        if (s == GK_OK) { ++ok; }
     }
     return ok;
 }

@@ -7,15 +7,11 @@
 #include "cubic.h"
 
 #if GK_REAL_IS_FLOAT
-#  define gk_frexp frexpf
-#  define gk_ldexp ldexpf
 /* Scale when |z| could pass 2^16: then z^3 stays inside 2^+-48, far from FLT_MAX (2^128) and
    from the subnormals (2^-126) (common practice: keep a margin for products of two terms). */
 #  define CUBIC_SCALE_EXP 16
 #  define CUBIC_BIG GK_LIT(65536.0) /* 2^16 */
 #else
-#  define gk_frexp frexp
-#  define gk_ldexp ldexp
 /* Scale when |z| could pass 2^64 (z^3 inside 2^+-192, far from 2^+-1022). */
 #  define CUBIC_SCALE_EXP 64
 #  define CUBIC_BIG GK_LIT(18446744073709551616.0) /* 2^64 */
@@ -27,7 +23,9 @@
 /* 1/3 rounded (one rounding more than a division; z1, z2 only isolate the roots). */
 #define CUBIC_THIRD (GK_LIT(1.0) / GK_LIT(3.0))
 
-typedef struct cubic_poly { gk_real c2, c1, c0; } cubic_poly;
+typedef struct cubic_poly {
+    gk_real c2, c1, c0;
+} cubic_poly;
 
 /* f(z) by Horner's rule: rounding error below 3u sum |c_i||z|^i (Higham, Accuracy and Stability
    of Numerical Algorithms, 2nd ed., section 5.1). */
@@ -55,24 +53,24 @@ static gk_real cubic_halley(const cubic_poly *p, gk_real x, gk_real lo, gk_real 
     int i;
     for (i = 0; i < GK_CUBIC_ITER_MAX; ++i) {
         gk_real d1, d2, den, dx, xn, fn;
-        if (!cubic_nonzero(fx)) break;
+        if (!cubic_nonzero(fx)) { break; }
         d1 = cubic_df(p, x);
         d2 = GK_LIT(6.0) * x + GK_LIT(2.0) * p->c2;
         den = d1 * d1 - GK_LIT(0.5) * fx * d2;
-        if (!cubic_nonzero(den)) break;
+        if (!cubic_nonzero(den)) { break; }
         dx = fx * d1 / den;
         xn = x - dx;
         if (!(xn > lo && xn < hi)) {
             /* guarded: stay inside the isolating interval */
             xn = (xn <= lo) ? GK_LIT(0.5) * (x + lo) : GK_LIT(0.5) * (x + hi);
-            if (!(xn > lo && xn < hi)) break;
+            if (!(xn > lo && xn < hi)) { break; }
         } else if (gk_fabs(dx) * dx * dx * (d2 * d2 + GK_LIT(4.0) * gk_fabs(d1)) <=
                    GK_LIT(4.0) * CUBIC_EPS * d1 * d1 * gk_fabs(xn)) {
             x = xn; /* the next correction would be below one rounding unit */
             break;
         }
         fn = cubic_f(p, xn);
-        if (i > 0 && !(gk_fabs(fn) < gk_fabs(fx))) break; /* rounding level reached at x */
+        if (i > 0 && !(gk_fabs(fn) < gk_fabs(fx))) { break; /* rounding level reached at x */ }
         x = xn;
         fx = fn;
     }
@@ -106,9 +104,9 @@ static int cubic_descend(const cubic_poly *p, gk_real x, gk_real s, gk_real *roo
     int i;
     for (i = 0; i < GK_CUBIC_ITER_MAX; ++i) {
         gk_real d1, d1s, d2h, fd, num, den, dx, dx2, xn, fn;
-        if (!cubic_nonzero(fx)) break;
+        if (!cubic_nonzero(fx)) { break; }
         d1 = cubic_df(p, x);
-        if (!(d1 > GK_LIT(0.0))) return 0;
+        if (!(d1 > GK_LIT(0.0))) { return 0; }
         d2h = GK_LIT(3.0) * x + p->c2; /* f''/2 */
         fd = fx * d2h;
         d1s = d1 * d1;
@@ -116,7 +114,7 @@ static int cubic_descend(const cubic_poly *p, gk_real x, gk_real s, gk_real *roo
         den = d1 * (d1s - GK_LIT(2.0) * fd) + fx * fx;
         dx = (den > GK_LIT(0.0)) ? num / den : fx / d1;
         xn = x - dx;
-        if (!(xn > s)) return 0;
+        if (!(xn > s)) { return 0; }
         dx2 = dx * dx;
         if (den > GK_LIT(0.0) && GK_LIT(16.0) * gk_fabs(fd) <= d1s &&
             GK_LIT(16.0) * fx * fx <= d1s * d1 &&
@@ -126,7 +124,7 @@ static int cubic_descend(const cubic_poly *p, gk_real x, gk_real s, gk_real *roo
             break;
         }
         fn = cubic_f(p, xn);
-        if (i > 0 && !(gk_fabs(fn) < gk_fabs(fx))) break; /* rounding level reached at x */
+        if (i > 0 && !(gk_fabs(fn) < gk_fabs(fx))) { break; /* rounding level reached at x */ }
         x = xn;
         fx = fn;
     }
@@ -137,9 +135,20 @@ static int cubic_descend(const cubic_poly *p, gk_real x, gk_real s, gk_real *roo
 /* Scale exponent e with |c2|/2^e, |c1|/2^2e, |c0|/2^3e of order one (only called when needed). */
 static int cubic_scale_exponent(gk_real c2, gk_real c1, gk_real c0) {
     int e = -10000, k;
-    if (cubic_nonzero(c2)) { (void)gk_frexp(c2, &k); e = k; }
-    if (cubic_nonzero(c1)) { (void)gk_frexp(c1, &k); k = k / 2; if (k > e) e = k; }
-    if (cubic_nonzero(c0)) { (void)gk_frexp(c0, &k); k = k / 3; if (k > e) e = k; }
+    if (cubic_nonzero(c2)) {
+        (void)gk_frexp(c2, &k);
+        e = k;
+    }
+    if (cubic_nonzero(c1)) {
+        (void)gk_frexp(c1, &k);
+        k = k / 2;
+        if (k > e) { e = k; }
+    }
+    if (cubic_nonzero(c0)) {
+        (void)gk_frexp(c0, &k);
+        k = k / 3;
+        if (k > e) { e = k; }
+    }
     return e == -10000 ? 0 : e;
 }
 
@@ -158,7 +167,7 @@ static int cubic_isolate(const cubic_poly *p, gk_real lo, gk_real hi, int have_h
 
     /* 4. critical points: 3 z^2 + 2 c2 z + c1 = 0, z = (-c2 +- sqrt(D)) / 3, D = c2^2 - 3 c1 */
     dd = c2 * c2 - GK_LIT(3.0) * c1;
-    if (!gk_finite(dd)) return -1;
+    if (!gk_finite(dd)) { return -1; }
     if (dd > GK_LIT(0.0)) {
         sd = gk_sqrt(dd);
         /* cancellation-free: the root of larger magnitude first, the other from the product */
@@ -184,13 +193,13 @@ static int cubic_isolate(const cubic_poly *p, gk_real lo, gk_real hi, int have_h
                 gk_real up;
                 if (have_hi) {
                     x0 = hstep;
-                    if (!(x0 > z2)) x0 = (hi > z2) ? hi : z2 + gk_sqrt(-f2 / sd);
+                    if (!(x0 > z2)) { x0 = (hi > z2) ? hi : z2 + gk_sqrt(-f2 / sd); }
                 } else {
                     x0 = z2 + gk_sqrt(-f2 / sd);
                 }
                 /* an upper end beyond the root also when the caller's estimate is below it */
                 up = x0 + (x0 - z2) + GK_LIT(1.0);
-                if (have_hi && hi > x0) up = hi + (hi - z2) + GK_LIT(1.0);
+                if (have_hi && hi > x0) { up = hi + (hi - z2) + GK_LIT(1.0); }
                 rbig = cubic_halley(p, x0, z2, up);
             }
             f1 = cubic_f(p, z1); /* local maximum */
@@ -212,7 +221,7 @@ static int cubic_isolate(const cubic_poly *p, gk_real lo, gk_real hi, int have_h
                 gk_real e0 = cubic_nonzero(rbig) ? -p->c0 / rbig : c1;
                 gk_real disc = e1 * e1 - GK_LIT(4.0) * e0;
                 gk_real q, qa, qb, x0l, x0m;
-                if (disc < GK_LIT(0.0)) disc = GK_LIT(0.0);
+                if (disc < GK_LIT(0.0)) { disc = GK_LIT(0.0); }
                 q = GK_LIT(-0.5) * (e1 + gk_copysign(gk_sqrt(disc), e1));
                 qa = q;
                 qb = cubic_nonzero(q) ? e0 / q : q;
@@ -223,12 +232,12 @@ static int cubic_isolate(const cubic_poly *p, gk_real lo, gk_real hi, int have_h
                     r[0] = z1;
                     r[1] = z1;
                 } else {
-                    if (!(x0l < z1)) x0l = z1 - gk_sqrt(f1 / sd); /* below the smallest root */
+                    if (!(x0l < z1)) { x0l = z1 - gk_sqrt(f1 / sd); /* below the smallest root */ }
                     r[0] = cubic_halley(p, x0l, x0l - (z1 - x0l) - GK_LIT(1.0), z1);
                     if (!cubic_nonzero(f2)) {
                         r[1] = z2;
                     } else {
-                        if (!(x0m > z1 && x0m < z2)) x0m = GK_LIT(0.5) * (z1 + z2);
+                        if (!(x0m > z1 && x0m < z2)) { x0m = GK_LIT(0.5) * (z1 + z2); }
                         r[1] = cubic_halley(p, x0m, z1, z2);
                     }
                 }
@@ -236,7 +245,7 @@ static int cubic_isolate(const cubic_poly *p, gk_real lo, gk_real hi, int have_h
             }
         }
         /* one real root, below z1 (where f is concave and increasing): start below it */
-        if (z1 <= lo) return 0;
+        if (z1 <= lo) { return 0; }
         f1 = cubic_f(p, z1);
         {
             gk_real x0 = z1 - gk_sqrt(f1 / sd);
@@ -263,7 +272,7 @@ static int cubic_isolate(const cubic_poly *p, gk_real lo, gk_real hi, int have_h
             /* no bound known: the distance to the root is below cbrt|f(s)| and |f(s)|/f'(s) */
             gk_real ds = c1 - c2 * c2 * CUBIC_THIRD; /* f'(s) = -D/3 >= 0 */
             gk_real dist = gk_cbrt(gk_fabs(fs));
-            if (ds > GK_LIT(0.0) && gk_fabs(fs) / ds < dist) dist = gk_fabs(fs) / ds;
+            if (ds > GK_LIT(0.0) && gk_fabs(fs) / ds < dist) { dist = gk_fabs(fs) / ds; }
             if (fs < GK_LIT(0.0)) {
                 gk_real x0 = s + dist;
                 r[0] = cubic_halley(p, x0, s, x0 + dist + GK_LIT(1.0));
@@ -279,14 +288,14 @@ static int cubic_isolate(const cubic_poly *p, gk_real lo, gk_real hi, int have_h
 int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, gk_real guess,
                     gk_real z[3]) {
     cubic_poly p;
-    gk_real r[3] = {GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0)};
+    gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
     gk_real big = CUBIC_BIG;
     gk_real a2 = gk_fabs(c2), a1 = gk_fabs(c1), a0 = gk_fabs(c0);
     gk_real hstep = hi, s, fs, dd, rknown = GK_LIT(0.0);
     int n = -2, e = 0, i, out, have_known = 0;
     int have_hi = (hi > lo) ? 1 : 0;
 
-    if (!gk_finite(c2) || !gk_finite(c1) || !gk_finite(c0) || isnan(lo) || isnan(hi)) return -1;
+    if (!gk_finite(c2) || !gk_finite(c1) || !gk_finite(c0) || isnan(lo) || isnan(hi)) { return -1; }
 
     /* 1. scaling by a power of two (exact) when z^3 could over- or underflow */
     if (a2 > big || a1 > big * big || a0 > big * big * big ||
@@ -318,7 +327,7 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
         gk_real num = fh * (dh * dh - GK_LIT(0.5) * fh * d2h);
         gk_real den = dh * (dh * dh - fh * d2h) + fh * fh;
         hstep = (fh > GK_LIT(0.0) && dh > GK_LIT(0.0) && den > GK_LIT(0.0)) ? hi - num / den : hi;
-        if (!(hstep <= hi)) hstep = hi;
+        if (!(hstep <= hi)) { hstep = hi; }
     }
 
     /* 3. f(s) < 0: the largest root lies right of s (f(z2) <= f(s) < 0 when there are critical
@@ -353,18 +362,18 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
         z[2] = GK_LIT(0.0);
         return 1;
     }
-    if (n == -2) n = cubic_isolate(&p, lo, hi, have_hi, hstep, have_known, rknown, r);
-    if (n < 0) return -1;
+    if (n == -2) { n = cubic_isolate(&p, lo, hi, have_hi, hstep, have_known, rknown, r); }
+    if (n < 0) { return -1; }
 
     /* undo the scaling, keep the roots above lo, drop repeated values */
     out = 0;
     for (i = 0; i < n; ++i) {
-        if (!gk_finite(r[i])) return -1; /* before z[] is written */
+        if (!gk_finite(r[i])) { return -1; /* before z[] is written */ }
     }
     for (i = 0; i < n; ++i) {
         gk_real v = r[i];
-        if (!(v > lo)) continue;
-        if (out > 0 && !(v > r[out - 1])) continue; /* equal to the previous one */
+        if (!(v > lo)) { continue; }
+        if (out > 0 && !(v > r[out - 1])) { continue; /* equal to the previous one */ }
         r[out++] = v; /* out <= i: compacts r[] in place */
     }
     for (i = 0; i < 3; ++i) {

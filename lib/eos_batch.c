@@ -16,9 +16,11 @@ size_t gk_eos_density_batch(gk_eos eos, const gk_gas *gas, size_t count, const g
             t.k = t_k[i];
             st = gk_eos_density(eos, gas, p, t, &rho);
         }
-        if (out_kg_per_m3 != NULL) out_kg_per_m3[i] = (st == GK_OK) ? rho.kg_per_m3 : (gk_real)NAN;
-        if (status_out != NULL) status_out[i] = st;
-        if (st == GK_OK) ++ok;
+        if (out_kg_per_m3 != NULL) {
+            out_kg_per_m3[i] = (st == GK_OK) ? rho.kg_per_m3 : (gk_real)NAN;
+        }
+        if (status_out != NULL) { status_out[i] = st; }
+        if (st == GK_OK) { ++ok; }
     }
     return ok;
 }

@@ -24,12 +24,8 @@
 #include "gk_internal.h"
 
 #if GK_REAL_IS_FLOAT
-#  define gk_frexp frexpf
-#  define gk_ldexp ldexpf
 #  define GK_REAL_MIN_NORMAL 1.17549435e-38f /* FLT_MIN = 2^-126, IEEE 754 binary32 */
 #else
-#  define gk_frexp frexp
-#  define gk_ldexp ldexp
 #  define GK_REAL_MIN_NORMAL 2.2250738585072014e-308 /* DBL_MIN = 2^-1022, IEEE 754 binary64 */
 #endif
 
@@ -39,8 +35,8 @@
 /* GK_OK when x is finite and either exactly 0 or of normal magnitude; GK_ERR_RANGE otherwise. */
 static inline gk_status gk_check_normal(gk_real x) {
     gk_real a = gk_fabs(x);
-    if (!gk_finite(x)) return GK_ERR_RANGE;
-    if (a > GK_LIT(0.0) && a < GK_REAL_MIN_NORMAL) return GK_ERR_RANGE;
+    if (!gk_finite(x)) { return GK_ERR_RANGE; }
+    if (a > GK_LIT(0.0) && a < GK_REAL_MIN_NORMAL) { return GK_ERR_RANGE; }
     return GK_OK;
 }
 
@@ -53,17 +49,25 @@ static inline gk_status gk_check_normal(gk_real x) {
 static inline gk_real gk_scaled_bound(int count) {
 #if GK_REAL_IS_FLOAT
     switch (count) {
-    case 1:  return GK_LIT(0x1p62);
-    case 2:  return GK_LIT(0x1p31);
-    case 3:  return GK_LIT(0x1p20);
-    default: return GK_LIT(0x1p15);
+        case 1:
+            return GK_LIT(0x1p62);
+        case 2:
+            return GK_LIT(0x1p31);
+        case 3:
+            return GK_LIT(0x1p20);
+        default:
+            return GK_LIT(0x1p15);
     }
 #else
     switch (count) {
-    case 1:  return GK_LIT(0x1p510);
-    case 2:  return GK_LIT(0x1p255);
-    case 3:  return GK_LIT(0x1p170);
-    default: return GK_LIT(0x1p127);
+        case 1:
+            return GK_LIT(0x1p510);
+        case 2:
+            return GK_LIT(0x1p255);
+        case 3:
+            return GK_LIT(0x1p170);
+        default:
+            return GK_LIT(0x1p127);
     }
 #endif
 }
@@ -85,10 +89,10 @@ static inline gk_status gk_scaled_product(const gk_real *num, const gk_real *den
     int expo = 0;
     int i, in_range = 1;
     for (i = 0; i < count; ++i) {
-        if (num[i] > hi || num[i] < lo || den[i] > hi || den[i] < lo) in_range = 0;
+        if (num[i] > hi || num[i] < lo || den[i] > hi || den[i] < lo) { in_range = 0; }
     }
     if (in_range) {
-        for (i = 0; i < count; ++i) mant *= num[i] / den[i];
+        for (i = 0; i < count; ++i) { mant *= num[i] / den[i]; }
         *out = mant;
         return GK_OK;
     }
@@ -102,7 +106,7 @@ static inline gk_status gk_scaled_product(const gk_real *num, const gk_real *den
     {
         /* exponents of finite values stay within a few thousand: no int overflow */
         gk_real r = gk_ldexp(mant, expo);
-        if (!(r > GK_LIT(0.0)) || gk_check_normal(r) != GK_OK) return GK_ERR_RANGE;
+        if (!(r > GK_LIT(0.0)) || gk_check_normal(r) != GK_OK) { return GK_ERR_RANGE; }
         *out = r;
     }
     return GK_OK;
@@ -113,9 +117,9 @@ static inline gk_status gk_scaled_product(const gk_real *num, const gk_real *den
 static inline gk_status gk_scaled_eval(const gk_real *num, const gk_real *den, int count,
                                        gk_real *out) {
     int i;
-    if (out == NULL) return GK_ERR_ARGUMENT;
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     for (i = 0; i < count; ++i) {
-        if (!gk_positive(num[i]) || !gk_positive(den[i])) return GK_ERR_DOMAIN;
+        if (!gk_positive(num[i]) || !gk_positive(den[i])) { return GK_ERR_DOMAIN; }
     }
     return gk_scaled_product(num, den, count, out);
 }

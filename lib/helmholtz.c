@@ -38,6 +38,14 @@
  */
 #include "helmholtz.h"
 
+/* Keeps a helper out of line so its locals are not in the frame under the root searches
+   (firmware stack budget); only a hint, empty without GCC or Clang. */
+#if defined(__GNUC__)
+#  define HZ_NOINLINE __attribute__((noinline))
+#else
+#  define HZ_NOINLINE
+#endif
+
 /* Exponents of the two forms, Part I: d_k, l_k (0 = no exponential) and t_k in eighths. */
 static const unsigned char hz_d[2][GK__SW_TERMS] = {
     { 1, 1, 1, 2, 3, 7, 2, 5, 1, 4, 3, 4 }, /* nonpolar */
@@ -353,7 +361,7 @@ static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
 }
 
 /* Adds a polynomial term T = c delta^d: delta dT/ddelta = d T, delta^2 d2T/ddelta^2 = d(d-1) T. */
-static GK_ALWAYS_INLINE void hz_poly(hz_sums *s, gk_real term, gk_real d) {
+static inline void hz_poly(hz_sums *s, gk_real term, gk_real d) {
     s->a += term;
     s->s1 += d * term;
     s->s2 += d * (d - GK_LIT(1.0)) * term;
@@ -361,7 +369,7 @@ static GK_ALWAYS_INLINE void hz_poly(hz_sums *s, gk_real term, gk_real d) {
 
 /* Adds T = c delta^d exp(-delta^l), dl = delta^l: g = d - l dl, delta dT/ddelta = g T,
    delta^2 d2T/ddelta^2 = (g (g - 1) - l^2 dl) T. */
-static GK_ALWAYS_INLINE void hz_expo(hz_sums *s, gk_real term, gk_real d, gk_real l, gk_real dl) {
+static inline void hz_expo(hz_sums *s, gk_real term, gk_real d, gk_real l, gk_real dl) {
     gk_real g = d - l * dl;
     s->a += term;
     s->s1 += g * term;
@@ -555,7 +563,7 @@ static void hz_z_lnphi(const hz_ctx *ctx, gk_real delta, const hz_sums *s, gk_re
 
 /* Writes the chosen root (index 0 = liquid-like, 1 = vapour-like) into *out. Out of line: its
    locals are not in the frame that lies under the root searches (firmware stack budget). */
-static GK_NOINLINE gk_status hz_pick(const gk__hz_model *m, const hz_ctx *ctx, const gk_real dl[2],
+static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, const hz_ctx *ctx, const gk_real dl[2],
                                      const hz_sums sl[2], const int found[2], gk_root root,
                                      gk__hz_result *out) {
     int n = found[0] + found[1];

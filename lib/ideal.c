@@ -68,55 +68,80 @@ gk_status gk_state_change(const gk_state *before, gk_state *after, gk_variable u
     gk_real num[4], den[4];
     gk_real r = GK_LIT(0.0);
     gk_status s;
-    if (before == NULL || after == NULL) return GK_ERR_ARGUMENT;
+    if (before == NULL || after == NULL) { return GK_ERR_ARGUMENT; }
     switch (unknown) {
-    case GK_VAR_PRESSURE:    /* p2 = p1 (V1 / V2) (n2 / n1) (T2 / T1) */
-        num[0] = before->p.pa;  den[0] = GK_LIT(1.0);
-        num[1] = before->v.m3;  den[1] = after->v.m3;
-        num[2] = after->n.mol;  den[2] = before->n.mol;
-        num[3] = after->t.k;    den[3] = before->t.k;
-        break;
-    case GK_VAR_VOLUME:      /* V2 = V1 (p1 / p2) (n2 / n1) (T2 / T1) */
-        num[0] = before->v.m3;  den[0] = GK_LIT(1.0);
-        num[1] = before->p.pa;  den[1] = after->p.pa;
-        num[2] = after->n.mol;  den[2] = before->n.mol;
-        num[3] = after->t.k;    den[3] = before->t.k;
-        break;
-    case GK_VAR_TEMPERATURE: /* T2 = T1 (p2 / p1) (V2 / V1) (n1 / n2) */
-        num[0] = before->t.k;   den[0] = GK_LIT(1.0);
-        num[1] = after->p.pa;   den[1] = before->p.pa;
-        num[2] = after->v.m3;   den[2] = before->v.m3;
-        num[3] = before->n.mol; den[3] = after->n.mol;
-        break;
-    case GK_VAR_AMOUNT:      /* n2 = n1 (p2 / p1) (V2 / V1) (T1 / T2) */
-        num[0] = before->n.mol; den[0] = GK_LIT(1.0);
-        num[1] = after->p.pa;   den[1] = before->p.pa;
-        num[2] = after->v.m3;   den[2] = before->v.m3;
-        num[3] = before->t.k;   den[3] = after->t.k;
-        break;
-    default:
-        return GK_ERR_ARGUMENT;
+        case GK_VAR_PRESSURE: /* p2 = p1 (V1 / V2) (n2 / n1) (T2 / T1) */
+            num[0] = before->p.pa;
+            den[0] = GK_LIT(1.0);
+            num[1] = before->v.m3;
+            den[1] = after->v.m3;
+            num[2] = after->n.mol;
+            den[2] = before->n.mol;
+            num[3] = after->t.k;
+            den[3] = before->t.k;
+            break;
+        case GK_VAR_VOLUME: /* V2 = V1 (p1 / p2) (n2 / n1) (T2 / T1) */
+            num[0] = before->v.m3;
+            den[0] = GK_LIT(1.0);
+            num[1] = before->p.pa;
+            den[1] = after->p.pa;
+            num[2] = after->n.mol;
+            den[2] = before->n.mol;
+            num[3] = after->t.k;
+            den[3] = before->t.k;
+            break;
+        case GK_VAR_TEMPERATURE: /* T2 = T1 (p2 / p1) (V2 / V1) (n1 / n2) */
+            num[0] = before->t.k;
+            den[0] = GK_LIT(1.0);
+            num[1] = after->p.pa;
+            den[1] = before->p.pa;
+            num[2] = after->v.m3;
+            den[2] = before->v.m3;
+            num[3] = before->n.mol;
+            den[3] = after->n.mol;
+            break;
+        case GK_VAR_AMOUNT: /* n2 = n1 (p2 / p1) (V2 / V1) (T1 / T2) */
+            num[0] = before->n.mol;
+            den[0] = GK_LIT(1.0);
+            num[1] = after->p.pa;
+            den[1] = before->p.pa;
+            num[2] = after->v.m3;
+            den[2] = before->v.m3;
+            num[3] = before->t.k;
+            den[3] = after->t.k;
+            break;
+        default:
+            return GK_ERR_ARGUMENT;
     }
     s = gk_scaled_eval(num, den, 4, &r);
-    if (s != GK_OK) return s;
+    if (s != GK_OK) { return s; }
     switch (unknown) {
-    case GK_VAR_PRESSURE:    after->p.pa = r; break;
-    case GK_VAR_VOLUME:      after->v.m3 = r; break;
-    case GK_VAR_TEMPERATURE: after->t.k = r; break;
-    default:                 after->n.mol = r; break;
+        case GK_VAR_PRESSURE:
+            after->p.pa = r;
+            break;
+        case GK_VAR_VOLUME:
+            after->v.m3 = r;
+            break;
+        case GK_VAR_TEMPERATURE:
+            after->t.k = r;
+            break;
+        default:
+            after->n.mol = r;
+            break;
     }
     return GK_OK;
 }
 
 gk_status gk_partial_pressure(gk_pressure total, gk_real mole_fraction, gk_pressure *out) {
     gk_real r;
-    if (out == NULL) return GK_ERR_ARGUMENT;
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     if (!gk_positive(total.pa) || !gk_finite(mole_fraction) || mole_fraction < GK_LIT(0.0) ||
-        mole_fraction > GK_LIT(1.0))
+        mole_fraction > GK_LIT(1.0)) {
         return GK_ERR_DOMAIN;
+    }
     r = mole_fraction * total.pa; /* <= total: cannot overflow */
-    if (gk_check_normal(r) != GK_OK) return GK_ERR_RANGE;  /* underflow below the normal range */
-    if (mole_fraction > GK_LIT(0.0) && !(r > GK_LIT(0.0))) return GK_ERR_RANGE;
+    if (gk_check_normal(r) != GK_OK) { return GK_ERR_RANGE; /* underflow below the normal range */ }
+    if (mole_fraction > GK_LIT(0.0) && !(r > GK_LIT(0.0))) { return GK_ERR_RANGE; }
     out->pa = r;
     return GK_OK;
 }

@@ -18,10 +18,12 @@
  * are checked before any square root is taken (sqrt of a negative is NaN, not an error). */
 static gk_status gk_speed_factor(gk_real c, gk_temperature t, gk_molar_mass m, gk_real *out) {
     gk_real num[2], den[2];
-    if (out == NULL) return GK_ERR_ARGUMENT;
-    if (!gk_positive(t.k) || !gk_positive(m.kg_per_mol)) return GK_ERR_DOMAIN;
-    num[0] = gk_sqrt(t.k);        den[0] = gk_sqrt(m.kg_per_mol);
-    num[1] = gk_sqrt(c * GK_R);   den[1] = GK_LIT(1.0);
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(t.k) || !gk_positive(m.kg_per_mol)) { return GK_ERR_DOMAIN; }
+    num[0] = gk_sqrt(t.k);
+    den[0] = gk_sqrt(m.kg_per_mol);
+    num[1] = gk_sqrt(c * GK_R);
+    den[1] = GK_LIT(1.0);
     return gk_scaled_eval(num, den, 2, out);
 }
 
@@ -37,30 +39,30 @@ gk_status gk_speed_most_probable(gk_temperature t, gk_molar_mass m, gk_speed *ou
     return gk_speed_factor(GK_LIT(2.0), t, m, out != NULL ? &out->m_per_s : NULL);
 }
 
-gk_status gk_speed_of_sound_ideal(gk_temperature t, gk_molar_mass m,
-                                  gk_real heat_capacity_ratio, gk_speed *out) {
+gk_status gk_speed_of_sound_ideal(gk_temperature t, gk_molar_mass m, gk_real heat_capacity_ratio,
+                                  gk_speed *out) {
     /* gamma = cp / cv of an ideal gas lies in (1, 5/3]: 5/3 for a monatomic gas (3 translational
      * degrees of freedom), approaching 1 as the degrees of freedom grow (common practice).
      * The upper bound is 1.67, not 5/3 exactly, so that 5/3 as printed in tables (1.667, 1.67)
      * is accepted; that allowance is 0.2 % in gamma, 0.1 % in the speed. */
-    if (out == NULL) return GK_ERR_ARGUMENT;
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     if (!gk_finite(heat_capacity_ratio) || !(heat_capacity_ratio > GK_LIT(1.0)) ||
-        heat_capacity_ratio > GK_LIT(1.67))
+        heat_capacity_ratio > GK_LIT(1.67)) {
         return GK_ERR_DOMAIN;
+    }
     return gk_speed_factor(heat_capacity_ratio, t, m, &out->m_per_s);
 }
 
 gk_status gk_effusion_ratio(gk_molar_mass a, gk_molar_mass b, gk_real *rate_a_over_b) {
     gk_real num[1], den[1];
-    if (rate_a_over_b == NULL) return GK_ERR_ARGUMENT;
-    if (!gk_positive(a.kg_per_mol) || !gk_positive(b.kg_per_mol)) return GK_ERR_DOMAIN;
+    if (rate_a_over_b == NULL) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(a.kg_per_mol) || !gk_positive(b.kg_per_mol)) { return GK_ERR_DOMAIN; }
     num[0] = gk_sqrt(b.kg_per_mol);
     den[0] = gk_sqrt(a.kg_per_mol);
     return gk_scaled_eval(num, den, 1, rate_a_over_b);
 }
 
-gk_status gk_effusion_molar_mass(gk_molar_mass reference,
-                                 gk_real time_ratio_unknown_over_reference,
+gk_status gk_effusion_molar_mass(gk_molar_mass reference, gk_real time_ratio_unknown_over_reference,
                                  gk_molar_mass *out) {
     /* M = M_ref r r, as three factors so that r^2 cannot overflow on its own */
     const gk_real r = time_ratio_unknown_over_reference;
@@ -82,10 +84,15 @@ gk_status gk_wall_flux(gk_pressure p, gk_temperature t, gk_molar_mass m,
                        gk_real *out_mol_per_m2_s) {
     /* J = p / (sqrt(2 pi R) sqrt(M) sqrt(T)) */
     gk_real num[3], den[3];
-    if (out_mol_per_m2_s == NULL) return GK_ERR_ARGUMENT;
-    if (!gk_positive(p.pa) || !gk_positive(t.k) || !gk_positive(m.kg_per_mol)) return GK_ERR_DOMAIN;
-    num[0] = p.pa;                                 den[0] = gk_sqrt(GK_LIT(2.0) * GK_PI * GK_R);
-    num[1] = GK_LIT(1.0);                          den[1] = gk_sqrt(m.kg_per_mol);
-    num[2] = GK_LIT(1.0);                          den[2] = gk_sqrt(t.k);
+    if (out_mol_per_m2_s == NULL) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(p.pa) || !gk_positive(t.k) || !gk_positive(m.kg_per_mol)) {
+        return GK_ERR_DOMAIN;
+    }
+    num[0] = p.pa;
+    den[0] = gk_sqrt(GK_LIT(2.0) * GK_PI * GK_R);
+    num[1] = GK_LIT(1.0);
+    den[1] = gk_sqrt(m.kg_per_mol);
+    num[2] = GK_LIT(1.0);
+    den[2] = gk_sqrt(t.k);
     return gk_scaled_eval(num, den, 3, out_mol_per_m2_s);
 }

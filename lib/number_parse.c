@@ -15,14 +15,15 @@
 /* 10^0 ... 10^10 are exact in binary32 (5^10 = 9765625 < 2^24); IEEE 754 binary32. */
 #  define GK__POW10_MAX 10
 #  define GK__EXACT_INT_MAX 16777216u /* 2^24: every integer up to here is exact in binary32 */
-static const gk_real gk__pow10[GK__POW10_MAX + 1] = {
-    GK_LIT(1e0), GK_LIT(1e1), GK_LIT(1e2), GK_LIT(1e3), GK_LIT(1e4), GK_LIT(1e5),
-    GK_LIT(1e6), GK_LIT(1e7), GK_LIT(1e8), GK_LIT(1e9), GK_LIT(1e10)
-};
+static const gk_real gk__pow10[GK__POW10_MAX + 1] = { GK_LIT(1e0), GK_LIT(1e1), GK_LIT(1e2),
+                                                      GK_LIT(1e3), GK_LIT(1e4), GK_LIT(1e5),
+                                                      GK_LIT(1e6), GK_LIT(1e7), GK_LIT(1e8),
+                                                      GK_LIT(1e9), GK_LIT(1e10) };
 #else
 /* 10^0 ... 10^22 are exact in binary64 (5^22 < 2^53); IEEE 754 binary64. */
 #  define GK__POW10_MAX 22
-#  define GK__EXACT_INT_MAX 9007199254740992u /* 2^53: every integer up to here is exact in binary64 */
+#  define GK__EXACT_INT_MAX \
+    9007199254740992u /* 2^53: every integer up to here is exact in binary64 */
 static const gk_real gk__pow10[GK__POW10_MAX + 1] = {
     GK_LIT(1e0),  GK_LIT(1e1),  GK_LIT(1e2),  GK_LIT(1e3),  GK_LIT(1e4),  GK_LIT(1e5),
     GK_LIT(1e6),  GK_LIT(1e7),  GK_LIT(1e8),  GK_LIT(1e9),  GK_LIT(1e10), GK_LIT(1e11),
@@ -44,45 +45,48 @@ static int gk__is_digit(char c) { return (c >= '0' && c <= '9') ? 1 : 0; }
 typedef struct gk__digits {
     uint64_t mantissa;
     int32_t exp10;
-    int kept;       /* significant digits in mantissa */
-    int dropped;    /* significant digits beyond GK__KEEP_DIGITS */
-    int round_digit;/* first dropped digit */
-    int sticky;     /* a non-zero digit after the first dropped one */
-    int count;      /* every mantissa digit character read */
+    int kept;        /* significant digits in mantissa */
+    int dropped;     /* significant digits beyond GK__KEEP_DIGITS */
+    int round_digit; /* first dropped digit */
+    int sticky;      /* a non-zero digit after the first dropped one */
+    int count;       /* every mantissa digit character read */
 } gk__digits;
 
 static void gk__take_digit(gk__digits *s, int d, int in_fraction) {
     s->count += 1;
-    if (s->kept == 0 && d == 0) {          /* leading zero: not significant */
-        if (in_fraction) s->exp10 -= 1;
+    if (s->kept == 0 && d == 0) { /* leading zero: not significant */
+        if (in_fraction) { s->exp10 -= 1; }
         return;
     }
     if (s->kept < GK__KEEP_DIGITS) {
         s->mantissa = s->mantissa * 10u + (uint64_t)d;
         s->kept += 1;
-        if (in_fraction) s->exp10 -= 1;
+        if (in_fraction) { s->exp10 -= 1; }
         return;
     }
-    if (s->dropped == 0) s->round_digit = d;
-    else if (d != 0) s->sticky = 1;
+    if (s->dropped == 0) {
+        s->round_digit = d;
+    } else if (d != 0) {
+        s->sticky = 1;
+    }
     s->dropped += 1;
-    if (!in_fraction) s->exp10 += 1;        /* a dropped integer digit still scales */
+    if (!in_fraction) { s->exp10 += 1; /* a dropped integer digit still scales */ }
 }
 
 gk_status gk__decimal_scan(const char *text, size_t limit, gk__decimal *out, size_t *used) {
-    gk__digits s = {0u, 0, 0, 0, 0, 0, 0};
+    gk__digits s = { 0u, 0, 0, 0, 0, 0, 0 };
     size_t i = 0;
     int negative = 0;
     int mantissa_digits = 0;
 
-    if (text == NULL || out == NULL || used == NULL) return GK_ERR_ARGUMENT;
+    if (text == NULL || out == NULL || used == NULL) { return GK_ERR_ARGUMENT; }
 
     if (i < limit && (text[i] == '+' || text[i] == '-')) {
         negative = (text[i] == '-') ? 1 : 0;
         i += 1;
     }
     while (i < limit && gk__is_digit(text[i])) {
-        if (s.count >= GK__DECIMAL_MAX_DIGITS) return GK_ERR_PARSE;
+        if (s.count >= GK__DECIMAL_MAX_DIGITS) { return GK_ERR_PARSE; }
         gk__take_digit(&s, text[i] - '0', 0);
         mantissa_digits += 1;
         i += 1;
@@ -90,13 +94,13 @@ gk_status gk__decimal_scan(const char *text, size_t limit, gk__decimal *out, siz
     if (i < limit && text[i] == '.') {
         i += 1;
         while (i < limit && gk__is_digit(text[i])) {
-            if (s.count >= GK__DECIMAL_MAX_DIGITS) return GK_ERR_PARSE;
+            if (s.count >= GK__DECIMAL_MAX_DIGITS) { return GK_ERR_PARSE; }
             gk__take_digit(&s, text[i] - '0', 1);
             mantissa_digits += 1;
             i += 1;
         }
     }
-    if (mantissa_digits == 0) return GK_ERR_PARSE;   /* "", "+", ".", "e5" */
+    if (mantissa_digits == 0) { return GK_ERR_PARSE; /* "", "+", ".", "e5" */ }
 
     if (i < limit && (text[i] == 'e' || text[i] == 'E')) {
         int32_t e = 0;
@@ -108,11 +112,11 @@ gk_status gk__decimal_scan(const char *text, size_t limit, gk__decimal *out, siz
             i += 1;
         }
         while (i < limit && gk__is_digit(text[i])) {
-            if (e < GK__EXP_SATURATE) e = e * 10 + (int32_t)(text[i] - '0');
+            if (e < GK__EXP_SATURATE) { e = e * 10 + (int32_t)(text[i] - '0'); }
             e_digits += 1;
             i += 1;
         }
-        if (e_digits == 0) return GK_ERR_PARSE;      /* "1e", "1e+" */
+        if (e_digits == 0) { return GK_ERR_PARSE; /* "1e", "1e+" */ }
         s.exp10 += e_negative ? -e : e;
     }
 
@@ -134,22 +138,22 @@ gk_status gk__decimal_to_real(gk__decimal d, int32_t extra_exp10, gk_real *out) 
     int64_t total;
     int32_t e;
 
-    if (out == NULL) return GK_ERR_ARGUMENT;
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     if (d.mantissa == 0u) {
         *out = GK_LIT(0.0);
         return GK_OK;
     }
-    total = (int64_t)d.exp10 + (int64_t)extra_exp10;      /* no int32_t overflow */
-    if (total > GK__EXP_LIMIT) return GK_ERR_RANGE;
+    total = (int64_t)d.exp10 + (int64_t)extra_exp10; /* no int32_t overflow */
+    if (total > GK__EXP_LIMIT) { return GK_ERR_RANGE; }
     if (total < -GK__EXP_LIMIT) {
         *out = GK_LIT(0.0);
         return GK_OK;
     }
     e = (int32_t)total;
 
-    r = (gk_real)d.mantissa;                  /* exact on the fast path, else 0.5 ulp */
+    r = (gk_real)d.mantissa; /* exact on the fast path, else 0.5 ulp */
     if (d.mantissa <= GK__EXACT_INT_MAX && e >= -GK__POW10_MAX && e <= GK__POW10_MAX) {
-        r = (e >= 0) ? r * gk__pow10[e] : r / gk__pow10[-e];   /* one correct rounding */
+        r = (e >= 0) ? r * gk__pow10[e] : r / gk__pow10[-e]; /* one correct rounding */
     } else {
         while (e > GK__POW10_MAX) {
             r *= gk__pow10[GK__POW10_MAX];
@@ -161,7 +165,7 @@ gk_status gk__decimal_to_real(gk__decimal d, int32_t extra_exp10, gk_real *out) 
         }
         r = (e >= 0) ? r * gk__pow10[e] : r / gk__pow10[-e];
     }
-    if (!gk_finite(r)) return GK_ERR_RANGE;
+    if (!gk_finite(r)) { return GK_ERR_RANGE; }
     *out = d.negative ? -r : r;
     return GK_OK;
 }

@@ -18,52 +18,48 @@
 
 gk_status gk_reference_get(gk_reference_id id, gk_reference *out) {
     gk_reference r;
-    if (out == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     switch (id) {
-    case GK_REF_0C_101325PA:
-        r.t.k = GK_ZERO_CELSIUS_K;
-        r.p.pa = GK_STANDARD_ATMOSPHERE_PA;
-        break;
-    case GK_REF_0C_100KPA:
-        r.t.k = GK_ZERO_CELSIUS_K;
-        r.p.pa = GK_LIT(100000.0);
-        break;
-    case GK_REF_15C_101325PA:
-        r.t.k = GK_ZERO_CELSIUS_K + GK_LIT(15.0);
-        r.p.pa = GK_STANDARD_ATMOSPHERE_PA;
-        break;
-    case GK_REF_20C_101325PA:
-        r.t.k = GK_ZERO_CELSIUS_K + GK_LIT(20.0);
-        r.p.pa = GK_STANDARD_ATMOSPHERE_PA;
-        break;
-    case GK_REF_25C_101325PA:
-        r.t.k = GK_ZERO_CELSIUS_K + GK_LIT(25.0);
-        r.p.pa = GK_STANDARD_ATMOSPHERE_PA;
-        break;
-    case GK_REF_60F_14696PSI:
-        /* NIST SP 811 (2008), B.9: t/degC = (t/degF - 32) / 1.8, plus 273.15 K; equal to
+        case GK_REF_0C_101325PA:
+            r.t.k = GK_ZERO_CELSIUS_K;
+            r.p.pa = GK_STANDARD_ATMOSPHERE_PA;
+            break;
+        case GK_REF_0C_100KPA:
+            r.t.k = GK_ZERO_CELSIUS_K;
+            r.p.pa = GK_LIT(100000.0);
+            break;
+        case GK_REF_15C_101325PA:
+            r.t.k = GK_ZERO_CELSIUS_K + GK_LIT(15.0);
+            r.p.pa = GK_STANDARD_ATMOSPHERE_PA;
+            break;
+        case GK_REF_20C_101325PA:
+            r.t.k = GK_ZERO_CELSIUS_K + GK_LIT(20.0);
+            r.p.pa = GK_STANDARD_ATMOSPHERE_PA;
+            break;
+        case GK_REF_25C_101325PA:
+            r.t.k = GK_ZERO_CELSIUS_K + GK_LIT(25.0);
+            r.p.pa = GK_STANDARD_ATMOSPHERE_PA;
+            break;
+        case GK_REF_60F_14696PSI:
+            /* NIST SP 811 (2008), B.9: t/degC = (t/degF - 32) / 1.8, plus 273.15 K; equal to
            (60 + 459.67) / 1.8 K, written this way so a float build rounds once less.
            14.696 x 6894.757293168 Pa (SP 811 psi factor). */
-        r.t.k = GK_ZERO_CELSIUS_K + (GK_LIT(60.0) - GK_LIT(32.0)) / GK_LIT(1.8);
-        r.p.pa = GK_LIT(14.696) * GK_LIT(6894.757293168);
-        break;
-    default:
-        return GK_ERR_ARGUMENT;
+            r.t.k = GK_ZERO_CELSIUS_K + (GK_LIT(60.0) - GK_LIT(32.0)) / GK_LIT(1.8);
+            r.p.pa = GK_LIT(14.696) * GK_LIT(6894.757293168);
+            break;
+        default:
+            return GK_ERR_ARGUMENT;
     }
     *out = r;
     return GK_OK;
 }
 
-gk_status gk_reference_factor(gk_pressure p, gk_temperature t, gk_real z,
-                              gk_reference ref, gk_real z_ref, gk_real *factor) {
+gk_status gk_reference_factor(gk_pressure p, gk_temperature t, gk_real z, gk_reference ref,
+                              gk_real z_ref, gk_real *factor) {
     gk_real f;
-    if (factor == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
-    if (!gk_positive(p.pa) || !gk_positive(t.k) || !gk_positive(z) ||
-        !gk_positive(ref.p.pa) || !gk_positive(ref.t.k) || !gk_positive(z_ref)) {
+    if (factor == NULL) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(p.pa) || !gk_positive(t.k) || !gk_positive(z) || !gk_positive(ref.p.pa) ||
+        !gk_positive(ref.t.k) || !gk_positive(z_ref)) {
         return GK_ERR_DOMAIN;
     }
     /* factor = (p / p_ref) (T_ref / T) (z_ref / z): V_ref = n z_ref R T_ref / p_ref and
@@ -71,7 +67,7 @@ gk_status gk_reference_factor(gk_pressure p, gk_temperature t, gk_real z,
        inputs unless it overflows or underflows; both give GK_ERR_RANGE, and so does a factor
        below the smallest normal number (digits lost; the rule of gk_scaled.h). */
     f = (p.pa / ref.p.pa) * (ref.t.k / t.k) * (z_ref / z);
-    if (!(f >= GK_REAL_MIN_NORMAL && f <= GK_REAL_MAX)) {   /* also NaN, 0 and inf */
+    if (!(f >= GK_REAL_MIN_NORMAL && f <= GK_REAL_MAX)) { /* also NaN, 0 and inf */
         return GK_ERR_RANGE;
     }
     *factor = f;

@@ -21,8 +21,16 @@
 
 /* Dimensions; the typed functions check that a unit belongs to theirs. */
 enum gk_dim {
-    GK_DIM_PRESSURE, GK_DIM_TEMPERATURE, GK_DIM_VOLUME, GK_DIM_AMOUNT, GK_DIM_MOLAR_MASS,
-    GK_DIM_MOLAR_VOLUME, GK_DIM_DENSITY, GK_DIM_SPEED, GK_DIM_MASS, GK_DIM_VOLUME_FLOW,
+    GK_DIM_PRESSURE,
+    GK_DIM_TEMPERATURE,
+    GK_DIM_VOLUME,
+    GK_DIM_AMOUNT,
+    GK_DIM_MOLAR_MASS,
+    GK_DIM_MOLAR_VOLUME,
+    GK_DIM_DENSITY,
+    GK_DIM_SPEED,
+    GK_DIM_MASS,
+    GK_DIM_VOLUME_FLOW,
     GK_DIM_MASS_FLOW
 };
 
@@ -32,16 +40,18 @@ enum gk_dim {
  * double-free ratio form gave (the ratio form is kept for exactness in double builds). */
 #define GK_UNIT_SYMBOL_SIZE 8
 typedef struct gk_unit_row {
-    char symbol[GK_UNIT_SYMBOL_SIZE]; /* ASCII symbol returned by gk_unit_symbol() and accepted by gk_unit_parse() */
+    /* ASCII symbol returned by gk_unit_symbol() and accepted by gk_unit_parse() */
+    char symbol[GK_UNIT_SYMBOL_SIZE];
 #if GK_REAL_IS_FLOAT
-    gk_real factor;     /* one unit (after the offset) is factor SI units */
+    gk_real factor; /* one unit (after the offset) is factor SI units */
 #else
-    gk_real num;        /* one unit (after the offset) is num / den SI units */
+    gk_real num; /* one unit (after the offset) is num / den SI units */
     gk_real den;
 #endif
-    unsigned char dim;  /* enum gk_dim */
+    unsigned char dim; /* enum gk_dim */
 } gk_unit_row;
 
+/* clang-format off */
 #if GK_REAL_IS_FLOAT
 #  define ROW(dim, sym, num, den) { sym, GK_LIT(num) / GK_LIT(den), (unsigned char)GK_DIM_##dim }
 #  define ROW_TO_SI(u) (u)->factor, GK_LIT(1.0)
@@ -183,6 +193,7 @@ static const gk_unit_alias gk_unit_aliases[] = {
     { "ft^3/min", GK_UNIT_FT3_PER_MIN },
     { "cfm", GK_UNIT_FT3_PER_MIN },
 };
+/* clang-format on */
 
 /* Dimensions whose values must be > 0 in the typed functions (absolute quantities); speed and
  * the flows may take any finite value (direction of flow or motion). */
@@ -194,15 +205,19 @@ static int gk_dim_positive(enum gk_dim dim) {
 static const gk_unit_row *gk_unit_row_of(gk_unit unit) {
     /* compare as int: an out-of-range enum may be negative */
     int u = (int)unit;
-    if (u < 0 || u >= (int)GK_UNIT_COUNT) return NULL;
+    if (u < 0 || u >= (int)GK_UNIT_COUNT) { return NULL; }
     return &gk_units[u];
 }
 
 /* Added to the value before scaling: 0 except for the two temperature scales with an offset
  * zero (at most 459.67, so adding it cannot overflow a finite value). */
 static gk_real gk_unit_offset(const gk_unit_row *u) {
-    if (u == &gk_units[GK_UNIT_DEGC]) return GK_LIT(273.15); /* SI Brochure: T/K = t/degC + 273.15, exact */
-    if (u == &gk_units[GK_UNIT_DEGF]) return GK_LIT(459.67); /* SP 811 B.9: T/K = (t/degF + 459.67)/1.8, exact */
+    if (u == &gk_units[GK_UNIT_DEGC]) {
+        return GK_LIT(273.15); /* SI Brochure: T/K = t/degC + 273.15, exact */
+    }
+    if (u == &gk_units[GK_UNIT_DEGF]) {
+        return GK_LIT(459.67); /* SP 811 B.9: T/K = (t/degF + 459.67)/1.8, exact */
+    }
     return GK_LIT(0.0);
 }
 
@@ -235,7 +250,7 @@ static gk_status gk_scale(gk_real x, gk_real num, gk_real den, gk_real *out) {
     fd = gk_frexp(den, &ed);
     r = gk_ldexp(fx * (fn / fd), ex + en - ed);
     /* here x != 0 (0 takes the fast path): an r of 0 has underflowed as a subnormal has */
-    if (!(gk_fabs(r) >= GK_REAL_MIN_NORMAL && gk_fabs(r) <= GK_REAL_MAX)) return GK_ERR_RANGE;
+    if (!(gk_fabs(r) >= GK_REAL_MIN_NORMAL && gk_fabs(r) <= GK_REAL_MAX)) { return GK_ERR_RANGE; }
     *out = r;
     return GK_OK;
 }
@@ -243,9 +258,9 @@ static gk_status gk_scale(gk_real x, gk_real num, gk_real den, gk_real *out) {
 /* Value in unit row u -> SI value. Temperature below 0 K is GK_ERR_DOMAIN. */
 static gk_status gk_to_si(const gk_unit_row *u, gk_real value, gk_real *si) {
     gk_real x;
-    if (!gk_finite(value)) return GK_ERR_DOMAIN;
+    if (!gk_finite(value)) { return GK_ERR_DOMAIN; }
     x = value + gk_unit_offset(u); /* offset <= 459.67: cannot overflow a finite value */
-    if (u->dim == GK_DIM_TEMPERATURE && x < GK_LIT(0.0)) return GK_ERR_DOMAIN;
+    if (u->dim == GK_DIM_TEMPERATURE && x < GK_LIT(0.0)) { return GK_ERR_DOMAIN; }
     return gk_scale(x, ROW_TO_SI(u), si);
 }
 
@@ -253,10 +268,10 @@ static gk_status gk_to_si(const gk_unit_row *u, gk_real value, gk_real *si) {
 static gk_status gk_from_si(const gk_unit_row *u, gk_real si, gk_real *value) {
     gk_real x = GK_LIT(0.0);
     gk_status s;
-    if (!gk_finite(si)) return GK_ERR_DOMAIN;
-    if (u->dim == GK_DIM_TEMPERATURE && si < GK_LIT(0.0)) return GK_ERR_DOMAIN;
+    if (!gk_finite(si)) { return GK_ERR_DOMAIN; }
+    if (u->dim == GK_DIM_TEMPERATURE && si < GK_LIT(0.0)) { return GK_ERR_DOMAIN; }
     s = gk_scale(si, ROW_FROM_SI(u), &x);
-    if (s != GK_OK) return s;
+    if (s != GK_OK) { return s; }
     *value = x - gk_unit_offset(u);
     return GK_OK;
 }
@@ -266,10 +281,10 @@ gk_status gk_convert(gk_real value, gk_unit from, gk_unit to, gk_real *out) {
     const gk_unit_row *ut = gk_unit_row_of(to);
     gk_real si = GK_LIT(0.0), r = GK_LIT(0.0);
     gk_status s;
-    if (out == NULL || uf == NULL || ut == NULL || uf->dim != ut->dim) return GK_ERR_ARGUMENT;
+    if (out == NULL || uf == NULL || ut == NULL || uf->dim != ut->dim) { return GK_ERR_ARGUMENT; }
     s = gk_to_si(uf, value, &si);
-    if (s == GK_OK) s = gk_from_si(ut, si, &r);
-    if (s == GK_OK) *out = r;
+    if (s == GK_OK) { s = gk_from_si(ut, si, &r); }
+    if (s == GK_OK) { *out = r; }
     return s;
 }
 
@@ -278,14 +293,15 @@ static gk_status quantity_from(gk_real value, gk_unit unit, enum gk_dim dim, gk_
     const gk_unit_row *u = gk_unit_row_of(unit);
     gk_real si = GK_LIT(0.0);
     gk_status s;
-    if (out == NULL || u == NULL || u->dim != dim) return GK_ERR_ARGUMENT;
-    if (!gk_finite(value)) return GK_ERR_DOMAIN;
+    if (out == NULL || u == NULL || u->dim != dim) { return GK_ERR_ARGUMENT; }
+    if (!gk_finite(value)) { return GK_ERR_DOMAIN; }
     /* sign first, so a tiny negative value is a domain error rather than an underflow */
-    if (gk_dim_positive(dim) && dim != GK_DIM_TEMPERATURE && !(value > GK_LIT(0.0)))
+    if (gk_dim_positive(dim) && dim != GK_DIM_TEMPERATURE && !(value > GK_LIT(0.0))) {
         return GK_ERR_DOMAIN;
+    }
     s = gk_to_si(u, value, &si);
-    if (s != GK_OK) return s;
-    if (gk_dim_positive(dim) && !(si > GK_LIT(0.0))) return GK_ERR_DOMAIN; /* 0 K exactly */
+    if (s != GK_OK) { return s; }
+    if (gk_dim_positive(dim) && !(si > GK_LIT(0.0))) { return GK_ERR_DOMAIN; /* 0 K exactly */ }
     *out = si;
     return GK_OK;
 }
@@ -295,25 +311,31 @@ static gk_status quantity_to(gk_real si, gk_unit unit, enum gk_dim dim, gk_real 
     const gk_unit_row *u = gk_unit_row_of(unit);
     gk_real r = GK_LIT(0.0);
     gk_status s;
-    if (out == NULL || u == NULL || u->dim != dim) return GK_ERR_ARGUMENT;
-    if (!gk_finite(si)) return GK_ERR_DOMAIN;
-    if (gk_dim_positive(dim) && !(si > GK_LIT(0.0))) return GK_ERR_DOMAIN;
+    if (out == NULL || u == NULL || u->dim != dim) { return GK_ERR_ARGUMENT; }
+    if (!gk_finite(si)) { return GK_ERR_DOMAIN; }
+    if (gk_dim_positive(dim) && !(si > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
     s = gk_from_si(u, si, &r);
-    if (s == GK_OK) *out = r;
+    if (s == GK_OK) { *out = r; }
     return s;
 }
 
 /* Exact string equality; reads neither string past its NUL. */
 static int gk_text_equal(const char *a, const char *b) {
-    while (*a != '\0' && *a == *b) { ++a; ++b; }
+    while (*a != '\0' && *a == *b) {
+        ++a;
+        ++b;
+    }
     return *a == *b;
 }
 
 gk_status gk_unit_parse(const char *symbol, gk_unit *out) {
     size_t i;
-    if (symbol == NULL || out == NULL) return GK_ERR_ARGUMENT;
+    if (symbol == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     for (i = 0; i < sizeof gk_units / sizeof gk_units[0]; ++i) {
-        if (gk_text_equal(symbol, gk_units[i].symbol)) { *out = (gk_unit)i; return GK_OK; }
+        if (gk_text_equal(symbol, gk_units[i].symbol)) {
+            *out = (gk_unit)i;
+            return GK_OK;
+        }
     }
     for (i = 0; i < sizeof gk_unit_aliases / sizeof gk_unit_aliases[0]; ++i) {
         if (gk_text_equal(symbol, gk_unit_aliases[i].text)) {
@@ -334,14 +356,14 @@ gk_status gk_pressure_from_gauge(gk_real value, gk_unit unit, gk_pressure ambien
     const gk_unit_row *u = gk_unit_row_of(unit);
     gk_real delta = GK_LIT(0.0), p;
     gk_status s;
-    if (out == NULL || u == NULL || u->dim != GK_DIM_PRESSURE) return GK_ERR_ARGUMENT;
-    if (!gk_finite(value) || !gk_positive(ambient.pa)) return GK_ERR_DOMAIN;
+    if (out == NULL || u == NULL || u->dim != GK_DIM_PRESSURE) { return GK_ERR_ARGUMENT; }
+    if (!gk_finite(value) || !gk_positive(ambient.pa)) { return GK_ERR_DOMAIN; }
     s = gk_scale(value, ROW_TO_SI(u), &delta); /* a pressure difference: no offset */
-    if (s != GK_OK) return s;
+    if (s != GK_OK) { return s; }
     p = delta + ambient.pa;
-    if (!gk_finite(p)) return GK_ERR_RANGE;
-    if (!(p > GK_LIT(0.0))) return GK_ERR_DOMAIN;
-    if (gk_check_normal(p) != GK_OK) return GK_ERR_RANGE;
+    if (!gk_finite(p)) { return GK_ERR_RANGE; }
+    if (!(p > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
+    if (gk_check_normal(p) != GK_OK) { return GK_ERR_RANGE; }
     out->pa = p;
     return GK_OK;
 }

@@ -25,15 +25,15 @@
 #include "gk_internal.h"
 
 /* IAPWS-IF97 (Revised Release 2007), Table 34: coefficients n1 ... n10 of region 4. */
-#define N1  GK_LIT(0.11670521452767e4)
-#define N2  GK_LIT(-0.72421316703206e6)
-#define N3  GK_LIT(-0.17073846940092e2)
-#define N4  GK_LIT(0.12020824702470e5)
-#define N5  GK_LIT(-0.32325550322333e7)
-#define N6  GK_LIT(0.14915108613530e2)
-#define N7  GK_LIT(-0.48232657361591e4)
-#define N8  GK_LIT(0.40511340542057e6)
-#define N9  GK_LIT(-0.23855557567849)
+#define N1 GK_LIT(0.11670521452767e4)
+#define N2 GK_LIT(-0.72421316703206e6)
+#define N3 GK_LIT(-0.17073846940092e2)
+#define N4 GK_LIT(0.12020824702470e5)
+#define N5 GK_LIT(-0.32325550322333e7)
+#define N6 GK_LIT(0.14915108613530e2)
+#define N7 GK_LIT(-0.48232657361591e4)
+#define N8 GK_LIT(0.40511340542057e6)
+#define N9 GK_LIT(-0.23855557567849)
 #define N10 GK_LIT(0.65017534844798e3)
 
 /* IAPWS R14-08(2011), sublimation pressure, coefficients a_i and exponents b_i. */
@@ -48,16 +48,16 @@
 #define T_TRIPLE GK_LIT(273.16)
 #define P_TRIPLE GK_LIT(611.657)
 /* Critical temperature of water, 647.096 K (IAPWS R2-83(1992), also IF97). */
-#define T_CRIT   GK_LIT(647.096)
+#define T_CRIT GK_LIT(647.096)
 /* Lower end of gaskit's ice curve (a design choice of gaskit, inside the release's 50 K). */
-#define T_LOW    GK_LIT(200.0)
+#define T_LOW GK_LIT(200.0)
 /* The pressure range of the inverse: the forward equations at the ends, eq. 30 at 647.096 K
    = 22064000.000321 Pa and R14-08 at 200 K = 0.162604017609 Pa (both mpmath 1.3.0, 40 digits),
    widened by 64 units of rounding of gk_real so that every output of
    gk_water_vapour_pressure() inverts, whatever the rounding of the forward equation in this
    build (a float build rounds eq. 30 to ~5e-6; a compiler may also fuse a*b+c into an fma). */
 #define P_HIGH (GK_LIT(22064000.000321) * (GK_LIT(1.0) + GK_LIT(64.0) * GK_REAL_EPS))
-#define P_LOW  (GK_LIT(0.162604017609) * (GK_LIT(1.0) - GK_LIT(64.0) * GK_REAL_EPS))
+#define P_LOW (GK_LIT(0.162604017609) * (GK_LIT(1.0) - GK_LIT(64.0) * GK_REAL_EPS))
 
 /* IF97 eq. 30: saturation pressure in Pa, for T in [273.15, 647.096] K (not checked here). */
 static gk_real if97_ps(gk_real t) {
@@ -89,10 +89,10 @@ static gk_real if97_ts(gk_real p_pa) {
 /* expm1 and log1p in gk_real precision (C99 <math.h>). */
 #if GK_REAL_IS_FLOAT
 #  define w_expm1 expm1f
-#  define w_log   logf
+#  define w_log logf
 #else
 #  define w_expm1 expm1
-#  define w_log   log
+#  define w_log log
 #endif
 
 /*
@@ -119,9 +119,7 @@ static gk_real subl_ln_ratio(gk_real t, gk_real *dlnp_dt) {
     return (SUB_A1 * e1 + SUB_A2 * e2 + SUB_A3 * e3) / theta;
 }
 
-static gk_real subl_p(gk_real t) {
-    return P_TRIPLE * gk_exp(subl_ln_ratio(t, NULL));
-}
+static gk_real subl_p(gk_real t) { return P_TRIPLE * gk_exp(subl_ln_ratio(t, NULL)); }
 
 /* Inverse of the sublimation curve for p in [p_subl(200 K), pt]: guarded Newton on ln p. */
 static gk_real subl_t(gk_real p_pa) {
@@ -156,52 +154,30 @@ static gk_real subl_t(gk_real p_pa) {
 
 gk_status gk_water_vapour_pressure(gk_temperature t, gk_pressure *out) {
     gk_real p;
-    if (out == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
-    if (!gk_positive(t.k)) {
-        return GK_ERR_DOMAIN;
-    }
-    if (t.k < T_LOW || t.k > T_CRIT) {
-        return GK_ERR_RANGE;
-    }
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(t.k)) { return GK_ERR_DOMAIN; }
+    if (t.k < T_LOW || t.k > T_CRIT) { return GK_ERR_RANGE; }
     p = (t.k >= T_TRIPLE) ? if97_ps(t.k) : subl_p(t.k);
-    if (!gk_positive(p)) {
-        return GK_ERR_RANGE;
-    }
+    if (!gk_positive(p)) { return GK_ERR_RANGE; }
     out->pa = p;
     return GK_OK;
 }
 
 gk_status gk_water_saturation_temperature(gk_pressure p, gk_temperature *out) {
     gk_real t;
-    if (out == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
-    if (!gk_positive(p.pa)) {
-        return GK_ERR_DOMAIN;
-    }
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(p.pa)) { return GK_ERR_DOMAIN; }
     if (p.pa >= P_TRIPLE) {
-        if (p.pa > P_HIGH) {
-            return GK_ERR_RANGE;
-        }
+        if (p.pa > P_HIGH) { return GK_ERR_RANGE; }
         t = if97_ts(p.pa);
         /* At pt eq. 31 gives 273.16 K minus 2.4e-10 K (mpmath): keep the liquid side. */
-        if (t < T_TRIPLE) {
-            t = T_TRIPLE;
-        }
-        if (t > T_CRIT) {
-            t = T_CRIT;
-        }
+        if (t < T_TRIPLE) { t = T_TRIPLE; }
+        if (t > T_CRIT) { t = T_CRIT; }
     } else {
-        if (p.pa < P_LOW) {
-            return GK_ERR_RANGE;
-        }
+        if (p.pa < P_LOW) { return GK_ERR_RANGE; }
         t = subl_t(p.pa);
     }
-    if (!gk_positive(t)) {
-        return GK_ERR_RANGE;
-    }
+    if (!gk_positive(t)) { return GK_ERR_RANGE; }
     out->k = t;
     return GK_OK;
 }
@@ -213,25 +189,19 @@ gk_status gk_dew_point(gk_pressure water_partial_pressure, gk_temperature *out) 
 }
 
 gk_status gk_dry_gas_pressure(gk_pressure total, gk_temperature t, gk_real relative_humidity,
-                                     gk_pressure *out) {
+                              gk_pressure *out) {
     gk_pressure pws;
     gk_real pw;
     gk_status s;
-    if (out == NULL) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     if (!gk_positive(total.pa) || !gk_positive(t.k) || !gk_finite(relative_humidity) ||
         relative_humidity < GK_LIT(0.0) || relative_humidity > GK_LIT(1.0)) {
         return GK_ERR_DOMAIN;
     }
     s = gk_water_vapour_pressure(t, &pws);
-    if (s != GK_OK) {
-        return s;
-    }
+    if (s != GK_OK) { return s; }
     pw = relative_humidity * pws.pa;
-    if (!(pw < total.pa)) {
-        return GK_ERR_NO_SOLUTION;
-    }
+    if (!(pw < total.pa)) { return GK_ERR_NO_SOLUTION; }
     out->pa = total.pa - pw;
     return GK_OK;
 }

@@ -24,11 +24,10 @@
 
 #include "gaskit/gaskit.h"
 
-#define GKQ_LINE_MAX 1024     /* longest batch line (bytes, without the newline) */
-#define GKQ_CELLS_MAX 12      /* most cells in a batch row / arguments of a word */
-#define GKQ_TEXT_MAX 256      /* longest fluid or unit text kept */
-#define GKQ_FIELDS_MAX 24     /* most fields in one output record */
-
+#define GKQ_LINE_MAX 1024 /* longest batch line (bytes, without the newline) */
+#define GKQ_CELLS_MAX 12  /* most cells in a batch row / arguments of a word */
+#define GKQ_TEXT_MAX 256  /* longest fluid or unit text kept */
+#define GKQ_FIELDS_MAX 24 /* most fields in one output record */
 
 /* ------------------------------------------------------------------ small helpers */
 
@@ -38,7 +37,7 @@ static double D(gk_real x) { return (double)x; }
 /* Copies at most cap-1 bytes and always terminates. */
 static void copy_text(char *dst, size_t cap, const char *src) {
     size_t i = 0;
-    if (cap == 0) return;
+    if (cap == 0) { return; }
     while (src[i] != '\0' && i + 1 < cap) {
         dst[i] = src[i];
         i++;
@@ -49,47 +48,67 @@ static void copy_text(char *dst, size_t cap, const char *src) {
 /* Short machine name of a status, for the batch status column. */
 static const char *status_token(gk_status st) {
     switch (st) {
-    case GK_OK: return "ok";
-    case GK_ERR_ARGUMENT: return "argument";
-    case GK_ERR_DOMAIN: return "domain";
-    case GK_ERR_NO_SOLUTION: return "no_solution";
-    case GK_ERR_RANGE: return "range";
-    case GK_ERR_NOT_FOUND: return "not_found";
-    case GK_ERR_COMPOSITION: return "composition";
-    case GK_ERR_PARSE: return "parse";
-    default: return "unknown";
+        case GK_OK:
+            return "ok";
+        case GK_ERR_ARGUMENT:
+            return "argument";
+        case GK_ERR_DOMAIN:
+            return "domain";
+        case GK_ERR_NO_SOLUTION:
+            return "no_solution";
+        case GK_ERR_RANGE:
+            return "range";
+        case GK_ERR_NOT_FOUND:
+            return "not_found";
+        case GK_ERR_COMPOSITION:
+            return "composition";
+        case GK_ERR_PARSE:
+            return "parse";
+        default:
+            return "unknown";
     }
 }
 
 /* ------------------------------------------------------------------ dimensions */
 
 typedef enum dim {
-    DIM_NONE, DIM_PRESSURE, DIM_TEMPERATURE, DIM_VOLUME, DIM_AMOUNT, DIM_MOLAR_MASS,
-    DIM_MOLAR_VOLUME, DIM_DENSITY, DIM_SPEED, DIM_MASS, DIM_VOLUME_FLOW, DIM_MASS_FLOW,
-    DIM_TIME,      /* tool-only: s, min, h */
-    DIM_NUMBER     /* a bare number or a percentage */
+    DIM_NONE,
+    DIM_PRESSURE,
+    DIM_TEMPERATURE,
+    DIM_VOLUME,
+    DIM_AMOUNT,
+    DIM_MOLAR_MASS,
+    DIM_MOLAR_VOLUME,
+    DIM_DENSITY,
+    DIM_SPEED,
+    DIM_MASS,
+    DIM_VOLUME_FLOW,
+    DIM_MASS_FLOW,
+    DIM_TIME,  /* tool-only: s, min, h */
+    DIM_NUMBER /* a bare number or a percentage */
 } dim;
 
 static const char *dim_name(dim d) {
-    static const char *const names[] = {
-        "?", "pressure", "temperature", "volume", "amount", "molar mass", "molar volume",
-        "density", "speed", "mass", "volume flow", "mass flow", "time", "number"};
+    static const char *const names[] = { "?",      "pressure",   "temperature",  "volume",
+                                         "amount", "molar mass", "molar volume", "density",
+                                         "speed",  "mass",       "volume flow",  "mass flow",
+                                         "time",   "number" };
     return ((size_t)d < sizeof names / sizeof names[0]) ? names[d] : "?";
 }
 
 /* The dimension of a gaskit unit (the enum is ordered by dimension in units.h). */
 static dim unit_dim(gk_unit u) {
-    if (u <= GK_UNIT_PSI) return DIM_PRESSURE;
-    if (u <= GK_UNIT_DEGR) return DIM_TEMPERATURE;
-    if (u <= GK_UNIT_GAL_US) return DIM_VOLUME;
-    if (u <= GK_UNIT_LBMOL) return DIM_AMOUNT;
-    if (u <= GK_UNIT_G_PER_MOL) return DIM_MOLAR_MASS;
-    if (u <= GK_UNIT_CM3_PER_MOL) return DIM_MOLAR_VOLUME;
-    if (u <= GK_UNIT_LB_PER_FT3) return DIM_DENSITY;
-    if (u <= GK_UNIT_FT_PER_S) return DIM_SPEED;
-    if (u <= GK_UNIT_LB) return DIM_MASS;
-    if (u <= GK_UNIT_FT3_PER_MIN) return DIM_VOLUME_FLOW;
-    if (u < GK_UNIT_COUNT) return DIM_MASS_FLOW;
+    if (u <= GK_UNIT_PSI) { return DIM_PRESSURE; }
+    if (u <= GK_UNIT_DEGR) { return DIM_TEMPERATURE; }
+    if (u <= GK_UNIT_GAL_US) { return DIM_VOLUME; }
+    if (u <= GK_UNIT_LBMOL) { return DIM_AMOUNT; }
+    if (u <= GK_UNIT_G_PER_MOL) { return DIM_MOLAR_MASS; }
+    if (u <= GK_UNIT_CM3_PER_MOL) { return DIM_MOLAR_VOLUME; }
+    if (u <= GK_UNIT_LB_PER_FT3) { return DIM_DENSITY; }
+    if (u <= GK_UNIT_FT_PER_S) { return DIM_SPEED; }
+    if (u <= GK_UNIT_LB) { return DIM_MASS; }
+    if (u <= GK_UNIT_FT3_PER_MIN) { return DIM_VOLUME_FLOW; }
+    if (u < GK_UNIT_COUNT) { return DIM_MASS_FLOW; }
     return DIM_NONE;
 }
 
@@ -97,15 +116,17 @@ static dim unit_dim(gk_unit u) {
 
 /* A quantity as written: "2.5bar", "3.2psi_g", "25degC", "15min", "60%", "0.8". */
 typedef struct quantity {
-    double value;       /* the number as written (a percentage already divided by 100) */
+    double value; /* the number as written (a percentage already divided by 100) */
     dim d;
-    gk_unit unit;       /* for gaskit dimensions */
-    int gauge;          /* pressure with the gauge mark "_g" */
-    const char *text;   /* the argument as given */
+    gk_unit unit;     /* for gaskit dimensions */
+    int gauge;        /* pressure with the gauge mark "_g" */
+    const char *text; /* the argument as given */
 } quantity;
 
 /* Where an error came from, for the message on stderr or in the batch row. */
-typedef struct detail { char text[GKQ_TEXT_MAX]; } detail;
+typedef struct detail {
+    char text[GKQ_TEXT_MAX];
+} detail;
 
 static void say(detail *why, const char *what, const char *arg) {
     snprintf(why->text, sizeof why->text, "%s '%.120s'", what, arg);
@@ -130,12 +151,21 @@ static gk_status parse_quantity(const char *s, quantity *q, detail *why) {
     out.text = s;
     errno = 0;
     v = strtod(s, &end);
-    if (end == s) { say(why, "not a number", s); return GK_ERR_PARSE; }
-    if (!isfinite(v) || errno == ERANGE) { say(why, "number not finite", s); return GK_ERR_DOMAIN; }
-    while (*end == ' ' || *end == '\t') end++;
+    if (end == s) {
+        say(why, "not a number", s);
+        return GK_ERR_PARSE;
+    }
+    if (!isfinite(v) || errno == ERANGE) {
+        say(why, "number not finite", s);
+        return GK_ERR_DOMAIN;
+    }
+    while (*end == ' ' || *end == '\t') { end++; }
     n = strlen(end);
-    while (n > 0 && (end[n - 1] == ' ' || end[n - 1] == '\t')) n--;
-    if (n >= sizeof unit) { say(why, "unit text too long in", s); return GK_ERR_PARSE; }
+    while (n > 0 && (end[n - 1] == ' ' || end[n - 1] == '\t')) { n--; }
+    if (n >= sizeof unit) {
+        say(why, "unit text too long in", s);
+        return GK_ERR_PARSE;
+    }
     memcpy(unit, end, n);
     unit[n] = '\0';
 
@@ -146,9 +176,15 @@ static gk_status parse_quantity(const char *s, quantity *q, detail *why) {
     if (n >= 2 && unit[n - 2] == '_' && (unit[n - 1] == 'g' || unit[n - 1] == 'a')) {
         out.gauge = unit[n - 1] == 'g';
         unit[n - 2] = '\0';
-        if (unit[0] == '\0') { say(why, "gauge mark without a unit in", s); return GK_ERR_PARSE; }
+        if (unit[0] == '\0') {
+            say(why, "gauge mark without a unit in", s);
+            return GK_ERR_PARSE;
+        }
         st = gk_unit_parse(unit, &out.unit);
-        if (st != GK_OK) { say(why, "unknown unit in", s); return st; }
+        if (st != GK_OK) {
+            say(why, "unknown unit in", s);
+            return st;
+        }
         if (unit_dim(out.unit) != DIM_PRESSURE) {
             say(why, "gauge mark on a unit that is not a pressure in", s);
             return GK_ERR_ARGUMENT;
@@ -169,7 +205,10 @@ static gk_status parse_quantity(const char *s, quantity *q, detail *why) {
         v *= 3600.0;
     } else {
         st = gk_unit_parse(unit, &out.unit);
-        if (st != GK_OK) { say(why, "unknown unit in", s); return st; }
+        if (st != GK_OK) {
+            say(why, "unknown unit in", s);
+            return st;
+        }
         out.d = unit_dim(out.unit);
     }
     out.value = v;
@@ -179,47 +218,67 @@ static gk_status parse_quantity(const char *s, quantity *q, detail *why) {
 
 /* ------------------------------------------------------------------ settings */
 
-typedef enum out_format { OUT_TEXT, OUT_KV, OUT_JSON, OUT_CSV } out_format;
+typedef enum out_format {
+    OUT_TEXT,
+    OUT_KV,
+    OUT_JSON,
+    OUT_CSV
+} out_format;
 
 typedef struct settings {
     gk_eos model;
     gk_root root;
-    gk_pressure ambient;            /* for gauge readings */
+    gk_pressure ambient; /* for gauge readings */
     gk_reference ref;
     char ref_name[48];
     out_format format;
-    gk_unit show[GK_UNIT_COUNT];    /* display-unit overrides, in the order given */
+    gk_unit show[GK_UNIT_COUNT]; /* display-unit overrides, in the order given */
     size_t show_count;
 } settings;
 
 static const char *model_name(gk_eos e) {
     switch (e) {
-    case GK_EOS_IDEAL: return "ideal";
-    case GK_EOS_VAN_DER_WAALS: return "vdw";
-    case GK_EOS_REDLICH_KWONG: return "rk";
-    case GK_EOS_SOAVE_REDLICH_KWONG: return "srk";
-    case GK_EOS_PENG_ROBINSON: return "pr";
-    default: return "?";
+        case GK_EOS_IDEAL:
+            return "ideal";
+        case GK_EOS_VAN_DER_WAALS:
+            return "vdw";
+        case GK_EOS_REDLICH_KWONG:
+            return "rk";
+        case GK_EOS_SOAVE_REDLICH_KWONG:
+            return "srk";
+        case GK_EOS_PENG_ROBINSON:
+            return "pr";
+        default:
+            return "?";
     }
 }
 
 static const char *model_title(gk_eos e) {
     switch (e) {
-    case GK_EOS_IDEAL: return "ideal gas";
-    case GK_EOS_VAN_DER_WAALS: return "van der Waals";
-    case GK_EOS_REDLICH_KWONG: return "Redlich-Kwong";
-    case GK_EOS_SOAVE_REDLICH_KWONG: return "Soave-Redlich-Kwong";
-    case GK_EOS_PENG_ROBINSON: return "Peng-Robinson";
-    default: return "?";
+        case GK_EOS_IDEAL:
+            return "ideal gas";
+        case GK_EOS_VAN_DER_WAALS:
+            return "van der Waals";
+        case GK_EOS_REDLICH_KWONG:
+            return "Redlich-Kwong";
+        case GK_EOS_SOAVE_REDLICH_KWONG:
+            return "Soave-Redlich-Kwong";
+        case GK_EOS_PENG_ROBINSON:
+            return "Peng-Robinson";
+        default:
+            return "?";
     }
 }
 
 static int parse_model(const char *s, gk_eos *out) {
-    static const gk_eos all[] = {GK_EOS_IDEAL, GK_EOS_VAN_DER_WAALS, GK_EOS_REDLICH_KWONG,
-                                 GK_EOS_SOAVE_REDLICH_KWONG, GK_EOS_PENG_ROBINSON};
+    static const gk_eos all[] = { GK_EOS_IDEAL, GK_EOS_VAN_DER_WAALS, GK_EOS_REDLICH_KWONG,
+                                  GK_EOS_SOAVE_REDLICH_KWONG, GK_EOS_PENG_ROBINSON };
     size_t i;
     for (i = 0; i < sizeof all / sizeof all[0]; i++) {
-        if (strcmp(s, model_name(all[i])) == 0) { *out = all[i]; return 1; }
+        if (strcmp(s, model_name(all[i])) == 0) {
+            *out = all[i];
+            return 1;
+        }
     }
     return 0;
 }
@@ -229,34 +288,46 @@ static const char *root_name(gk_root r) {
 }
 
 static int parse_root(const char *s, gk_root *out) {
-    if (strcmp(s, "stable") == 0) { *out = GK_ROOT_STABLE; return 1; }
-    if (strcmp(s, "gas") == 0) { *out = GK_ROOT_GAS; return 1; }
-    if (strcmp(s, "liquid") == 0) { *out = GK_ROOT_LIQUID; return 1; }
+    if (strcmp(s, "stable") == 0) {
+        *out = GK_ROOT_STABLE;
+        return 1;
+    }
+    if (strcmp(s, "gas") == 0) {
+        *out = GK_ROOT_GAS;
+        return 1;
+    }
+    if (strcmp(s, "liquid") == 0) {
+        *out = GK_ROOT_LIQUID;
+        return 1;
+    }
     return 0;
 }
 
 /* Named reference conditions of the tool, over gk_reference_get(). */
+/* clang-format off */
 static const struct { const char *name; gk_reference_id id; } ref_names[] = {
     {"0C", GK_REF_0C_101325PA},     {"0C-100kPa", GK_REF_0C_100KPA},
     {"15C", GK_REF_15C_101325PA},   {"20C", GK_REF_20C_101325PA},
     {"25C", GK_REF_25C_101325PA},   {"60F", GK_REF_60F_14696PSI},
 };
+/* clang-format on */
 
 /* A pressure quantity to an absolute pressure (gauge readings over the barometer). */
-static gk_status to_pressure(const quantity *q, gk_pressure ambient, gk_pressure *out, detail *why) {
+static gk_status to_pressure(const quantity *q, gk_pressure ambient, gk_pressure *out,
+                             detail *why) {
     gk_status st;
     if (q->gauge) {
         st = gk_pressure_from_gauge(R(q->value), q->unit, ambient, out);
     } else {
         st = gk_pressure_from(R(q->value), q->unit, out);
     }
-    if (st != GK_OK) say(why, "pressure", q->text);
+    if (st != GK_OK) { say(why, "pressure", q->text); }
     return st;
 }
 
 static gk_status to_temperature(const quantity *q, gk_temperature *out, detail *why) {
     gk_status st = gk_temperature_from(R(q->value), q->unit, out);
-    if (st != GK_OK) say(why, "temperature", q->text);
+    if (st != GK_OK) { say(why, "temperature", q->text); }
     return st;
 }
 
@@ -267,7 +338,9 @@ static gk_status parse_reference(const char *s, const settings *set, gk_referenc
     const char *at = strchr(s, '@');
     if (at == NULL) {
         for (i = 0; i < sizeof ref_names / sizeof ref_names[0]; i++) {
-            if (strcmp(s, ref_names[i].name) == 0) return gk_reference_get(ref_names[i].id, out);
+            if (strcmp(s, ref_names[i].name) == 0) {
+                return gk_reference_get(ref_names[i].id, out);
+            }
         }
         say(why, "unknown reference condition", s);
         return GK_ERR_NOT_FOUND;
@@ -277,21 +350,24 @@ static gk_status parse_reference(const char *s, const settings *set, gk_referenc
         quantity qp, qt;
         gk_reference r;
         gk_status st;
-        if (n >= sizeof left) { say(why, "reference text too long", s); return GK_ERR_PARSE; }
+        if (n >= sizeof left) {
+            say(why, "reference text too long", s);
+            return GK_ERR_PARSE;
+        }
         memcpy(left, s, n);
         left[n] = '\0';
         st = parse_quantity(left, &qp, why);
-        if (st != GK_OK) return st;
+        if (st != GK_OK) { return st; }
         st = parse_quantity(at + 1, &qt, why);
-        if (st != GK_OK) return st;
+        if (st != GK_OK) { return st; }
         if (qp.d != DIM_PRESSURE || qt.d != DIM_TEMPERATURE) {
             say(why, "reference must be PRESSURE@TEMPERATURE, not", s);
             return GK_ERR_ARGUMENT;
         }
         st = to_pressure(&qp, set->ambient, &r.p, why);
-        if (st != GK_OK) return st;
+        if (st != GK_OK) { return st; }
         st = to_temperature(&qt, &r.t, why);
-        if (st != GK_OK) return st;
+        if (st != GK_OK) { return st; }
         *out = r;
         return GK_OK;
     }
@@ -299,7 +375,10 @@ static gk_status parse_reference(const char *s, const settings *set, gk_referenc
 
 /* ------------------------------------------------------------------ output records */
 
-typedef enum fkind { F_REAL, F_TEXT } fkind;
+typedef enum fkind {
+    F_REAL,
+    F_TEXT
+} fkind;
 
 /* One output field: its machine key, its label for people, and its unit. Real fields with a
    gaskit SI unit are stored in SI and shown in the default (or overridden) display unit;
@@ -308,9 +387,9 @@ typedef struct field {
     const char *key;
     const char *label;
     fkind kind;
-    gk_unit si;            /* GK_UNIT_COUNT: no gaskit unit (see fixed) */
-    gk_unit show;          /* default display unit */
-    const char *fixed;     /* unit text of a field without a gaskit unit ("" = none) */
+    gk_unit si;        /* GK_UNIT_COUNT: no gaskit unit (see fixed) */
+    gk_unit show;      /* default display unit */
+    const char *fixed; /* unit text of a field without a gaskit unit ("" = none) */
 } field;
 
 typedef struct record {
@@ -331,19 +410,25 @@ static void rec_init(record *r, const field *f, size_t n) {
 static size_t rec_index(const record *r, const char *key) {
     size_t i;
     for (i = 0; i < r->n; i++) {
-        if (strcmp(r->f[i].key, key) == 0) return i;
+        if (strcmp(r->f[i].key, key) == 0) { return i; }
     }
     return r->n;
 }
 
 static void rec_real(record *r, const char *key, double v) {
     size_t i = rec_index(r, key);
-    if (i < r->n) { r->set[i] = 1; r->v[i] = v; }
+    if (i < r->n) {
+        r->set[i] = 1;
+        r->v[i] = v;
+    }
 }
 
 static void rec_text(record *r, const char *key, const char *s) {
     size_t i = rec_index(r, key);
-    if (i < r->n) { r->set[i] = 1; r->s[i] = s; }
+    if (i < r->n) {
+        r->set[i] = 1;
+        r->s[i] = s;
+    }
 }
 
 /* The display unit of a field under the --units overrides (last matching override wins). */
@@ -352,7 +437,7 @@ static gk_unit display_unit(const settings *set, const field *f) {
     size_t i;
     for (i = 0; i < set->show_count; i++) {
         gk_real tmp;
-        if (gk_convert(R(1.0), f->si, set->show[i], &tmp) == GK_OK) u = set->show[i];
+        if (gk_convert(R(1.0), f->si, set->show[i], &tmp) == GK_OK) { u = set->show[i]; }
     }
     return u;
 }
@@ -361,18 +446,25 @@ static void print_json_string(FILE *out, const char *s) {
     fputc('"', out);
     for (; *s != '\0'; s++) {
         unsigned char c = (unsigned char)*s;
-        if (c == '"' || c == '\\') fprintf(out, "\\%c", c);
-        else if (c < 0x20) fprintf(out, "\\u%04x", (unsigned)c);
-        else fputc(c, out);
+        if (c == '"' || c == '\\') {
+            fprintf(out, "\\%c", c);
+        } else if (c < 0x20) {
+            fprintf(out, "\\u%04x", (unsigned)c);
+        } else {
+            fputc(c, out);
+        }
     }
     fputc('"', out);
 }
 
 static void print_csv_text(FILE *out, const char *s) {
-    if (strpbrk(s, ",\"\n\r") == NULL) { fputs(s, out); return; }
+    if (strpbrk(s, ",\"\n\r") == NULL) {
+        fputs(s, out);
+        return;
+    }
     fputc('"', out);
     for (; *s != '\0'; s++) {
-        if (*s == '"') fputc('"', out);
+        if (*s == '"') { fputc('"', out); }
         fputc(*s, out);
     }
     fputc('"', out);
@@ -381,17 +473,20 @@ static void print_csv_text(FILE *out, const char *s) {
 /* Prints a record. Text: one "label  value unit" line per set field, values in display
    units. kv: "key=value" pairs on one line, SI values. JSON: one object per line, SI values.
    CSV (batch): the line number, status and every field in schema order (empty when unset). */
-static void rec_print(FILE *out, const settings *set, const record *r, const char *word,
-                      long line, gk_status st, const char *message) {
+static void rec_print(FILE *out, const settings *set, const record *r, const char *word, long line,
+                      gk_status st, const char *message) {
     size_t i;
     if (set->format == OUT_CSV) {
         fprintf(out, "%ld,%s,", line, status_token(st));
         print_csv_text(out, message);
         for (i = 0; i < r->n; i++) {
             fputc(',', out);
-            if (!r->set[i]) continue;
-            if (r->f[i].kind == F_TEXT) print_csv_text(out, r->s[i]);
-            else fprintf(out, "%.10g", r->v[i]);
+            if (!r->set[i]) { continue; }
+            if (r->f[i].kind == F_TEXT) {
+                print_csv_text(out, r->s[i]);
+            } else {
+                fprintf(out, "%.10g", r->v[i]);
+            }
         }
         fputc('\n', out);
         return;
@@ -401,12 +496,15 @@ static void rec_print(FILE *out, const settings *set, const record *r, const cha
         fputs("\"word\":", out);
         print_json_string(out, word);
         for (i = 0; i < r->n; i++) {
-            if (!r->set[i]) continue;
+            if (!r->set[i]) { continue; }
             fputc(',', out);
             print_json_string(out, r->f[i].key);
             fputc(':', out);
-            if (r->f[i].kind == F_TEXT) print_json_string(out, r->s[i]);
-            else fprintf(out, "%.10g", r->v[i]);
+            if (r->f[i].kind == F_TEXT) {
+                print_json_string(out, r->s[i]);
+            } else {
+                fprintf(out, "%.10g", r->v[i]);
+            }
         }
         fputs("}\n", out);
         return;
@@ -414,12 +512,14 @@ static void rec_print(FILE *out, const settings *set, const record *r, const cha
     if (set->format == OUT_KV) {
         fprintf(out, "word=%s", word);
         for (i = 0; i < r->n; i++) {
-            if (!r->set[i]) continue;
+            if (!r->set[i]) { continue; }
             fprintf(out, " %s=", r->f[i].key);
             if (r->f[i].kind == F_TEXT) {
                 /* kv values never hold spaces: they are replaced by '_' */
                 const char *s;
-                for (s = r->s[i]; *s != '\0'; s++) fputc((*s == ' ' || *s == '\t') ? '_' : *s, out);
+                for (s = r->s[i]; *s != '\0'; s++) {
+                    fputc((*s == ' ' || *s == '\t') ? '_' : *s, out);
+                }
             } else {
                 fprintf(out, "%.10g", r->v[i]);
             }
@@ -429,7 +529,7 @@ static void rec_print(FILE *out, const settings *set, const record *r, const cha
     }
     for (i = 0; i < r->n; i++) {
         const field *f = &r->f[i];
-        if (!r->set[i]) continue;
+        if (!r->set[i]) { continue; }
         if (f->kind == F_TEXT) {
             fprintf(out, "  %-30s %s\n", f->label, r->s[i]);
         } else if (f->si != GK_UNIT_COUNT) {
@@ -453,7 +553,7 @@ static void rec_print(FILE *out, const settings *set, const record *r, const cha
 static void rec_csv_header(FILE *out, const record *r) {
     size_t i;
     fputs("line,status,message", out);
-    for (i = 0; i < r->n; i++) fprintf(out, ",%s", r->f[i].key);
+    for (i = 0; i < r->n; i++) { fprintf(out, ",%s", r->f[i].key); }
     fputc('\n', out);
 }
 
@@ -472,14 +572,20 @@ static gk_status collect_args(int argc, char **argv, args *a, detail *why) {
     gk_status st;
     memset(a, 0, sizeof *a);
     for (i = 0; i < argc; i++) {
-        if (argv[i][0] == '\0') continue;   /* an empty CSV cell: an argument left out */
+        if (argv[i][0] == '\0') { continue; /* an empty CSV cell: an argument left out */ }
         if (looks_like_quantity(argv[i])) {
-            if (a->nq >= GKQ_CELLS_MAX) { say(why, "too many quantities at", argv[i]); return GK_ERR_ARGUMENT; }
+            if (a->nq >= GKQ_CELLS_MAX) {
+                say(why, "too many quantities at", argv[i]);
+                return GK_ERR_ARGUMENT;
+            }
             st = parse_quantity(argv[i], &a->q[a->nq], why);
-            if (st != GK_OK) return st;
+            if (st != GK_OK) { return st; }
             a->nq++;
         } else {
-            if (a->nw >= GKQ_CELLS_MAX) { say(why, "too many words at", argv[i]); return GK_ERR_ARGUMENT; }
+            if (a->nw >= GKQ_CELLS_MAX) {
+                say(why, "too many words at", argv[i]);
+                return GK_ERR_ARGUMENT;
+            }
             a->w[a->nw++] = argv[i];
         }
     }
@@ -491,14 +597,18 @@ static const quantity *take(args *a, dim d, size_t k) {
     size_t i, seen = 0;
     for (i = 0; i < a->nq; i++) {
         if (a->q[i].d == d) {
-            if (seen == k) { a->used_q[i] = 1; return &a->q[i]; }
+            if (seen == k) {
+                a->used_q[i] = 1;
+                return &a->q[i];
+            }
             seen++;
         }
     }
     return NULL;
 }
 
-static gk_status need(args *a, dim d, size_t k, const char *what, const quantity **out, detail *why) {
+static gk_status need(args *a, dim d, size_t k, const char *what, const quantity **out,
+                      detail *why) {
     const quantity *q = take(a, d, k);
     if (q == NULL) {
         size_t i;
@@ -526,7 +636,10 @@ static gk_status all_used(const args *a, size_t words_expected, detail *why) {
             return GK_ERR_ARGUMENT;
         }
     }
-    if (a->nw > words_expected) { say(why, "unexpected word", a->w[words_expected]); return GK_ERR_ARGUMENT; }
+    if (a->nw > words_expected) {
+        say(why, "unexpected word", a->w[words_expected]);
+        return GK_ERR_ARGUMENT;
+    }
     return GK_OK;
 }
 
@@ -545,19 +658,31 @@ static gk_status parse_fluid(const char *text, fluid_in *f, detail *why) {
     if (strchr(text, '=') != NULL) {
         char buf[GKQ_TEXT_MAX];
         size_t i;
-        if (strlen(text) >= sizeof buf) { say(why, "mixture text too long", text); return GK_ERR_PARSE; }
+        if (strlen(text) >= sizeof buf) {
+            say(why, "mixture text too long", text);
+            return GK_ERR_PARSE;
+        }
         copy_text(buf, sizeof buf, text);
         for (i = 0; buf[i] != '\0'; i++) {
-            if (buf[i] == ';') buf[i] = ',';
+            if (buf[i] == ';') { buf[i] = ','; }
         }
         st = gk_mixture_parse(buf, &f->mix);
-        if (st != GK_OK) { say(why, "mixture", text); return st; }
+        if (st != GK_OK) {
+            say(why, "mixture", text);
+            return st;
+        }
         st = gk_mixture_molar_mass(&f->mix, &f->m);
-        if (st != GK_OK) { say(why, "mixture", text); return st; }
+        if (st != GK_OK) {
+            say(why, "mixture", text);
+            return st;
+        }
         f->is_mix = 1;
     } else {
         st = gk_gas_find(text, &f->gas);
-        if (st != GK_OK) { say(why, "gas", text); return st; }
+        if (st != GK_OK) {
+            say(why, "gas", text);
+            return st;
+        }
         f->m = f->gas->molar_mass;
     }
     return GK_OK;
@@ -580,14 +705,18 @@ static gk_status need_word(const args *a, size_t k, const char *what, detail *wh
 }
 
 #define U_NONE GK_UNIT_COUNT
-#define CHECK(call, whattext, argtext)                                           \
-    do {                                                                         \
-        gk_status st_ = (call);                                                  \
-        if (st_ != GK_OK) { say(why, (whattext), (argtext)); return st_; }       \
-    } while (0)
+#define CHECK(call, whattext, argtext) \
+  do {                                 \
+    gk_status st_ = (call);            \
+    if (st_ != GK_OK) {                \
+      say(why, (whattext), (argtext)); \
+      return st_;                      \
+    }                                  \
+  } while (0)
 
 /* ------------------------------------------------------------------ word: state */
 
+/* clang-format off */
 static const field state_fields[] = {
     {"fluid", "fluid", F_TEXT, U_NONE, U_NONE, ""},
     {"model", "model", F_TEXT, U_NONE, U_NONE, ""},
@@ -608,6 +737,7 @@ static const field state_fields[] = {
     {"density_ideal", "density, ideal gas", F_REAL, GK_UNIT_KG_PER_M3, GK_UNIT_KG_PER_M3, ""},
     {"deviation", "real vs ideal density", F_REAL, U_NONE, U_NONE, "%"},
 };
+/* clang-format on */
 
 static gk_status word_state(const settings *set, args *a, record *r, detail *why) {
     const quantity *qp, *qt;
@@ -621,15 +751,16 @@ static gk_status word_state(const settings *set, args *a, record *r, detail *why
     int i;
 
     st = need_word(a, 0, "fluid (a gas or a mixture)", why);
-    if (st != GK_OK) return st;
-    if ((st = need(a, DIM_PRESSURE, 0, "pressure", &qp, why)) != GK_OK) return st;
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt, why)) != GK_OK) return st;
-    if ((st = all_used(a, 1, why)) != GK_OK) return st;
-    if ((st = parse_fluid(a->w[0], &f, why)) != GK_OK) return st;
-    if ((st = to_pressure(qp, set->ambient, &p, why)) != GK_OK) return st;
-    if ((st = to_temperature(qt, &t, why)) != GK_OK) return st;
+    if (st != GK_OK) { return st; }
+    if ((st = need(a, DIM_PRESSURE, 0, "pressure", &qp, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt, why)) != GK_OK) { return st; }
+    if ((st = all_used(a, 1, why)) != GK_OK) { return st; }
+    if ((st = parse_fluid(a->w[0], &f, why)) != GK_OK) { return st; }
+    if ((st = to_pressure(qp, set->ambient, &p, why)) != GK_OK) { return st; }
+    if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
     if (f.is_mix) {
-        CHECK(gk_mixture_eos_solve(set->model, &f.mix, NULL, p, t, set->root, &res), "state of", a->w[0]);
+        CHECK(gk_mixture_eos_solve(set->model, &f.mix, NULL, p, t, set->root, &res), "state of",
+              a->w[0]);
     } else {
         CHECK(gk_eos_solve(set->model, f.gas, p, t, set->root, &res), "state of", a->w[0]);
     }
@@ -647,10 +778,13 @@ static gk_status word_state(const settings *set, args *a, record *r, detail *why
     rec_real(r, "density", rho);
     rec_real(r, "phi", D(res.fugacity_coefficient));
     rec_real(r, "fugacity", D(res.fugacity_coefficient) * D(p.pa));
-    rec_text(r, "branch", res.branch == GK_ROOT_LIQUID ? "liquid" : "gas");
+    rec_text(r, "branch",
+             res.branch == GK_ROOT_LIQUID          ? "liquid"
+             : res.branch == GK_ROOT_SUPERCRITICAL ? "supercritical"
+                                                   : "gas");
     rec_real(r, "root_count", (double)res.root_count);
     for (i = 0; i < res.root_count && i < 3; i++) {
-        static const char *const keys[3] = {"z_root_1", "z_root_2", "z_root_3"};
+        static const char *const keys[3] = { "z_root_1", "z_root_2", "z_root_3" };
         rec_real(r, keys[i], D(res.z_roots[i]));
     }
     rec_real(r, "density_ideal", D(rho_i.kg_per_m3));
@@ -660,11 +794,13 @@ static gk_status word_state(const settings *set, args *a, record *r, detail *why
 
 /* ------------------------------------------------------------------ word: convert */
 
+/* clang-format off */
 static const field convert_fields[] = {
     {"from", "from", F_TEXT, U_NONE, U_NONE, ""},
     {"value", "value", F_REAL, U_NONE, U_NONE, ""},
     {"unit", "unit", F_TEXT, U_NONE, U_NONE, ""},
 };
+/* clang-format on */
 
 static gk_status word_convert(const settings *set, args *a, record *r, detail *why) {
     static char unit_text[48];
@@ -678,18 +814,24 @@ static gk_status word_convert(const settings *set, args *a, record *r, detail *w
         snprintf(why->text, sizeof why->text, "convert takes one quantity and a unit");
         return GK_ERR_ARGUMENT;
     }
-    if ((st = need_word(a, 0, "target unit", why)) != GK_OK) return st;
+    if ((st = need_word(a, 0, "target unit", why)) != GK_OK) { return st; }
     a->used_q[0] = 1;
-    if ((st = all_used(a, 1, why)) != GK_OK) return st;
+    if ((st = all_used(a, 1, why)) != GK_OK) { return st; }
     q = &a->q[0];
     if (q->d == DIM_TIME || q->d == DIM_NUMBER) {
         say(why, "convert works on gaskit units, not on", q->text);
         return GK_ERR_ARGUMENT;
     }
     /* the target unit is parsed as a quantity "1<unit>" to share the gauge mark */
-    if (strlen(a->w[0]) + 2 > sizeof probe) { say(why, "unit text too long", a->w[0]); return GK_ERR_PARSE; }
+    if (strlen(a->w[0]) + 2 > sizeof probe) {
+        say(why, "unit text too long", a->w[0]);
+        return GK_ERR_PARSE;
+    }
     snprintf(probe, sizeof probe, "1%s", a->w[0]);
-    if ((st = parse_quantity(probe, &qto, why)) != GK_OK) { say(why, "target unit", a->w[0]); return st; }
+    if ((st = parse_quantity(probe, &qto, why)) != GK_OK) {
+        say(why, "target unit", a->w[0]);
+        return st;
+    }
     if (qto.d != q->d) {
         snprintf(why->text, sizeof why->text, "cannot convert a %s to %.40s (a %s)", dim_name(q->d),
                  a->w[0], dim_name(qto.d));
@@ -697,9 +839,10 @@ static gk_status word_convert(const settings *set, args *a, record *r, detail *w
     }
     if (q->d == DIM_PRESSURE && (q->gauge || qto.gauge)) {
         gk_pressure p;
-        if ((st = to_pressure(q, set->ambient, &p, why)) != GK_OK) return st;
+        if ((st = to_pressure(q, set->ambient, &p, why)) != GK_OK) { return st; }
         if (qto.gauge) {
-            CHECK(gk_convert(R(D(p.pa) - D(set->ambient.pa)), GK_UNIT_PA, qto.unit, &out), "convert", q->text);
+            CHECK(gk_convert(R(D(p.pa) - D(set->ambient.pa)), GK_UNIT_PA, qto.unit, &out),
+                  "convert", q->text);
         } else {
             CHECK(gk_pressure_to(p, qto.unit, &out), "convert", q->text);
         }
@@ -716,6 +859,7 @@ static gk_status word_convert(const settings *set, args *a, record *r, detail *w
 
 /* ------------------------------------------------------------------ word: speeds */
 
+/* clang-format off */
 static const field speeds_fields[] = {
     {"fluid", "fluid", F_TEXT, U_NONE, U_NONE, ""},
     {"t", "temperature", F_REAL, GK_UNIT_K, GK_UNIT_DEGC, ""},
@@ -731,6 +875,7 @@ static const field speeds_fields[] = {
     {"mean_free_path", "mean free path", F_REAL, U_NONE, U_NONE, "m"},
     {"wall_flux", "wall collision flux", F_REAL, U_NONE, U_NONE, "mol/(m2 s)"},
 };
+/* clang-format on */
 
 static gk_status word_speeds(const settings *set, args *a, record *r, detail *why) {
     const quantity *qt, *qp;
@@ -739,12 +884,12 @@ static gk_status word_speeds(const settings *set, args *a, record *r, detail *wh
     gk_speed u;
     gk_status st;
 
-    if ((st = need_word(a, 0, "fluid", why)) != GK_OK) return st;
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt, why)) != GK_OK) return st;
+    if ((st = need_word(a, 0, "fluid", why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt, why)) != GK_OK) { return st; }
     qp = take(a, DIM_PRESSURE, 0);
-    if ((st = all_used(a, 2, why)) != GK_OK) return st;
-    if ((st = parse_fluid(a->w[0], &f, why)) != GK_OK) return st;
-    if ((st = to_temperature(qt, &t, why)) != GK_OK) return st;
+    if ((st = all_used(a, 2, why)) != GK_OK) { return st; }
+    if ((st = parse_fluid(a->w[0], &f, why)) != GK_OK) { return st; }
+    if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
     rec_text(r, "fluid", a->w[0]);
     rec_real(r, "t", D(t.k));
     rec_real(r, "molar_mass", D(f.m.kg_per_mol));
@@ -755,12 +900,13 @@ static gk_status word_speeds(const settings *set, args *a, record *r, detail *wh
     CHECK(gk_speed_rms(t, f.m, &u), "speed of", a->w[0]);
     rec_real(r, "rms", D(u.m_per_s));
     if (!f.is_mix && f.gas->heat_capacity_ratio > R(1.0)) {
-        CHECK(gk_speed_of_sound_ideal(t, f.m, f.gas->heat_capacity_ratio, &u), "speed of sound in", a->w[0]);
+        CHECK(gk_speed_of_sound_ideal(t, f.m, f.gas->heat_capacity_ratio, &u), "speed of sound in",
+              a->w[0]);
         rec_real(r, "sound", D(u.m_per_s));
     }
     if (a->nw > 1) {
         gk_real ratio;
-        if ((st = parse_fluid(a->w[1], &g, why)) != GK_OK) return st;
+        if ((st = parse_fluid(a->w[1], &g, why)) != GK_OK) { return st; }
         CHECK(gk_effusion_ratio(f.m, g.m, &ratio), "effusion against", a->w[1]);
         rec_text(r, "other", a->w[1]);
         rec_real(r, "effusion_ratio", D(ratio));
@@ -769,13 +915,14 @@ static gk_status word_speeds(const settings *set, args *a, record *r, detail *wh
     if (qp != NULL) {
         gk_pressure p;
         gk_real flux;
-        if ((st = to_pressure(qp, set->ambient, &p, why)) != GK_OK) return st;
+        if ((st = to_pressure(qp, set->ambient, &p, why)) != GK_OK) { return st; }
         rec_real(r, "p", D(p.pa));
         CHECK(gk_wall_flux(p, t, f.m, &flux), "wall flux of", a->w[0]);
         rec_real(r, "wall_flux", D(flux));
         if (!f.is_mix && f.gas->collision_diameter > R(0.0)) {
             gk_real lambda;
-            CHECK(gk_mean_free_path(p, t, f.gas->collision_diameter, &lambda), "mean free path of", a->w[0]);
+            CHECK(gk_mean_free_path(p, t, f.gas->collision_diameter, &lambda), "mean free path of",
+                  a->w[0]);
             rec_real(r, "mean_free_path", D(lambda));
         }
     }
@@ -784,11 +931,13 @@ static gk_status word_speeds(const settings *set, args *a, record *r, detail *wh
 
 /* ------------------------------------------------------------------ word: water */
 
+/* clang-format off */
 static const field water_fields[] = {
     {"t", "saturation temperature", F_REAL, GK_UNIT_K, GK_UNIT_DEGC, ""},
     {"p_sat", "vapour pressure", F_REAL, GK_UNIT_PA, GK_UNIT_KPA, ""},
     {"phase", "over", F_TEXT, U_NONE, U_NONE, ""},
 };
+/* clang-format on */
 
 static gk_status word_water(const settings *set, args *a, record *r, detail *why) {
     const quantity *q;
@@ -801,12 +950,12 @@ static gk_status word_water(const settings *set, args *a, record *r, detail *why
     }
     q = &a->q[0];
     a->used_q[0] = 1;
-    if ((st = all_used(a, 0, why)) != GK_OK) return st;
+    if ((st = all_used(a, 0, why)) != GK_OK) { return st; }
     if (q->d == DIM_TEMPERATURE) {
-        if ((st = to_temperature(q, &t, why)) != GK_OK) return st;
+        if ((st = to_temperature(q, &t, why)) != GK_OK) { return st; }
         CHECK(gk_water_vapour_pressure(t, &p), "vapour pressure at", q->text);
     } else if (q->d == DIM_PRESSURE) {
-        if ((st = to_pressure(q, set->ambient, &p, why)) != GK_OK) return st;
+        if ((st = to_pressure(q, set->ambient, &p, why)) != GK_OK) { return st; }
         CHECK(gk_water_saturation_temperature(p, &t), "saturation temperature at", q->text);
     } else {
         say(why, "water takes a temperature or a pressure, not", q->text);
@@ -821,6 +970,7 @@ static gk_status word_water(const settings *set, args *a, record *r, detail *why
 
 /* ------------------------------------------------------------------ word: dew */
 
+/* clang-format off */
 static const field dew_fields[] = {
     {"p", "total pressure (absolute)", F_REAL, GK_UNIT_PA, GK_UNIT_KPA, ""},
     {"t", "gas temperature", F_REAL, GK_UNIT_K, GK_UNIT_DEGC, ""},
@@ -830,6 +980,7 @@ static const field dew_fields[] = {
     {"p_dry", "dry-gas partial pressure", F_REAL, GK_UNIT_PA, GK_UNIT_KPA, ""},
     {"dew_point", "dew (or frost) point", F_REAL, GK_UNIT_K, GK_UNIT_DEGC, ""},
 };
+/* clang-format on */
 
 static gk_status word_dew(const settings *set, args *a, record *r, detail *why) {
     const quantity *qp, *qt, *qrh;
@@ -837,11 +988,11 @@ static gk_status word_dew(const settings *set, args *a, record *r, detail *why) 
     gk_temperature t, dew;
     gk_status st;
 
-    if ((st = need(a, DIM_PRESSURE, 0, "pressure", &qp, why)) != GK_OK) return st;
+    if ((st = need(a, DIM_PRESSURE, 0, "pressure", &qp, why)) != GK_OK) { return st; }
     qt = take(a, DIM_TEMPERATURE, 0);
     qrh = take(a, DIM_NUMBER, 0);
-    if ((st = all_used(a, 0, why)) != GK_OK) return st;
-    if ((st = to_pressure(qp, set->ambient, &p, why)) != GK_OK) return st;
+    if ((st = all_used(a, 0, why)) != GK_OK) { return st; }
+    if ((st = to_pressure(qp, set->ambient, &p, why)) != GK_OK) { return st; }
     if (qt == NULL && qrh == NULL) {
         /* the pressure is the water partial pressure */
         CHECK(gk_dew_point(p, &dew), "dew point at", qp->text);
@@ -851,10 +1002,11 @@ static gk_status word_dew(const settings *set, args *a, record *r, detail *why) 
     }
     if (qt == NULL || qrh == NULL) {
         snprintf(why->text, sizeof why->text,
-                 "dew takes a water partial pressure, or a total pressure, a temperature and a humidity");
+                 "dew takes a water partial pressure, or a total pressure, a temperature and a "
+                 "humidity");
         return GK_ERR_ARGUMENT;
     }
-    if ((st = to_temperature(qt, &t, why)) != GK_OK) return st;
+    if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
     CHECK(gk_dry_gas_pressure(p, t, R(qrh->value), &pdry), "wet gas at", qp->text);
     if (!(D(p.pa) - D(pdry.pa) > 0.0)) {
         /* completely dry gas: no dew point */
@@ -880,6 +1032,7 @@ static gk_status word_dew(const settings *set, args *a, record *r, detail *why) 
 
 /* ------------------------------------------------------------------ word: contents */
 
+/* clang-format off */
 static const field contents_fields[] = {
     {"fluid", "fluid", F_TEXT, U_NONE, U_NONE, ""},
     {"model", "model", F_TEXT, U_NONE, U_NONE, ""},
@@ -896,6 +1049,7 @@ static const field contents_fields[] = {
     {"reference_volume_ideal", "volume at reference, ideal gas", F_REAL, GK_UNIT_M3, GK_UNIT_L, ""},
     {"deviation", "real vs ideal amount", F_REAL, U_NONE, U_NONE, "%"},
 };
+/* clang-format on */
 
 static gk_status word_contents(const settings *set, args *a, record *r, detail *why) {
     const quantity *qv, *qp, *qt;
@@ -906,17 +1060,19 @@ static gk_status word_contents(const settings *set, args *a, record *r, detail *
     gk_contents c, ci;
     gk_status st;
 
-    if ((st = need_word(a, 0, "fluid", why)) != GK_OK) return st;
-    if ((st = need(a, DIM_VOLUME, 0, "vessel volume", &qv, why)) != GK_OK) return st;
-    if ((st = need(a, DIM_PRESSURE, 0, "pressure", &qp, why)) != GK_OK) return st;
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt, why)) != GK_OK) return st;
-    if ((st = all_used(a, 1, why)) != GK_OK) return st;
-    if ((st = parse_fluid(a->w[0], &f, why)) != GK_OK) return st;
+    if ((st = need_word(a, 0, "fluid", why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_VOLUME, 0, "vessel volume", &qv, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_PRESSURE, 0, "pressure", &qp, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt, why)) != GK_OK) { return st; }
+    if ((st = all_used(a, 1, why)) != GK_OK) { return st; }
+    if ((st = parse_fluid(a->w[0], &f, why)) != GK_OK) { return st; }
     CHECK(gk_volume_from(R(qv->value), qv->unit, &v), "volume", qv->text);
-    if ((st = to_pressure(qp, set->ambient, &p, why)) != GK_OK) return st;
-    if ((st = to_temperature(qt, &t, why)) != GK_OK) return st;
-    CHECK(gk_vessel_contents(set->model, as_fluid(&f), v, p, t, set->ref, &c), "contents of", a->w[0]);
-    CHECK(gk_vessel_contents(GK_EOS_IDEAL, as_fluid(&f), v, p, t, set->ref, &ci), "ideal contents of", a->w[0]);
+    if ((st = to_pressure(qp, set->ambient, &p, why)) != GK_OK) { return st; }
+    if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
+    CHECK(gk_vessel_contents(set->model, as_fluid(&f), v, p, t, set->ref, &c), "contents of",
+          a->w[0]);
+    CHECK(gk_vessel_contents(GK_EOS_IDEAL, as_fluid(&f), v, p, t, set->ref, &ci),
+          "ideal contents of", a->w[0]);
     rec_text(r, "fluid", a->w[0]);
     rec_text(r, "model", model_name(set->model));
     rec_text(r, "reference", set->ref_name);
@@ -936,6 +1092,7 @@ static gk_status word_contents(const settings *set, args *a, record *r, detail *
 
 /* ------------------------------------------------------------------ word: leak */
 
+/* clang-format off */
 static const field leak_fields[] = {
     {"fluid", "fluid", F_TEXT, U_NONE, U_NONE, ""},
     {"model", "model", F_TEXT, U_NONE, U_NONE, ""},
@@ -951,6 +1108,7 @@ static const field leak_fields[] = {
     {"reference_flow", "leak at reference", F_REAL, GK_UNIT_M3_PER_S, GK_UNIT_ML_PER_MIN, ""},
     {"reference_flow_ideal", "leak at reference, ideal gas", F_REAL, GK_UNIT_M3_PER_S, GK_UNIT_ML_PER_MIN, ""},
 };
+/* clang-format on */
 
 static gk_status word_leak(const settings *set, args *a, record *r, detail *why) {
     const quantity *qv, *qp1, *qp2, *qt1, *qt2, *qd;
@@ -961,25 +1119,27 @@ static gk_status word_leak(const settings *set, args *a, record *r, detail *why)
     gk_leak lk, lki;
     gk_status st;
 
-    if ((st = need_word(a, 0, "fluid", why)) != GK_OK) return st;
-    if ((st = need(a, DIM_VOLUME, 0, "test volume", &qv, why)) != GK_OK) return st;
-    if ((st = need(a, DIM_PRESSURE, 0, "start pressure", &qp1, why)) != GK_OK) return st;
-    if ((st = need(a, DIM_PRESSURE, 1, "end pressure", &qp2, why)) != GK_OK) return st;
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt1, why)) != GK_OK) return st;
+    if ((st = need_word(a, 0, "fluid", why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_VOLUME, 0, "test volume", &qv, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_PRESSURE, 0, "start pressure", &qp1, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_PRESSURE, 1, "end pressure", &qp2, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt1, why)) != GK_OK) { return st; }
     qt2 = take(a, DIM_TEMPERATURE, 1);
-    if (qt2 == NULL) qt2 = qt1;   /* one temperature: the same at start and end */
-    if ((st = need(a, DIM_TIME, 0, "elapsed time", &qd, why)) != GK_OK) return st;
-    if ((st = all_used(a, 1, why)) != GK_OK) return st;
-    if ((st = parse_fluid(a->w[0], &f, why)) != GK_OK) return st;
+    if (qt2 == NULL) { qt2 = qt1; /* one temperature: the same at start and end */ }
+    if ((st = need(a, DIM_TIME, 0, "elapsed time", &qd, why)) != GK_OK) { return st; }
+    if ((st = all_used(a, 1, why)) != GK_OK) { return st; }
+    if ((st = parse_fluid(a->w[0], &f, why)) != GK_OK) { return st; }
     CHECK(gk_volume_from(R(qv->value), qv->unit, &v), "volume", qv->text);
-    if ((st = to_pressure(qp1, set->ambient, &p1, why)) != GK_OK) return st;
-    if ((st = to_pressure(qp2, set->ambient, &p2, why)) != GK_OK) return st;
-    if ((st = to_temperature(qt1, &t1, why)) != GK_OK) return st;
-    if ((st = to_temperature(qt2, &t2, why)) != GK_OK) return st;
+    if ((st = to_pressure(qp1, set->ambient, &p1, why)) != GK_OK) { return st; }
+    if ((st = to_pressure(qp2, set->ambient, &p2, why)) != GK_OK) { return st; }
+    if ((st = to_temperature(qt1, &t1, why)) != GK_OK) { return st; }
+    if ((st = to_temperature(qt2, &t2, why)) != GK_OK) { return st; }
     CHECK(gk_leak_rate_pressure_decay(set->model, as_fluid(&f), v, p1, t1, p2, t2, R(qd->value),
-                                      set->ref, &lk), "leak of", a->w[0]);
+                                      set->ref, &lk),
+          "leak of", a->w[0]);
     CHECK(gk_leak_rate_pressure_decay(GK_EOS_IDEAL, as_fluid(&f), v, p1, t1, p2, t2, R(qd->value),
-                                      set->ref, &lki), "ideal leak of", a->w[0]);
+                                      set->ref, &lki),
+          "ideal leak of", a->w[0]);
     rec_text(r, "fluid", a->w[0]);
     rec_text(r, "model", model_name(set->model));
     rec_text(r, "reference", set->ref_name);
@@ -998,6 +1158,7 @@ static gk_status word_leak(const settings *set, args *a, record *r, detail *why)
 
 /* ------------------------------------------------------------------ word: gases */
 
+/* clang-format off */
 static const field gas_fields[] = {
     {"formula", "formula", F_TEXT, U_NONE, U_NONE, ""},
     {"name", "name", F_TEXT, U_NONE, U_NONE, ""},
@@ -1009,6 +1170,7 @@ static const field gas_fields[] = {
     {"vdw_a", "van der Waals a", F_REAL, U_NONE, U_NONE, "Pa m6/mol2"},
     {"vdw_b", "van der Waals b", F_REAL, U_NONE, U_NONE, "m3/mol"},
 };
+/* clang-format on */
 
 static void fill_gas(record *r, const gk_gas *g) {
     rec_text(r, "formula", g->formula != NULL ? g->formula : "");
@@ -1017,7 +1179,7 @@ static void fill_gas(record *r, const gk_gas *g) {
     rec_real(r, "tc", D(g->critical_temperature.k));
     rec_real(r, "pc", D(g->critical_pressure.pa));
     rec_real(r, "omega", D(g->acentric_factor));
-    if (g->heat_capacity_ratio > R(0.0)) rec_real(r, "gamma", D(g->heat_capacity_ratio));
+    if (g->heat_capacity_ratio > R(0.0)) { rec_real(r, "gamma", D(g->heat_capacity_ratio)); }
     rec_real(r, "vdw_a", D(g->vdw_a));
     rec_real(r, "vdw_b", D(g->vdw_b));
 }
@@ -1030,17 +1192,20 @@ static int word_gases(const settings *set, int argc) {
         return 2;
     }
     if (set->format == OUT_TEXT) {
-        printf("%-10s %-22s %10s %9s %9s %7s %6s\n", "formula", "name", "M g/mol", "Tc K",
-               "pc bar", "omega", "cp/cv");
+        printf("%-10s %-22s %10s %9s %9s %7s %6s\n", "formula", "name", "M g/mol", "Tc K", "pc bar",
+               "omega", "cp/cv");
         for (i = 0; i < n; i++) {
             const gk_gas *g = gk_gas_at(i);
-            if (g == NULL) break;
+            if (g == NULL) { break; }
             printf("%-10s %-22s %10.4f %9.2f %9.3f %7.3f ", g->formula ? g->formula : "",
                    g->name ? g->name : "", D(g->molar_mass.kg_per_mol) * 1000.0,
                    D(g->critical_temperature.k), D(g->critical_pressure.pa) / 1e5,
                    D(g->acentric_factor));
-            if (g->heat_capacity_ratio > R(0.0)) printf("%6.3f\n", D(g->heat_capacity_ratio));
-            else printf("%6s\n", "-");
+            if (g->heat_capacity_ratio > R(0.0)) {
+                printf("%6.3f\n", D(g->heat_capacity_ratio));
+            } else {
+                printf("%6s\n", "-");
+            }
         }
         return 0;
     }
@@ -1050,7 +1215,7 @@ static int word_gases(const settings *set, int argc) {
     }
     for (i = 0; i < n; i++) {
         const gk_gas *g = gk_gas_at(i);
-        if (g == NULL) break;
+        if (g == NULL) { break; }
         rec_init(&r, gas_fields, sizeof gas_fields / sizeof gas_fields[0]);
         fill_gas(&r, g);
         rec_print(stdout, set, &r, "gases", (long)(i + 1), GK_OK, "");
@@ -1069,26 +1234,26 @@ static const struct word {
     size_t nfields;
     const char *title;
 } words[] = {
-    {"state", word_state, state_fields, sizeof state_fields / sizeof state_fields[0],
-     "state of a gas or mixture"},
-    {"convert", word_convert, convert_fields, sizeof convert_fields / sizeof convert_fields[0],
-     "unit conversion"},
-    {"speeds", word_speeds, speeds_fields, sizeof speeds_fields / sizeof speeds_fields[0],
-     "molecular speeds and effusion"},
-    {"water", word_water, water_fields, sizeof water_fields / sizeof water_fields[0],
-     "water vapour pressure"},
-    {"dew", word_dew, dew_fields, sizeof dew_fields / sizeof dew_fields[0],
-     "dew point and wet gas"},
-    {"contents", word_contents, contents_fields, sizeof contents_fields / sizeof contents_fields[0],
-     "vessel contents"},
-    {"leak", word_leak, leak_fields, sizeof leak_fields / sizeof leak_fields[0],
-     "pressure-decay leak rate"},
+    { "state", word_state, state_fields, sizeof state_fields / sizeof state_fields[0],
+      "state of a gas or mixture" },
+    { "convert", word_convert, convert_fields, sizeof convert_fields / sizeof convert_fields[0],
+      "unit conversion" },
+    { "speeds", word_speeds, speeds_fields, sizeof speeds_fields / sizeof speeds_fields[0],
+      "molecular speeds and effusion" },
+    { "water", word_water, water_fields, sizeof water_fields / sizeof water_fields[0],
+      "water vapour pressure" },
+    { "dew", word_dew, dew_fields, sizeof dew_fields / sizeof dew_fields[0],
+      "dew point and wet gas" },
+    { "contents", word_contents, contents_fields,
+      sizeof contents_fields / sizeof contents_fields[0], "vessel contents" },
+    { "leak", word_leak, leak_fields, sizeof leak_fields / sizeof leak_fields[0],
+      "pressure-decay leak rate" },
 };
 
 static const struct word *find_word(const char *name) {
     size_t i;
     for (i = 0; i < sizeof words / sizeof words[0]; i++) {
-        if (strcmp(words[i].name, name) == 0) return &words[i];
+        if (strcmp(words[i].name, name) == 0) { return &words[i]; }
     }
     return NULL;
 }
@@ -1102,28 +1267,35 @@ static int split_csv(char *line, char **cells, int max) {
     char *p = line;
     for (;;) {
         char *start, *w;
-        while (*p == ' ' || *p == '\t') p++;
-        if (n >= max) return -1;
+        while (*p == ' ' || *p == '\t') { p++; }
+        if (n >= max) { return -1; }
         start = w = p;
         if (*p == '"') {
             p++;
             for (;;) {
-                if (*p == '\0') return -1;
+                if (*p == '\0') { return -1; }
                 if (*p == '"') {
-                    if (p[1] == '"') { *w++ = '"'; p += 2; continue; }
+                    if (p[1] == '"') {
+                        *w++ = '"';
+                        p += 2;
+                        continue;
+                    }
                     p++;
                     break;
                 }
                 *w++ = *p++;
             }
-            while (*p == ' ' || *p == '\t') p++;
-            if (*p != ',' && *p != '\0') return -1;
+            while (*p == ' ' || *p == '\t') { p++; }
+            if (*p != ',' && *p != '\0') { return -1; }
         } else {
-            while (*p != ',' && *p != '\0') *w++ = *p++;
-            while (w > start && (w[-1] == ' ' || w[-1] == '\t')) w--;
+            while (*p != ',' && *p != '\0') { *w++ = *p++; }
+            while (w > start && (w[-1] == ' ' || w[-1] == '\t')) { w--; }
         }
         cells[n++] = start;
-        if (*p == '\0') { *w = '\0'; break; }
+        if (*p == '\0') {
+            *w = '\0';
+            break;
+        }
         *w = '\0';
         p++;
     }
@@ -1140,12 +1312,15 @@ static long read_line(FILE *in, char *buf, size_t cap, int *too_long, int *has_n
     *has_nul = 0;
     while ((c = getc(in)) != EOF) {
         any = 1;
-        if (c == '\n') break;
-        if (c == '\0') *has_nul = 1;
-        if (n + 1 < cap) buf[n++] = (char)c;
-        else *too_long = 1;
+        if (c == '\n') { break; }
+        if (c == '\0') { *has_nul = 1; }
+        if (n + 1 < cap) {
+            buf[n++] = (char)c;
+        } else {
+            *too_long = 1;
+        }
     }
-    if (!any) return -1;
+    if (!any) { return -1; }
     buf[n] = '\0';
     return (long)n;
 }
@@ -1168,10 +1343,10 @@ static int run_batch(const settings *set_in, const struct word *w) {
         long got = read_line(stdin, line, sizeof line, &too_long, &has_nul);
         size_t len;
 
-        if (got < 0) break;
+        if (got < 0) { break; }
         len = (size_t)got;
         lineno++;
-        if (len > 0 && line[len - 1] == '\r') line[--len] = '\0';
+        if (len > 0 && line[len - 1] == '\r') { line[--len] = '\0'; }
         why.text[0] = '\0';
         rec_init(&r, w->fields, w->nfields);
         if (too_long) {
@@ -1189,18 +1364,19 @@ static int run_batch(const settings *set_in, const struct word *w) {
         }
         {
             size_t k = 0;
-            while (line[k] == ' ' || line[k] == '\t') k++;
-            if (line[k] == '\0' || line[k] == '#') continue;   /* blank or comment */
+            while (line[k] == ' ' || line[k] == '\t') { k++; }
+            if (line[k] == '\0' || line[k] == '#') { continue; /* blank or comment */ }
         }
         rows++;
         n = split_csv(line, cells, GKQ_CELLS_MAX);
         if (n < 0) {
             failed++;
-            rec_print(stdout, &set, &r, w->name, lineno, GK_ERR_PARSE, "malformed CSV or too many cells");
+            rec_print(stdout, &set, &r, w->name, lineno, GK_ERR_PARSE,
+                      "malformed CSV or too many cells");
             continue;
         }
         st = collect_args(n, cells, &a, &why);
-        if (st == GK_OK) st = w->fn(&set, &a, &r, &why);
+        if (st == GK_OK) { st = w->fn(&set, &a, &r, &why); }
         if (st != GK_OK) {
             char msg[GKQ_TEXT_MAX + 128];
             failed++;
@@ -1223,45 +1399,44 @@ static int run_batch(const settings *set_in, const struct word *w) {
 /* ------------------------------------------------------------------ usage and main */
 
 static void usage(FILE *out) {
-    fputs(
-        "gkq - gas-property queries on gaskit\n"
-        "\n"
-        "usage: gkq [options] WORD ARGUMENTS...\n"
-        "\n"
-        "words:\n"
-        "  state FLUID P T               Z, molar volume, density, fugacity coefficient, roots\n"
-        "  convert Q UNIT                a quantity in another unit (UNIT_g: gauge pressure)\n"
-        "  speeds FLUID T [FLUID2] [P]   molecular speeds, speed of sound; Graham ratio to\n"
-        "                                FLUID2; mean free path and wall flux at P\n"
-        "  water T | water P             vapour pressure at T, or saturation temperature at P\n"
-        "  dew PW | dew P T RH           dew point of a water partial pressure, or of a gas\n"
-        "                                at total pressure P, temperature T, humidity RH\n"
-        "  contents FLUID V P T          amount, mass and reference volume in a vessel\n"
-        "  leak FLUID V P1 P2 T [T2] DT  leak rate from a pressure decay over time DT\n"
-        "  gases                         the built-in gas table\n"
-        "  batch WORD                    CSV rows of WORD's arguments on stdin, CSV out\n"
-        "  help | version\n"
-        "\n"
-        "quantities carry their unit: 2.5bar 101.3kPa 25degC 77degF 300K 40L 2ft3 15min 60%\n"
-        "  a gauge pressure ends in _g: 3.2bar_g 45psi_g -0.2bar_g (over the barometer, -b);\n"
-        "  a pressure without a mark, or with _a, is absolute\n"
-        "  quantities of different kinds may come in any order; two of one kind keep theirs\n"
-        "FLUID: a gas by formula or name (N2, \"carbon dioxide\") or a mixture\n"
-        "  \"CO2=5%;N2=balance\" (';' or ',' between components)\n"
-        "\n"
-        "options:\n"
-        "  -m, --model M      ideal | vdw | rk | srk | pr      (default pr)\n"
-        "  -r, --root R       stable | gas | liquid            (default stable)\n"
-        "  -b, --barometer P  ambient pressure for _g readings (default 101.325kPa)\n"
-        "  -R, --ref REF      reference condition: 0C 0C-100kPa 15C 20C 25C 60F or P@T\n"
-        "                     (default 0C: 0 degC, 101.325 kPa)\n"
-        "  -u, --units LIST   display units, e.g. bar,degF,L/min\n"
-        "  -k                 machine output: key=value pairs, SI units\n"
-        "  -j                 machine output: one JSON object per line, SI units\n"
-        "\n"
-        "exit status: 0 ok; 1 a calculation or input failed, or a batch row failed;\n"
-        "2 the command line is wrong. Results are engineering estimates (docs/safety.md).\n",
-        out);
+    fputs("gkq - gas-property queries on gaskit\n"
+          "\n"
+          "usage: gkq [options] WORD ARGUMENTS...\n"
+          "\n"
+          "words:\n"
+          "  state FLUID P T               Z, molar volume, density, fugacity coefficient, roots\n"
+          "  convert Q UNIT                a quantity in another unit (UNIT_g: gauge pressure)\n"
+          "  speeds FLUID T [FLUID2] [P]   molecular speeds, speed of sound; Graham ratio to\n"
+          "                                FLUID2; mean free path and wall flux at P\n"
+          "  water T | water P             vapour pressure at T, or saturation temperature at P\n"
+          "  dew PW | dew P T RH           dew point of a water partial pressure, or of a gas\n"
+          "                                at total pressure P, temperature T, humidity RH\n"
+          "  contents FLUID V P T          amount, mass and reference volume in a vessel\n"
+          "  leak FLUID V P1 P2 T [T2] DT  leak rate from a pressure decay over time DT\n"
+          "  gases                         the built-in gas table\n"
+          "  batch WORD                    CSV rows of WORD's arguments on stdin, CSV out\n"
+          "  help | version\n"
+          "\n"
+          "quantities carry their unit: 2.5bar 101.3kPa 25degC 77degF 300K 40L 2ft3 15min 60%\n"
+          "  a gauge pressure ends in _g: 3.2bar_g 45psi_g -0.2bar_g (over the barometer, -b);\n"
+          "  a pressure without a mark, or with _a, is absolute\n"
+          "  quantities of different kinds may come in any order; two of one kind keep theirs\n"
+          "FLUID: a gas by formula or name (N2, \"carbon dioxide\") or a mixture\n"
+          "  \"CO2=5%;N2=balance\" (';' or ',' between components)\n"
+          "\n"
+          "options:\n"
+          "  -m, --model M      ideal | vdw | rk | srk | pr      (default pr)\n"
+          "  -r, --root R       stable | gas | liquid            (default stable)\n"
+          "  -b, --barometer P  ambient pressure for _g readings (default 101.325kPa)\n"
+          "  -R, --ref REF      reference condition: 0C 0C-100kPa 15C 20C 25C 60F or P@T\n"
+          "                     (default 0C: 0 degC, 101.325 kPa)\n"
+          "  -u, --units LIST   display units, e.g. bar,degF,L/min\n"
+          "  -k                 machine output: key=value pairs, SI units\n"
+          "  -j                 machine output: one JSON object per line, SI units\n"
+          "\n"
+          "exit status: 0 ok; 1 a calculation or input failed, or a batch row failed;\n"
+          "2 the command line is wrong. Results are engineering estimates (docs/safety.md).\n",
+          out);
 }
 
 /* Reads the value of an option given as "-x VALUE", "--long VALUE" or "--long=VALUE". */
@@ -1270,11 +1445,11 @@ static const char *option_value(int argc, char **argv, int *i, const char *short
     const char *a = argv[*i];
     size_t ln = strlen(longname);
     if (strcmp(a, shortname) == 0 || strcmp(a, longname) == 0) {
-        if (*i + 1 >= argc) return NULL;
+        if (*i + 1 >= argc) { return NULL; }
         (*i)++;
         return argv[*i];
     }
-    if (strncmp(a, longname, ln) == 0 && a[ln] == '=') return a + ln + 1;
+    if (strncmp(a, longname, ln) == 0 && a[ln] == '=') { return a + ln + 1; }
     return NULL;
 }
 
@@ -1309,52 +1484,80 @@ int main(int argc, char **argv) {
         const char *a = argv[i];
         const char *v;
         if (!is_option(a)) {
-            if (nrest >= GKQ_CELLS_MAX + 2) return fail_usage("too many arguments at", a, GK_ERR_ARGUMENT);
+            if (nrest >= GKQ_CELLS_MAX + 2) {
+                return fail_usage("too many arguments at", a, GK_ERR_ARGUMENT);
+            }
             rest[nrest++] = argv[i];
             continue;
         }
-        if (strcmp(a, "-k") == 0) { set.format = OUT_KV; continue; }
-        if (strcmp(a, "-j") == 0) { set.format = OUT_JSON; continue; }
-        if (strcmp(a, "-h") == 0 || strcmp(a, "--help") == 0) { usage(stdout); return 0; }
+        if (strcmp(a, "-k") == 0) {
+            set.format = OUT_KV;
+            continue;
+        }
+        if (strcmp(a, "-j") == 0) {
+            set.format = OUT_JSON;
+            continue;
+        }
+        if (strcmp(a, "-h") == 0 || strcmp(a, "--help") == 0) {
+            usage(stdout);
+            return 0;
+        }
         if ((v = option_value(argc, argv, &i, "-m", "--model")) != NULL) {
-            if (!parse_model(v, &set.model)) return fail_usage("unknown model", v, GK_ERR_NOT_FOUND);
+            if (!parse_model(v, &set.model)) {
+                return fail_usage("unknown model", v, GK_ERR_NOT_FOUND);
+            }
             continue;
         }
         if ((v = option_value(argc, argv, &i, "-r", "--root")) != NULL) {
-            if (!parse_root(v, &set.root)) return fail_usage("unknown root", v, GK_ERR_NOT_FOUND);
+            if (!parse_root(v, &set.root)) {
+                return fail_usage("unknown root", v, GK_ERR_NOT_FOUND);
+            }
             continue;
         }
-        if ((v = option_value(argc, argv, &i, "-b", "--barometer")) != NULL) { baro_text = v; continue; }
-        if ((v = option_value(argc, argv, &i, "-R", "--ref")) != NULL) { ref_text = v; continue; }
-        if ((v = option_value(argc, argv, &i, "-u", "--units")) != NULL) { units_list = v; continue; }
+        if ((v = option_value(argc, argv, &i, "-b", "--barometer")) != NULL) {
+            baro_text = v;
+            continue;
+        }
+        if ((v = option_value(argc, argv, &i, "-R", "--ref")) != NULL) {
+            ref_text = v;
+            continue;
+        }
+        if ((v = option_value(argc, argv, &i, "-u", "--units")) != NULL) {
+            units_list = v;
+            continue;
+        }
         return fail_usage("unknown option or missing value", a, GK_ERR_ARGUMENT);
     }
 
     if (baro_text != NULL) {
         quantity q;
         gk_status st = parse_quantity(baro_text, &q, &why);
-        if (st == GK_OK && (q.d != DIM_PRESSURE || q.gauge)) st = GK_ERR_ARGUMENT;
-        if (st == GK_OK) st = gk_pressure_from(R(q.value), q.unit, &set.ambient);
-        if (st != GK_OK) return fail_usage("barometer must be an absolute pressure, not", baro_text, st);
+        if (st == GK_OK && (q.d != DIM_PRESSURE || q.gauge)) { st = GK_ERR_ARGUMENT; }
+        if (st == GK_OK) { st = gk_pressure_from(R(q.value), q.unit, &set.ambient); }
+        if (st != GK_OK) {
+            return fail_usage("barometer must be an absolute pressure, not", baro_text, st);
+        }
     }
     {
         gk_status st = parse_reference(ref_text, &set, &set.ref, &why);
-        if (st != GK_OK) return fail_usage("reference condition", ref_text, st);
+        if (st != GK_OK) { return fail_usage("reference condition", ref_text, st); }
         copy_text(set.ref_name, sizeof set.ref_name, ref_text);
     }
     if (units_list != NULL) {
         char buf[GKQ_TEXT_MAX];
         char *tok, *save;
-        if (strlen(units_list) >= sizeof buf) return fail_usage("unit list too long", units_list, GK_ERR_PARSE);
+        if (strlen(units_list) >= sizeof buf) {
+            return fail_usage("unit list too long", units_list, GK_ERR_PARSE);
+        }
         copy_text(buf, sizeof buf, units_list);
         for (tok = buf; tok != NULL; tok = save) {
             gk_unit u;
             gk_status st;
             save = strchr(tok, ',');
-            if (save != NULL) *save++ = '\0';
+            if (save != NULL) { *save++ = '\0'; }
             st = gk_unit_parse(tok, &u);
-            if (st != GK_OK) return fail_usage("unknown display unit", tok, st);
-            if (set.show_count < GK_UNIT_COUNT) set.show[set.show_count++] = u;
+            if (st != GK_OK) { return fail_usage("unknown display unit", tok, st); }
+            if (set.show_count < GK_UNIT_COUNT) { set.show[set.show_count++] = u; }
         }
     }
 
@@ -1367,12 +1570,15 @@ int main(int argc, char **argv) {
                (gk_build_flags() & GK_BUILD_FLOAT) ? "float" : "double");
         return 0;
     }
-    if (strcmp(rest[0], "gases") == 0) return word_gases(&set, nrest - 1);
+    if (strcmp(rest[0], "gases") == 0) { return word_gases(&set, nrest - 1); }
     if (strcmp(rest[0], "batch") == 0) {
         const struct word *w;
-        if (nrest != 2) return fail_usage("batch takes one word, got", nrest > 2 ? rest[2] : "nothing", GK_ERR_ARGUMENT);
+        if (nrest != 2) {
+            return fail_usage("batch takes one word, got", nrest > 2 ? rest[2] : "nothing",
+                              GK_ERR_ARGUMENT);
+        }
         w = find_word(rest[1]);
-        if (w == NULL) return fail_usage("unknown word for batch", rest[1], GK_ERR_NOT_FOUND);
+        if (w == NULL) { return fail_usage("unknown word for batch", rest[1], GK_ERR_NOT_FOUND); }
         return run_batch(&set, w);
     }
     {
@@ -1380,10 +1586,10 @@ int main(int argc, char **argv) {
         args a;
         record r;
         gk_status st;
-        if (w == NULL) return fail_usage("unknown word", rest[0], GK_ERR_NOT_FOUND);
+        if (w == NULL) { return fail_usage("unknown word", rest[0], GK_ERR_NOT_FOUND); }
         st = collect_args(nrest - 1, rest + 1, &a, &why);
         rec_init(&r, w->fields, w->nfields);
-        if (st == GK_OK) st = w->fn(&set, &a, &r, &why);
+        if (st == GK_OK) { st = w->fn(&set, &a, &r, &why); }
         if (st != GK_OK) {
             fprintf(stderr, "gkq %s: %s: %s\n", w->name, why.text[0] ? why.text : "error",
                     gk_status_string(st));
@@ -1391,7 +1597,8 @@ int main(int argc, char **argv) {
         }
         if (set.format == OUT_TEXT && w->fields == convert_fields) {
             /* a float build carries about 7 significant digits: print no more */
-            printf("%s = %.*g %s\n", r.s[0], (gk_build_flags() & GK_BUILD_FLOAT) ? 7 : 10, r.v[1], r.s[2]);
+            printf("%s = %.*g %s\n", r.s[0], (gk_build_flags() & GK_BUILD_FLOAT) ? 7 : 10, r.v[1],
+                   r.s[2]);
             return 0;
         }
         if (set.format == OUT_TEXT) {

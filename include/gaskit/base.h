@@ -46,7 +46,7 @@ typedef double gk_real;
 /** Major version: changes on an incompatible API or ABI change (it is the SONAME). */
 #define GK_VERSION_MAJOR 0
 /** Minor version: compatible additions. */
-#define GK_VERSION_MINOR 1
+#define GK_VERSION_MINOR 2
 /** Patch version: fixes only. */
 #define GK_VERSION_PATCH 0
 
@@ -70,9 +70,9 @@ GK_API unsigned gk_build_flags(void);
 /* ------------------------------------------------------------------ status */
 /** Result of every computing function. On any value but GK_OK no output is written. */
 typedef enum gk_status {
-    GK_OK = 0,          /**< Success: outputs written, every output finite. */
-    GK_ERR_ARGUMENT,    /**< NULL pointer, enum value out of range, unit of the wrong dimension. */
-    GK_ERR_DOMAIN,      /**< Input not finite, or outside the physical domain (T <= 0 K, p <= 0, ...). */
+    GK_OK = 0,       /**< Success: outputs written, every output finite. */
+    GK_ERR_ARGUMENT, /**< NULL pointer, enum value out of range, unit of the wrong dimension. */
+    GK_ERR_DOMAIN, /**< Input not finite, or outside the physical domain (T <= 0 K, p <= 0, ...). */
     GK_ERR_NO_SOLUTION, /**< No physical solution exists for these inputs. */
     GK_ERR_RANGE,       /**< Outside the model's validity range, or the result overflows. */
     GK_ERR_NOT_FOUND,   /**< No gas or unit with that name. */

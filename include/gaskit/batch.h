@@ -35,7 +35,8 @@ extern "C" {
  * @return Number of elements with status GK_OK.
  */
 GK_API size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk_real *t_k,
-                                     gk_molar_mass m, gk_real *out_kg_per_m3, gk_status *status_out);
+                                     gk_molar_mass m, gk_real *out_kg_per_m3,
+                                     gk_status *status_out);
 
 /**
  * @brief gk_eos_density() (stable root) over arrays: out[i] = M / Vm(p[i], t[i]).
@@ -45,7 +46,8 @@ GK_API size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk
  * @return Number of elements with status GK_OK.
  */
 GK_API size_t gk_eos_density_batch(gk_eos eos, const gk_gas *gas, size_t count, const gk_real *p_pa,
-                                   const gk_real *t_k, gk_real *out_kg_per_m3, gk_status *status_out);
+                                   const gk_real *t_k, gk_real *out_kg_per_m3,
+                                   gk_status *status_out);
 
 /** @} */
 

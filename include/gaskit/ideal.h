@@ -59,13 +59,15 @@ GK_API gk_status gk_ideal_molar_volume(gk_pressure p, gk_temperature t, gk_molar
  * @brief Density of an ideal gas: rho = p M / (R T).
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
-GK_API gk_status gk_ideal_density(gk_pressure p, gk_temperature t, gk_molar_mass m, gk_density *out);
+GK_API gk_status gk_ideal_density(gk_pressure p, gk_temperature t, gk_molar_mass m,
+                                  gk_density *out);
 
 /**
  * @brief Molar mass from a measured density (gas-density balance, Dumas bulb): M = rho R T / p.
  * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
-GK_API gk_status gk_ideal_molar_mass(gk_density rho, gk_pressure p, gk_temperature t, gk_molar_mass *out);
+GK_API gk_status gk_ideal_molar_mass(gk_density rho, gk_pressure p, gk_temperature t,
+                                     gk_molar_mass *out);
 
 /** A state of a closed or open amount of ideal gas. */
 typedef struct gk_state {
@@ -77,7 +79,10 @@ typedef struct gk_state {
 
 /** Which field of a gk_state is unknown. */
 typedef enum gk_variable {
-    GK_VAR_PRESSURE, GK_VAR_VOLUME, GK_VAR_TEMPERATURE, GK_VAR_AMOUNT
+    GK_VAR_PRESSURE,
+    GK_VAR_VOLUME,
+    GK_VAR_TEMPERATURE,
+    GK_VAR_AMOUNT
 } gk_variable;
 
 /**
