@@ -203,17 +203,30 @@ gk_status gk__sw_model_pure(const gk__sw_fluid *fluid, gk__hz_model *out) {
     out->forms = 1u << (unsigned)fluid->form;
     out->fluid = fluid;
     out->gas = NULL;
+    out->rows = NULL;
     out->x = NULL;
     out->count = 1;
     return GK_OK;
 }
 
+/* Dry air of ISO 2533:1975 (from memory): N2 78.084 %, O2 20.9476 %, Ar 0.934 % by volume, the
+   three normalised to their sum 0.999656 (the other 0.034 %, mostly CO2, left out). */
+static const gk__sw_fluid *const hz_air_rows[3] = { &hz_fluids[0], &hz_fluids[1], &hz_fluids[2] };
+static const gk_real hz_air_x[3] = { GK_LIT(0.7811087013932793), GK_LIT(0.20954808454108212),
+                                     GK_LIT(0.009343214065638579) };
+
+static gk_status hz_model_rows(const gk__sw_fluid *const *rows, const gk_real *x, size_t count,
+                               gk__hz_model *out);
+
 gk_status gk__sw_model_gas(const gk_gas *gas, gk__hz_model *out) {
     const gk__sw_fluid *fluid;
     if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     fluid = gk__sw_find(gas);
-    if (fluid == NULL) { return GK_ERR_NOT_FOUND; }
-    return gk__sw_model_pure(fluid, out);
+    if (fluid != NULL) { return gk__sw_model_pure(fluid, out); }
+    if (gas->formula != NULL && hz_same_text("air", gas->formula)) {
+        return hz_model_rows(hz_air_rows, hz_air_x, 3, out);
+    }
+    return GK_ERR_NOT_FOUND;
 }
 
 /* Adds x times the row to the mixture's range, forms and reducing sums s[0..4]:
@@ -231,10 +244,42 @@ static void hz_mix_add(gk__hz_model *m, const gk__sw_fluid *fl, gk_real x, gk_re
     m->p_max = (fl->p_max < m->p_max) ? fl->p_max : m->p_max;
 }
 
-gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_t count,
-                               gk__hz_model *out) {
+/* The reducing values, range and forms of a mixture whose i-th row is rows[i] (rows given) or
+   gk__sw_find(gas[i]); every component with x_i > 0 has a row (checked by the callers). */
+static gk_status hz_model_mix(const gk_gas *const *gas, const gk__sw_fluid *const *rows,
+                              const gk_real *x, size_t count, gk__hz_model *out) {
     gk__hz_model m;
     gk_real s[5] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
+    size_t i;
+    m.t_min = GK_LIT(0.0);
+    m.t_max = GK_REAL_MAX;
+    m.p_max = GK_REAL_MAX;
+    m.forms = 0u;
+    m.fluid = NULL;
+    m.gas = gas;
+    m.rows = rows;
+    m.x = x;
+    m.count = count;
+    for (i = 0; i < count; ++i) {
+        if (x[i] > GK_LIT(0.0)) {
+            hz_mix_add(&m, (rows != NULL) ? rows[i] : gk__sw_find(gas[i]), x[i], s);
+        }
+    }
+    if (!(s[1] > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
+    m.t_r = s[0] * s[0];
+    m.rho_r = GK_LIT(4.0) / (s[1] * s[4] + GK_LIT(3.0) * s[2] * s[3]);
+    if (!gk_positive(m.t_r) || !gk_positive(m.rho_r)) { return GK_ERR_DOMAIN; }
+    *out = m;
+    return GK_OK;
+}
+
+static gk_status hz_model_rows(const gk__sw_fluid *const *rows, const gk_real *x, size_t count,
+                               gk__hz_model *out) {
+    return hz_model_mix(NULL, rows, x, count, out);
+}
+
+gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_t count,
+                               gk__hz_model *out) {
     size_t i;
     if (gas == NULL || x == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     if (count == 0 || count > GK_MIXTURE_MAX) { return GK_ERR_DOMAIN; }
@@ -243,23 +288,7 @@ gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_
         if (!gk_finite(x[i]) || x[i] < GK_LIT(0.0) || x[i] > GK_LIT(1.0)) { return GK_ERR_DOMAIN; }
         if (x[i] > GK_LIT(0.0) && gk__sw_find(gas[i]) == NULL) { return GK_ERR_NOT_FOUND; }
     }
-    m.t_min = GK_LIT(0.0);
-    m.t_max = GK_REAL_MAX;
-    m.p_max = GK_REAL_MAX;
-    m.forms = 0u;
-    m.fluid = NULL;
-    m.gas = gas;
-    m.x = x;
-    m.count = count;
-    for (i = 0; i < count; ++i) {
-        if (x[i] > GK_LIT(0.0)) { hz_mix_add(&m, gk__sw_find(gas[i]), x[i], s); }
-    }
-    if (!(s[1] > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
-    m.t_r = s[0] * s[0];
-    m.rho_r = GK_LIT(4.0) / (s[1] * s[4] + GK_LIT(3.0) * s[2] * s[3]);
-    if (!gk_positive(m.t_r) || !gk_positive(m.rho_r)) { return GK_ERR_DOMAIN; }
-    *out = m;
-    return GK_OK;
+    return hz_model_mix(gas, NULL, x, count, out);
 }
 
 /* ---------------------------------------------------------------- evaluation */
@@ -348,7 +377,9 @@ static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
         hz_add_row(ctx, m->fluid, GK_LIT(1.0));
     } else {
         for (i = 0; i < m->count; ++i) {
-            if (m->x[i] > GK_LIT(0.0)) { hz_add_row(ctx, gk__sw_find(m->gas[i]), m->x[i]); }
+            if (m->x[i] > GK_LIT(0.0)) {
+                hz_add_row(ctx, (m->rows != NULL) ? m->rows[i] : gk__sw_find(m->gas[i]), m->x[i]);
+            }
         }
     }
     if ((m->forms & (1u << GK__SW_NONPOLAR)) != 0u) {

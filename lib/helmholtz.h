@@ -113,13 +113,14 @@ typedef struct gk__sw_fluid {
    mole fractions (a mixture: they must stay valid while the model is used; rows are looked up
    again per solve). Small plain data (firmware stack), built by gk__sw_model_*(). */
 typedef struct gk__hz_model {
-    gk_real t_r;                 /* reducing temperature, K */
-    gk_real rho_r;               /* reducing density, mol/m^3 */
-    gk_real t_min, t_max, p_max; /* validity */
-    unsigned forms;              /* bit (1 << gk__sw_form) set when that form is present */
-    const gk__sw_fluid *fluid;   /* the row of a pure fluid, else NULL */
-    const gk_gas *const *gas;    /* a mixture's gases (count of them), else NULL */
-    const gk_real *x;            /* a mixture's mole fractions */
+    gk_real t_r;                     /* reducing temperature, K */
+    gk_real rho_r;                   /* reducing density, mol/m^3 */
+    gk_real t_min, t_max, p_max;     /* validity */
+    unsigned forms;                  /* bit (1 << gk__sw_form) set when that form is present */
+    const gk__sw_fluid *fluid;       /* the row of a pure fluid, else NULL */
+    const gk_gas *const *gas;        /* a mixture's gases (count of them), or NULL */
+    const gk__sw_fluid *const *rows; /* or a mixture's rows (dry air), else NULL */
+    const gk_real *x;                /* a mixture's mole fractions */
     size_t count;
 } gk__hz_model;
 
@@ -134,13 +135,15 @@ typedef struct gk__hz_result {
 } gk__hz_result;
 
 /* The coefficient row of a gas (matched by its formula, case-sensitive, as gk_gas_find()),
-   or NULL when the gas is NULL or not covered. */
+   or NULL when the gas is NULL or not covered (air has no row: see gk__sw_model_gas()). */
 const gk__sw_fluid *gk__sw_find(const gk_gas *gas);
 
 /* The model of one fluid. GK_ERR_ARGUMENT for NULL. */
 gk_status gk__sw_model_pure(const gk__sw_fluid *fluid, gk__hz_model *out);
 
-/* The model of a gas: GK_ERR_NOT_FOUND when gk__sw_find() has no row for it. */
+/* The model of a gas: its row, or for "air" (formula) the dry-air mixture of ISO 2533:1975
+   (N2 0.78084, O2 0.209476, Ar 0.00934 by volume, normalised; the remaining 0.034 % of CO2, Ne,
+   He, ... left out); GK_ERR_NOT_FOUND when neither applies. */
 gk_status gk__sw_model_gas(const gk_gas *gas, gk__hz_model *out);
 
 /* The model of a mixture of count gases (1 ... GK_MIXTURE_MAX) with mole fractions x (each in
