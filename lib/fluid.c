@@ -46,6 +46,7 @@ static gk_status init_mixture(gk__fluid *f, gk_eos eos, const gk_mixture *mix, c
 
 /* The reference-grade models (helmholtz.h): GK_ERR_NOT_FOUND where they do not cover the gas or
    a component; with best, that status only says "not covered" (the caller falls back). */
+#if GK_REFERENCE_MODELS
 static gk_status init_reference(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
                                 const gk_real *kij) {
     gk__hz_model m;
@@ -75,6 +76,18 @@ static gk_status init_reference(gk__fluid *f, gk_eos eos, const gk_gas *gas, con
     f->eos = eos;
     return GK_OK;
 }
+#else
+/* Built without the reference-grade models (gaskit/config.h): nothing is covered. */
+static gk_status init_reference(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
+                                const gk_real *kij) {
+    gk_status st = (mix != NULL) ? gk__mixture_check(mix) : GK_OK;
+    (void)f;
+    (void)eos;
+    (void)gas;
+    (void)kij;
+    return (st != GK_OK) ? st : GK_ERR_NOT_FOUND;
+}
+#endif
 
 /* A cubic model or the ideal gas (eos valid for gk__eos_valid()). */
 static gk_status init_cubic(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
@@ -104,12 +117,15 @@ gk_status gk__fluid_init(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_m
        else Peng-Robinson */
     st = init_reference(f, GK_EOS_SPAN_WAGNER, gas, mix, kij);
     if (st != GK_ERR_NOT_FOUND) { return st; }
+#if GK_REFERENCE_MODELS
     if (gas != NULL && gk__h2_covers(gas)) {
         return init_reference(f, GK_EOS_HYDROGEN, gas, mix, kij);
     }
+#endif
     return init_cubic(f, GK_EOS_PENG_ROBINSON, gas, mix, kij);
 }
 
+#if GK_REFERENCE_MODELS
 /* The Span-Wagner model of the fluid (its gas, air as its mixture, or its mixture). */
 static gk_status fluid_sw_model(const gk__fluid *f, gk__hz_model *m) {
     return (f->mix != NULL)
@@ -148,6 +164,8 @@ static GK__FLUID_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk
     return GK_OK;
 }
 
+#endif
+
 /* The one dispatch on the model: a new family of models adds its case here. */
 gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_root root,
                           gk_eos_result *out) {
@@ -169,9 +187,11 @@ gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, g
                 st = gk__eos_cubic_state(f->eos, a, b, p.pa, t.k, f->tc, root, out);
             }
             break;
+#if GK_REFERENCE_MODELS
         case GK_EOS_SPAN_WAGNER:
         case GK_EOS_HYDROGEN:
             return fluid_reference_state(f, p.pa, t.k, root, out);
+#endif
         case GK_EOS_BEST: /* resolved by gk__fluid_init() */
         default:
             return GK_ERR_ARGUMENT;
@@ -210,12 +230,14 @@ gk_status gk__fluid_pressure(const gk__fluid *f, gk_molar_volume vm, gk_temperat
         pa = GK_R * t.k / vm.m3_per_mol;
         /* R T / Vm > 0 for every valid input: 0 is an underflow, not a non-positive pressure */
         st = (pa > GK_LIT(0.0)) ? gk_check_result(pa) : GK_ERR_RANGE;
+#if GK_REFERENCE_MODELS
     } else if (f->eos == GK_EOS_HYDROGEN) {
         st = gk__h2_pressure(GK_LIT(1.0) / vm.m3_per_mol, t.k, &pa);
     } else if (f->eos == GK_EOS_SPAN_WAGNER) {
         gk__hz_model m;
         st = fluid_sw_model(f, &m);
         if (st == GK_OK) { st = gk__hz_pressure(&m, GK_LIT(1.0) / vm.m3_per_mol, t.k, &pa); }
+#endif
     } else {
         st = gk__eos_pressure(f->eos, f->gas, vm.m3_per_mol, t.k, &pa);
     }

@@ -38,13 +38,15 @@
  */
 #include "helmholtz.h"
 
+#if GK_REFERENCE_MODELS /* the whole file: see gaskit/config.h */
+
 /* Keeps a helper out of line so its locals are not in the frame under the root searches
    (firmware stack budget); only a hint, empty without GCC or Clang. */
-#if defined(__GNUC__)
-#  define HZ_NOINLINE __attribute__((noinline))
-#else
-#  define HZ_NOINLINE
-#endif
+#  if defined(__GNUC__)
+#    define HZ_NOINLINE __attribute__((noinline))
+#  else
+#    define HZ_NOINLINE
+#  endif
 
 /* Exponents of the two forms, Part I: d_k, l_k (0 = no exponential) and t_k in eighths. */
 static const unsigned char hz_d[2][GK__SW_TERMS] = {
@@ -56,25 +58,25 @@ static const unsigned char hz_l[2][GK__SW_TERMS] = { { 0, 0, 0, 0, 0, 0, 1, 1, 2
 
 /* Below HZ_TWO_ROOT_TR T_r both roots are sought (the equations' own critical temperatures lie
    within 0.1 % of T_r; a mixture's pseudo-critical point within a few percent). */
-#define HZ_TWO_ROOT_TR GK_LIT(1.05)
+#  define HZ_TWO_ROOT_TR GK_LIT(1.05)
 /* Below HZ_SPLIT_TR T_r the vapour-like root is sought below delta = 1 and the liquid-like root
    above it: between the spinodals, which enclose delta = 1, multiparameter equations may have
    spurious loops with dp/drho > 0 (Span and Wagner 2003, Part I, on the unstable region),
    and no physical root lies there. */
-#define HZ_SPLIT_TR GK_LIT(0.9)
+#  define HZ_SPLIT_TR GK_LIT(0.9)
 /* Newton's last step: taken without a further evaluation once |step| <= HZ_QUAD_TOL delta, about
    sqrt(eps)/8, so that the neglected (f''/(2 f')) step^2 is below eps for |delta f''/f'| up to
    about 100. Rounding-level window: HZ_STALL_TOL eps delta. */
-#if GK_REAL_IS_FLOAT
-#  define HZ_QUAD_TOL GK_LIT(4.0e-5)
-#else
-#  define HZ_QUAD_TOL GK_LIT(2.0e-9)
-#endif
-#define HZ_STALL_TOL GK_LIT(1000.0)
+#  if GK_REAL_IS_FLOAT
+#    define HZ_QUAD_TOL GK_LIT(4.0e-5)
+#  else
+#    define HZ_QUAD_TOL GK_LIT(2.0e-9)
+#  endif
+#  define HZ_STALL_TOL GK_LIT(1000.0)
 /* Below this |x| = |Z - 1|, x - ln(1 + x) is summed as a series (2^-7, exact). */
-#define HZ_LOG_SERIES_MAX GK_LIT(0.0078125)
+#  define HZ_LOG_SERIES_MAX GK_LIT(0.0078125)
 /* Two roots closer than this (relative) are the same root. */
-#define HZ_SAME_ROOT GK_LIT(1e-4)
+#  define HZ_SAME_ROOT GK_LIT(1e-4)
 
 /*
  * Coefficient rows. n_k: Span and Wagner 2003, Part II Tables (nonpolar fluids) and Part III
@@ -83,7 +85,7 @@ static const unsigned char hz_l[2][GK__SW_TERMS] = { { 0, 0, 0, 0, 0, 0, 1, 1, 2
  * tests/test_helmholtz.c. Reducing values T_c, rho_c: the papers' (from memory), which are the
  * critical points of the fluids' reference equations. Validity: see helmholtz.h (from memory).
  */
-#define HZ_MPA GK_LIT(1.0e6)
+#  define HZ_MPA GK_LIT(1.0e6)
 static const gk__sw_fluid hz_fluids[] = {
     /* N2, Part II (reducing: 126.192 K, 11.1839 mol/dm^3; triple point 63.151 K) */
     { "N2",
@@ -174,7 +176,7 @@ static const gk__sw_fluid hz_fluids[] = {
         GK_LIT(0.00022053253), GK_LIT(0.41541823), GK_LIT(0.71335657), GK_LIT(0.00030354234),
         GK_LIT(-0.36643143), GK_LIT(-0.0014407781), GK_LIT(-0.089166707), GK_LIT(-0.023699887) } },
 };
-#define HZ_FLUID_COUNT (sizeof hz_fluids / sizeof hz_fluids[0])
+#  define HZ_FLUID_COUNT (sizeof hz_fluids / sizeof hz_fluids[0])
 
 /* ---------------------------------------------------------------- lookup and models */
 
@@ -679,3 +681,8 @@ gk_status gk__hz_pressure(const gk__hz_model *m, gk_real rho, gk_real t, gk_real
     *out = p;
     return GK_OK;
 }
+
+#else
+/* Built without the reference-grade models: an empty unit is not ISO C, so one declaration. */
+typedef int gk__no_reference_models_hz;
+#endif /* GK_REFERENCE_MODELS */
