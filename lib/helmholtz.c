@@ -30,7 +30,7 @@
  * - Below 1.05 T_r both roots are sought (the equations' own critical temperature is within
  *   0.1 % of T_r); equal roots count once.
  * - At the root Z = Pi / delta (no cancellation for a liquid's small Z); ln phi = alpha_r + x - ln Z,
- *   x = Z - 1 (= S1 for a gas), with x - ln(1 + x) as its series for |x| < 2^-7.
+ *   x = Z - 1 (= S1 for a gas).
  *
  * Error budget (double): each root to a few eps relative in delta; Z, ln phi to a few eps times
  * the condition |delta dZ/d(delta) / Z| (O(1) for gases, up to ~100 for liquids at low pressure).
@@ -53,6 +53,11 @@ static const unsigned char hz_d[2][GK__SW_TERMS] = {
     { 1, 1, 1, 2, 3, 7, 2, 5, 1, 4, 3, 4 }, /* nonpolar */
     { 1, 1, 1, 3, 7, 1, 2, 5, 1, 1, 4, 2 }  /* polar */
 };
+/* t_k in eighths: nonpolar 0.25 1.125 1.5 1.375 0.25 0.875 0.625 1.75 3.625 3.625 14.5 12;
+   polar 0.25 1.25 1.5 0.25 0.875 2.375 2 2.125 3.5 6.5 4.75 12.5 */
+static const unsigned char hz_t8[2][GK__SW_TERMS] = {
+    { 2, 9, 12, 11, 2, 7, 5, 14, 29, 29, 116, 96 }, { 2, 10, 12, 2, 7, 19, 16, 17, 28, 52, 38, 100 }
+};
 static const unsigned char hz_l[2][GK__SW_TERMS] = { { 0, 0, 0, 0, 0, 0, 1, 1, 2, 2, 3, 3 },
                                                      { 0, 0, 0, 0, 0, 1, 1, 1, 2, 2, 2, 3 } };
 
@@ -73,8 +78,6 @@ static const unsigned char hz_l[2][GK__SW_TERMS] = { { 0, 0, 0, 0, 0, 0, 1, 1, 2
 #    define HZ_QUAD_TOL GK_LIT(2.0e-9)
 #  endif
 #  define HZ_STALL_TOL GK_LIT(1000.0)
-/* Below this |x| = |Z - 1|, x - ln(1 + x) is summed as a series (2^-7, exact). */
-#  define HZ_LOG_SERIES_MAX GK_LIT(0.0078125)
 /* Two roots closer than this (relative) are the same root. */
 #  define HZ_SAME_ROOT GK_LIT(1e-4)
 
@@ -195,8 +198,8 @@ const gk__sw_fluid *gk__sw_find(const gk_gas *gas) {
     return NULL;
 }
 
-gk_status gk__sw_model_pure(const gk__sw_fluid *fluid, gk__hz_model *out) {
-    if (fluid == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
+/* The model of one row (fluid, out not NULL). */
+static gk_status hz_model_pure(const gk__sw_fluid *fluid, gk__hz_model *out) {
     out->t_r = fluid->t_c;
     out->rho_r = fluid->rho_c;
     out->t_min = fluid->t_min;
@@ -224,7 +227,7 @@ gk_status gk__sw_model_gas(const gk_gas *gas, gk__hz_model *out) {
     const gk__sw_fluid *fluid;
     if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     fluid = gk__sw_find(gas);
-    if (fluid != NULL) { return gk__sw_model_pure(fluid, out); }
+    if (fluid != NULL) { return hz_model_pure(fluid, out); }
     if (gas->formula != NULL && hz_same_text("air", gas->formula)) {
         return hz_model_rows(hz_air_rows, hz_air_x, 3, out);
     }
@@ -307,41 +310,6 @@ typedef struct hz_sums {
     gk_real a, s1, s2;
 } hz_sums;
 
-/* c_k = n_k tau^t_k of the nonpolar form (n and c may be the same array); t_k = 0.25, 1.125, 1.5, 1.375, 0.25, 0.875, 0.625,
-   1.75, 3.625, 3.625, 14.5, 12 = integer powers tp[i] = tau^i times fr[j] = tau^(j/8). */
-static void hz_tau_nonpolar(const gk_real *n, const gk_real *tp, const gk_real *fr, gk_real *c) {
-    c[0] = n[0] * fr[2];
-    c[1] = n[1] * (tp[1] * fr[1]);
-    c[2] = n[2] * (tp[1] * fr[4]);
-    c[3] = n[3] * (tp[1] * fr[3]);
-    c[4] = n[4] * fr[2];
-    c[5] = n[5] * fr[7];
-    c[6] = n[6] * fr[5];
-    c[7] = n[7] * (tp[1] * fr[6]);
-    c[8] = n[8] * (tp[3] * fr[5]);
-    c[9] = n[9] * (tp[3] * fr[5]);
-    c[10] = n[10] * (tp[14] * fr[4]);
-    c[11] = n[11] * tp[12];
-}
-
-/* The polar form; t_k = 0.25, 1.25, 1.5, 0.25, 0.875, 2.375, 2, 2.125, 3.5, 6.5, 4.75, 12.5. */
-static void hz_tau_polar(const gk_real *n, const gk_real *tp, const gk_real *fr, gk_real *c) {
-    c[0] = n[0] * fr[2];
-    c[1] = n[1] * (tp[1] * fr[2]);
-    c[2] = n[2] * (tp[1] * fr[4]);
-    c[3] = n[3] * fr[2];
-    c[4] = n[4] * fr[7];
-    c[5] = n[5] * (tp[2] * fr[3]);
-    c[6] = n[6] * tp[2];
-    c[7] = n[7] * (tp[2] * fr[1]);
-    c[8] = n[8] * (tp[3] * fr[4]);
-    c[9] = n[9] * (tp[6] * fr[4]);
-    c[10] = n[10] * (tp[4] * fr[6]);
-    c[11] = n[11] * (tp[12] * fr[4]);
-}
-
-/* The per-temperature products of each present form (see the top of the file). tp[] holds only
-   the integer powers the forms use (0 elsewhere). */
 /* Adds x times a row's coefficients (a row that is NULL adds nothing: cannot happen for a
    model built by gk__sw_model_*()). */
 static void hz_add_row(hz_ctx *ctx, const gk__sw_fluid *fl, gk_real x) {
@@ -353,7 +321,7 @@ static void hz_add_row(hz_ctx *ctx, const gk__sw_fluid *fl, gk_real x) {
 static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
     gk_real fr[8], tp[15];
     size_t i;
-    int k;
+    int f, k;
     fr[0] = GK_LIT(1.0);
     fr[4] = gk_sqrt(tau);
     fr[2] = gk_sqrt(fr[4]);
@@ -362,15 +330,10 @@ static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
     fr[5] = fr[4] * fr[1];
     fr[6] = fr[4] * fr[2];
     fr[7] = fr[4] * fr[3];
-    for (k = 0; k < 15; ++k) { tp[k] = GK_LIT(0.0); }
-    tp[1] = tau;
-    tp[2] = tau * tau;
-    tp[3] = tp[2] * tau;
-    tp[4] = tp[2] * tp[2];
-    tp[6] = tp[3] * tp[3];
-    tp[12] = tp[6] * tp[6];
-    tp[14] = tp[12] * tp[2];
-    /* the coefficients N_k: the row's, or sum_i x_i n_k,i of a mixture; then times tau^t_k */
+    tp[0] = GK_LIT(1.0);
+    for (k = 1; k < 15; ++k) { tp[k] = tp[k - 1] * tau; }
+    /* the coefficients N_k: the row's, or sum_i x_i n_k,i of a mixture; then times tau^t_k,
+       t_k = 8ths: an integer power tp[] times fr[j] = tau^(j/8) */
     for (k = 0; k < GK__SW_TERMS; ++k) {
         ctx->c[0][k] = GK_LIT(0.0);
         ctx->c[1][k] = GK_LIT(0.0);
@@ -384,11 +347,11 @@ static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
             }
         }
     }
-    if ((m->forms & (1u << GK__SW_NONPOLAR)) != 0u) {
-        hz_tau_nonpolar(ctx->c[GK__SW_NONPOLAR], tp, fr, ctx->c[GK__SW_NONPOLAR]);
-    }
-    if ((m->forms & (1u << GK__SW_POLAR)) != 0u) {
-        hz_tau_polar(ctx->c[GK__SW_POLAR], tp, fr, ctx->c[GK__SW_POLAR]);
+    for (f = 0; f < 2; ++f) {
+        for (k = 0; k < GK__SW_TERMS; ++k) {
+            unsigned t8 = hz_t8[f][k];
+            ctx->c[f][k] *= tp[t8 >> 3u] * fr[t8 & 7u];
+        }
     }
     ctx->forms = m->forms;
 }
@@ -525,20 +488,6 @@ static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, gk_rea
 
 /* ---------------------------------------------------------------- solve and pressure */
 
-/* x - ln(1 + x) for x = Z - 1 > -1 (series below HZ_LOG_SERIES_MAX: no cancellation). */
-static gk_real hz_x_minus_log1p(gk_real x) {
-    if (gk_fabs(x) < HZ_LOG_SERIES_MAX) {
-        /* x^2/2 - x^3/3 + x^4/4 - x^5/5 + x^6/6 - x^7/7; the next term is below 2^-56 x^0 */
-        gk_real p = GK_LIT(1.0) / GK_LIT(6.0) - x / GK_LIT(7.0);
-        p = GK_LIT(1.0) / GK_LIT(5.0) - x * p;
-        p = GK_LIT(1.0) / GK_LIT(4.0) - x * p;
-        p = GK_LIT(1.0) / GK_LIT(3.0) - x * p;
-        p = GK_LIT(1.0) / GK_LIT(2.0) - x * p;
-        return x * x * p;
-    }
-    return x - gk_log(GK_LIT(1.0) + x);
-}
-
 static bool hz_root_valid(gk_root root) {
     return root == GK_ROOT_STABLE || root == GK_ROOT_GAS || root == GK_ROOT_LIQUID;
 }
@@ -583,15 +532,15 @@ static gk_real hz_gas_start(const hz_ctx *ctx, gk_real limit) {
 }
 
 /* Z and ln phi of a root delta with its sums. Z = Pi / delta (exact at the root, so a liquid's
-   small Z keeps its relative precision, where 1 + S1 would cancel); ln phi with x = S1 = Z - 1
-   where |x| < 1/2 (a gas: S1 keeps the relative precision of a small Z - 1), else Z - 1. */
+   small Z keeps its relative precision, where 1 + S1 would cancel); ln phi = alpha_r + x - ln Z
+   with x = S1 = Z - 1 where |x| < 1/2 (a gas), else Pi/delta - 1: an absolute error of a few
+   eps, so phi is good to a few eps relative. */
 static void hz_z_lnphi(const hz_ctx *ctx, gk_real delta, const hz_sums *s, gk_real *z,
                        gk_real *lnphi) {
     gk_real zz = ctx->pi / delta;
     gk_real x = (gk_fabs(s->s1) < GK_LIT(0.5)) ? s->s1 : zz - GK_LIT(1.0);
-    gk_real xl = (gk_fabs(x) < HZ_LOG_SERIES_MAX) ? hz_x_minus_log1p(x) : x - gk_log(zz);
     *z = zz;
-    *lnphi = s->a + xl;
+    *lnphi = (s->a + x) - gk_log(zz);
 }
 
 /* Writes the chosen root (index 0 = liquid-like, 1 = vapour-like) into *out. Out of line: its

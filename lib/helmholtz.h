@@ -138,9 +138,6 @@ typedef struct gk__hz_result {
    or NULL when the gas is NULL or not covered (air has no row: see gk__sw_model_gas()). */
 const gk__sw_fluid *gk__sw_find(const gk_gas *gas);
 
-/* The model of one fluid. GK_ERR_ARGUMENT for NULL. */
-gk_status gk__sw_model_pure(const gk__sw_fluid *fluid, gk__hz_model *out);
-
 /* The model of a gas: its row, or for "air" (formula) the dry-air mixture of ISO 2533:1975
    (N2 0.78084, O2 0.209476, Ar 0.00934 by volume, normalised; the remaining 0.034 % of CO2, Ne,
    He, ... left out); GK_ERR_NOT_FOUND when neither applies. */
