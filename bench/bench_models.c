@@ -19,6 +19,7 @@
 #include <time.h>
 #include "gaskit/gaskit.h"
 #include "../lib/helmholtz.h"
+#include "../lib/hydrogen.h"
 
 #define NSTATES 20000
 #define REPEAT 30
@@ -76,8 +77,8 @@ static double pass_pr(const gk_gas *gas) {
 static double pass_h2(void) {
     double s = 0.0;
     for (int i = 0; i < NSTATES; ++i) {
-        gk__hz_result r;
-        if (gk__h2_solve((gk_real)P[i], (gk_real)T[i], GK_ROOT_STABLE, &r) == GK_OK) {
+        gk__h2_state r;
+        if (gk__h2_solve((gk_real)P[i], (gk_real)T[i], &r) == GK_OK) {
             s += (double)r.z + (double)r.ln_phi + (double)r.molar_density;
         }
     }

@@ -9,6 +9,7 @@
 #include "fluid.h"
 #include "eos_internal.h"
 #include "helmholtz.h"
+#include "hydrogen.h"
 #include "mixture_internal.h"
 
 /* Is eos one of gk_eos (cubic, ideal or reference-grade)? Compared as unsigned (see
@@ -142,7 +143,18 @@ static GK__FLUID_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk
     gk_real phi, vm;
     gk_status st;
     if (f->eos == GK_EOS_HYDROGEN) {
-        st = gk__h2_solve(p, t, root, &r);
+        gk__h2_state h;
+        st = gk__h2_solve(p, t, &h);
+        if (st != GK_OK) { return st; }
+        /* one root: the result form of a lone root (the label is set below) */
+        r.z = h.z;
+        r.molar_density = h.molar_density;
+        r.ln_phi = h.ln_phi;
+        r.root_count = 1;
+        r.z_roots[0] = h.z;
+        r.z_roots[1] = GK_LIT(0.0);
+        r.z_roots[2] = GK_LIT(0.0);
+        r.branch = GK_ROOT_GAS;
     } else {
         st = fluid_sw_model(f, &m);
         if (st == GK_OK) { st = gk__hz_solve(&m, p, t, root, &r); }

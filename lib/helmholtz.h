@@ -7,8 +7,7 @@
  *   2. mixtures of the fluids of 1. in the multi-fluid form of Lemmon and Jacobsen and of Kunz
  *      and Wagner (GERG-2004), WITHOUT fitted binary parameters or departure functions (an
  *      approximation: see below);
- *   3. the standardized hydrogen density equation, E. W. Lemmon, M. L. Huber, J. W. Leachman,
- *      J. Res. Natl. Inst. Stand. Technol. 113 (2008) 341-350 (lib/hydrogen.c).
+(the standardized hydrogen equation is hydrogen.h).
  *
  * The interface takes plain data: a coefficient row (gk__sw_fluid, found from a gk_gas by
  * gk__sw_find()), a model built from one row or from several rows and mole fractions
@@ -159,26 +158,5 @@ gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root
    GK_ERR_RANGE also when the pressure is above p_max; GK_ERR_NO_SOLUTION when it is not > 0
    (a metastable or unstable state of the equation with negative pressure), as the cubic models. */
 gk_status gk__hz_pressure(const gk__hz_model *m, gk_real rho, gk_real t, gk_real *out);
-
-/* ---------------------------------------------------------------- hydrogen (lib/hydrogen.c) */
-
-/* Molar mass of normal hydrogen used with the equation, kg/mol (see lib/hydrogen.c). */
-#define GK__H2_MOLAR_MASS GK_LIT(2.01588e-3)
-
-/* Validity of the hydrogen equation (Lemmon, Huber and Leachman 2008). */
-#define GK__H2_T_MIN GK_LIT(200.0)
-#define GK__H2_T_MAX GK_LIT(1000.0)
-#define GK__H2_P_MAX GK_LIT(200.0e6)
-
-/* True when the gas is hydrogen (formula "H2"). */
-bool gk__h2_covers(const gk_gas *gas);
-
-/* Z, molar density and ln phi of hydrogen at p, T (one root: root_count 1, branch GAS;
-   the root choice is accepted and checked but has nothing to choose). */
-gk_status gk__h2_solve(gk_real p, gk_real t, gk_root root, gk__hz_result *out);
-
-/* Pressure (Pa) of hydrogen at molar density rho (mol/m^3) and T (Newton's iteration on the
-   explicit equation; GK_ERR_RANGE when p would exceed the equation's 200 MPa). */
-gk_status gk__h2_pressure(gk_real rho, gk_real t, gk_real *out);
 
 #endif /* GASKIT_HELMHOLTZ_H */

@@ -1,7 +1,7 @@
 /*
  * hydrogen.c - the standardized hydrogen density equation, E. W. Lemmon, M. L. Huber,
  * J. W. Leachman, "Revised Standardized Equation for Hydrogen Gas Densities for Fuel Consumption
- * Applications", J. Res. Natl. Inst. Stand. Technol. 113 (2008) 341-350. Interface: helmholtz.h.
+ * Applications", J. Res. Natl. Inst. Stand. Technol. 113 (2008) 341-350. Interface: hydrogen.h.
  *
  * The equation is explicit in p and T (p in MPa, T in K):
  *     Z(p, T) = 1 + sum_{i=1..9} a_i (100 K / T)^b_i (p / 1 MPa)^c_i,
@@ -19,7 +19,7 @@
  * magnitude); Z - 1 is a sum of terms of mixed sign that cancel up to about 30-fold at 200 MPa
  * (float build: Z within about 1e-5 of the double build there, 1e-6 below 70 MPa).
  */
-#include "helmholtz.h"
+#include "hydrogen.h"
 
 #if GK_REFERENCE_MODELS /* the whole file: see gaskit/config.h */
 
@@ -44,7 +44,7 @@ static const gk_real h2_cf[9] = { GK_LIT(0.0),  GK_LIT(0.0), GK_LIT(0.0), GK_LIT
 
 /* The molar mass the equation is used with, 2.01588 g/mol: that of normal hydrogen in the
    reference equation of Leachman et al. (2009) (from memory), which the 2008 paper's densities
-   use. GK__H2_MOLAR_MASS in helmholtz.h. */
+   use. GK__H2_MOLAR_MASS in hydrogen.h. */
 
 /* Most Newton steps of the pressure from density (quadratic convergence from the ideal-gas start;
    |Z - 1| < 1 in range, so 6-8 steps reach the rounding level). */
@@ -89,24 +89,17 @@ static gk_status h2_check(gk_real p, gk_real t) {
     return GK_OK;
 }
 
-gk_status gk__h2_solve(gk_real p, gk_real t, gk_root root, gk__hz_result *out) {
-    gk__hz_result r;
+gk_status gk__h2_solve(gk_real p, gk_real t, gk__h2_state *out) {
+    gk__h2_state r;
     gk_real zm1, lnphi, pdz;
     gk_status st;
-    if (out == NULL || (root != GK_ROOT_STABLE && root != GK_ROOT_GAS && root != GK_ROOT_LIQUID)) {
-        return GK_ERR_ARGUMENT;
-    }
+    if (out == NULL) { return GK_ERR_ARGUMENT; }
     st = h2_check(p, t);
     if (st != GK_OK) { return st; }
     h2_sums(p, t, &zm1, &lnphi, &pdz);
     r.z = GK_LIT(1.0) + zm1;
     r.molar_density = p / (r.z * GK_R * t);
     r.ln_phi = lnphi;
-    r.root_count = 1;
-    r.z_roots[0] = r.z;
-    r.z_roots[1] = GK_LIT(0.0);
-    r.z_roots[2] = GK_LIT(0.0);
-    r.branch = GK_ROOT_GAS;
     if (!gk_positive(r.z) || !gk_positive(r.molar_density) || !gk_finite(r.ln_phi)) {
         return GK_ERR_RANGE;
     }
