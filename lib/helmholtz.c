@@ -4,28 +4,30 @@
  * Interface, formulas, validity table and status contract: helmholtz.h.
  *
  * Method
- * - Per temperature, the 12 (or, for a mixture with CO2 and nonpolar fluids, 24) products
- *   c_k = n_k tau^t_k are formed once. Every t_k is a multiple of 1/8 (Part I), so tau^t_k is an
- *   integer power (by repeated squaring) times tau^(j/8), j = 0..7, from three square roots:
- *   no pow() call.
- * - Per density, one pass over the terms with delta^1 ... delta^7 by multiplication and the three
- *   exponentials exp(-delta), exp(-delta^2), exp(-delta^3) gives alpha_r, S1 = delta d(alpha_r)/
- *   d(delta) = Z - 1 and S2 = delta^2 d2(alpha_r)/d(delta)^2 (for a term T = c delta^d exp(-delta^l),
- *   with g = d - l delta^l: delta dT/d(delta) = g T and delta^2 d2T/d(delta)^2 = (g (g - 1) -
- *   l^2 delta^l) T). Z - 1 is formed from S1 directly, never as a difference Z - 1.
+ * - Per temperature, the products n_k tau^t_k are formed once and added into 12 coefficients,
+ *   one per group of terms with equal exponents (d, l) (the two forms have 12 such groups
+ *   between them), summed over the components of a mixture. Every t_k is a multiple of 1/8
+ *   (Part I), so tau^t_k is an integer power of tau (a table of products) times tau^(j/8),
+ *   j = 0..7, from three square roots: no pow() call.
+ * - Per density, one pass over the 12 groups with delta^1 ... delta^7 by multiplication and the
+ *   three exponentials exp(-delta), exp(-delta^2), exp(-delta^3) gives alpha_r,
+ *   S1 = delta d(alpha_r)/d(delta) = Z - 1 and S2 = delta^2 d2(alpha_r)/d(delta)^2 (for a term
+ *   T = c delta^d exp(-delta^l), with g = d - l delta^l: delta dT/d(delta) = g T and
+ *   delta^2 d2T/d(delta)^2 = (g (g - 1) - l^2 delta^l) T).
  * - Density root: f(delta) = delta (1 + S1) - Pi = 0, Pi = p / (rho_r R T), f' = 1 + 2 S1 + S2
  *   (proportional to dp/drho). Safeguarded Newton: the iterate keeps a bracket, a "near" end on
  *   the side the branch is approached from (below for the vapour-like root, where f < 0; above
  *   for the liquid-like root, where f > 0) and a "far" end once a point of the other sign is
  *   seen; a step leaving the bracket is replaced by bisection. On the near side f' <= 0 after a
  *   Newton step means the branch's spinodal was passed with no root: that branch has none.
- *   A root is accepted only with f' > 0 (no spurious or unstable roots). Starts: the vapour-like
- *   root from the virial series to the third coefficient (hz_gas_start()); the liquid-like root from above, from 1.1 times Guggenheim's
- *   saturated-liquid estimate 1 + (3/4)(1 - Tr) + (7/4)(1 - Tr)^(1/3) (E. A. Guggenheim,
- *   J. Chem. Phys. 13 (1945) 253, from memory), raised to GK__HZ_DELTA_MAX if f <= 0 there.
- * - Stop: once |Newton step| <= sqrt(eps)/8 delta the step is taken and the sums are moved to first
- *   order (quadratic convergence leaves an error below eps), or (rounding level) |f| no longer
- *   decreases within 1000 eps of the root; at most GK__HZ_ITER_MAX steps, else
+ *   A root is accepted only with f' > 0 (no spurious or unstable roots). Starts: the
+ *   vapour-like root from the virial series to the third coefficient (hz_gas_start()); the
+ *   liquid-like root from above, from 1.1 times Guggenheim's saturated-liquid estimate
+ *   1 + (3/4)(1 - Tr) + (7/4)(1 - Tr)^(1/3) (E. A. Guggenheim, J. Chem. Phys. 13 (1945) 253,
+ *   from memory; a start below the root is corrected by the bracket).
+ * - Stop: once |Newton step| <= sqrt(eps)/8 delta the step is taken and the sums are moved to
+ *   first order (quadratic convergence leaves an error below eps), or (rounding level) |f| no
+ *   longer decreases within 1000 eps of the root; at most GK__HZ_ITER_MAX steps, else
  *   GK_ERR_NO_SOLUTION.
  * - Below 1.05 T_r both roots are sought (the equations' own critical temperature is within
  *   0.1 % of T_r); equal roots count once.
@@ -48,18 +50,11 @@
 #    define HZ_NOINLINE
 #  endif
 
-/* Exponents of the two forms, Part I: d_k, l_k (0 = no exponential) and t_k in eighths. */
-static const unsigned char hz_d[2][GK__SW_TERMS] = {
-    { 1, 1, 1, 2, 3, 7, 2, 5, 1, 4, 3, 4 }, /* nonpolar */
-    { 1, 1, 1, 3, 7, 1, 2, 5, 1, 1, 4, 2 }  /* polar */
-};
 /* t_k in eighths: nonpolar 0.25 1.125 1.5 1.375 0.25 0.875 0.625 1.75 3.625 3.625 14.5 12;
    polar 0.25 1.25 1.5 0.25 0.875 2.375 2 2.125 3.5 6.5 4.75 12.5 */
 static const unsigned char hz_t8[2][GK__SW_TERMS] = {
     { 2, 9, 12, 11, 2, 7, 5, 14, 29, 29, 116, 96 }, { 2, 10, 12, 2, 7, 19, 16, 17, 28, 52, 38, 100 }
 };
-static const unsigned char hz_l[2][GK__SW_TERMS] = { { 0, 0, 0, 0, 0, 0, 1, 1, 2, 2, 3, 3 },
-                                                     { 0, 0, 0, 0, 0, 1, 1, 1, 2, 2, 2, 3 } };
 
 /* Below HZ_TWO_ROOT_TR T_r both roots are sought (the equations' own critical temperatures lie
    within 0.1 % of T_r; a mixture's pseudo-critical point within a few percent). */
@@ -205,7 +200,6 @@ static gk_status hz_model_pure(const gk__sw_fluid *fluid, gk__hz_model *out) {
     out->t_min = fluid->t_min;
     out->t_max = fluid->t_max;
     out->p_max = fluid->p_max;
-    out->forms = 1u << (unsigned)fluid->form;
     out->fluid = fluid;
     out->gas = NULL;
     out->rows = NULL;
@@ -234,7 +228,7 @@ gk_status gk__sw_model_gas(const gk_gas *gas, gk__hz_model *out) {
     return GK_ERR_NOT_FOUND;
 }
 
-/* Adds x times the row to the mixture's range, forms and reducing sums s[0..4]:
+/* Adds x times the row to the mixture's range and reducing sums s[0..4]:
    s[0] = sum x sqrt(Tc), s[1..4] = S0..S3, S_k = sum x v^(k/3), v = 1/rho_c. */
 static void hz_mix_add(gk__hz_model *m, const gk__sw_fluid *fl, gk_real x, gk_real s[5]) {
     gk_real c = gk_cbrt(GK_LIT(1.0) / fl->rho_c);
@@ -243,13 +237,12 @@ static void hz_mix_add(gk__hz_model *m, const gk__sw_fluid *fl, gk_real x, gk_re
     s[2] += x * c;
     s[3] += x * c * c;
     s[4] += x * c * c * c;
-    m->forms |= 1u << (unsigned)fl->form;
     m->t_min = (fl->t_min > m->t_min) ? fl->t_min : m->t_min;
     m->t_max = (fl->t_max < m->t_max) ? fl->t_max : m->t_max;
     m->p_max = (fl->p_max < m->p_max) ? fl->p_max : m->p_max;
 }
 
-/* The reducing values, range and forms of a mixture whose i-th row is rows[i] (rows given) or
+/* The reducing values and range of a mixture whose i-th row is rows[i] (rows given) or
    gk__sw_find(gas[i]); every component with x_i > 0 has a row (checked by the callers). */
 static gk_status hz_model_mix(const gk_gas *const *gas, const gk__sw_fluid *const *rows,
                               const gk_real *x, size_t count, gk__hz_model *out) {
@@ -259,7 +252,6 @@ static gk_status hz_model_mix(const gk_gas *const *gas, const gk__sw_fluid *cons
     m.t_min = GK_LIT(0.0);
     m.t_max = GK_REAL_MAX;
     m.p_max = GK_REAL_MAX;
-    m.forms = 0u;
     m.fluid = NULL;
     m.gas = gas;
     m.rows = rows;
@@ -298,10 +290,22 @@ gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_
 
 /* ---------------------------------------------------------------- evaluation */
 
-/* Per-temperature state of one solve: c_k = n_k tau^t_k of each present form, and Pi. */
+/* The terms of both forms fall into 12 groups of equal exponents (d, l) (Part I; l = 0: no
+   exponential): (1,0) (2,0) (3,0) (7,0) (1,1) (2,1) (5,1) (1,2) (4,2) (2,3) (3,3) (4,3). Per
+   temperature the terms of a group add into one coefficient G = sum n_k tau^t_k (over the
+   forms present and, for a mixture, x_i over the components), so every density evaluation,
+   pure or mixed, nonpolar or polar, is 12 terms at most. */
+enum {
+    HZ_GROUPS = 12
+};
+static const unsigned char hz_group[2][GK__SW_TERMS] = {
+    { 0, 0, 0, 1, 2, 3, 5, 6, 7, 8, 10, 11 }, /* nonpolar */
+    { 0, 0, 0, 2, 3, 4, 5, 6, 7, 7, 8, 9 }    /* polar */
+};
+
+/* Per-temperature state of one solve: the group coefficients G, and Pi. */
 typedef struct hz_ctx {
-    gk_real c[2][GK__SW_TERMS];
-    unsigned forms;
+    gk_real g[HZ_GROUPS];
     gk_real pi; /* p / (rho_r R T) */
 } hz_ctx;
 
@@ -310,18 +314,23 @@ typedef struct hz_sums {
     gk_real a, s1, s2;
 } hz_sums;
 
-/* Adds x times a row's coefficients (a row that is NULL adds nothing: cannot happen for a
-   model built by gk__sw_model_*()). */
-static void hz_add_row(hz_ctx *ctx, const gk__sw_fluid *fl, gk_real x) {
+/* Adds x n_k tau^t_k of a row into its groups; t_k in eighths = an integer power tp[] times
+   fr[j] = tau^(j/8). A row that is NULL adds nothing (cannot happen for a model built by
+   gk__sw_model_*()). */
+static void hz_add_row(hz_ctx *ctx, const gk__sw_fluid *fl, gk_real x, const gk_real *tp,
+                       const gk_real *fr) {
     int k;
     if (fl == NULL) { return; }
-    for (k = 0; k < GK__SW_TERMS; ++k) { ctx->c[fl->form][k] += x * fl->n[k]; }
+    for (k = 0; k < GK__SW_TERMS; ++k) {
+        unsigned t8 = hz_t8[fl->form][k];
+        ctx->g[hz_group[fl->form][k]] += (x * fl->n[k]) * (tp[t8 >> 3u] * fr[t8 & 7u]);
+    }
 }
 
 static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
     gk_real fr[8], tp[15];
     size_t i;
-    int f, k;
+    int k;
     fr[0] = GK_LIT(1.0);
     fr[4] = gk_sqrt(tau);
     fr[2] = gk_sqrt(fr[4]);
@@ -332,28 +341,17 @@ static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
     fr[7] = fr[4] * fr[3];
     tp[0] = GK_LIT(1.0);
     for (k = 1; k < 15; ++k) { tp[k] = tp[k - 1] * tau; }
-    /* the coefficients N_k: the row's, or sum_i x_i n_k,i of a mixture; then times tau^t_k,
-       t_k = 8ths: an integer power tp[] times fr[j] = tau^(j/8) */
-    for (k = 0; k < GK__SW_TERMS; ++k) {
-        ctx->c[0][k] = GK_LIT(0.0);
-        ctx->c[1][k] = GK_LIT(0.0);
-    }
+    for (k = 0; k < HZ_GROUPS; ++k) { ctx->g[k] = GK_LIT(0.0); }
     if (m->fluid != NULL) {
-        hz_add_row(ctx, m->fluid, GK_LIT(1.0));
+        hz_add_row(ctx, m->fluid, GK_LIT(1.0), tp, fr);
     } else {
         for (i = 0; i < m->count; ++i) {
             if (m->x[i] > GK_LIT(0.0)) {
-                hz_add_row(ctx, (m->rows != NULL) ? m->rows[i] : gk__sw_find(m->gas[i]), m->x[i]);
+                hz_add_row(ctx, (m->rows != NULL) ? m->rows[i] : gk__sw_find(m->gas[i]), m->x[i],
+                           tp, fr);
             }
         }
     }
-    for (f = 0; f < 2; ++f) {
-        for (k = 0; k < GK__SW_TERMS; ++k) {
-            unsigned t8 = hz_t8[f][k];
-            ctx->c[f][k] *= tp[t8 >> 3u] * fr[t8 & 7u];
-        }
-    }
-    ctx->forms = m->forms;
 }
 
 /* Adds a polynomial term T = c delta^d: delta dT/ddelta = d T, delta^2 d2T/ddelta^2 = d(d-1) T. */
@@ -372,39 +370,25 @@ static inline void hz_expo(hz_sums *s, gk_real term, gk_real d, gk_real l, gk_re
     s->s2 += (g * (g - GK_LIT(1.0)) - l * l * dl) * term;
 }
 
-/* Exponents (d, l) of the terms, Part I: nonpolar (1,-) (1,-) (1,-) (2,-) (3,-) (7,-) (2,1) (5,1)
-   (1,2) (4,2) (3,3) (4,3); polar (1,-) (1,-) (1,-) (3,-) (7,-) (1,1) (2,1) (5,1) (1,2) (1,2)
-   (4,2) (2,3). */
+/* The 12 groups (see hz_group). */
 static void hz_eval(const hz_ctx *ctx, gk_real delta, hz_sums *out) {
     const gk_real d2 = delta * delta, d3 = d2 * delta, d4 = d2 * d2, d5 = d4 * delta;
     const gk_real d7 = d4 * d3;
     const gk_real e1 = gk_exp(-delta), e2 = gk_exp(-d2), e3 = gk_exp(-d3);
+    const gk_real *g = ctx->g;
     hz_sums s = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
-    const gk_real *c = ctx->c[GK__SW_NONPOLAR];
-    if ((ctx->forms & (1u << GK__SW_NONPOLAR)) != 0u) {
-        hz_poly(&s, ((c[0] + c[1]) + c[2]) * delta, GK_LIT(1.0));
-        hz_poly(&s, c[3] * d2, GK_LIT(2.0));
-        hz_poly(&s, c[4] * d3, GK_LIT(3.0));
-        hz_poly(&s, c[5] * d7, GK_LIT(7.0));
-        hz_expo(&s, c[6] * d2 * e1, GK_LIT(2.0), GK_LIT(1.0), delta);
-        hz_expo(&s, c[7] * d5 * e1, GK_LIT(5.0), GK_LIT(1.0), delta);
-        hz_expo(&s, c[8] * delta * e2, GK_LIT(1.0), GK_LIT(2.0), d2);
-        hz_expo(&s, c[9] * d4 * e2, GK_LIT(4.0), GK_LIT(2.0), d2);
-        hz_expo(&s, c[10] * d3 * e3, GK_LIT(3.0), GK_LIT(3.0), d3);
-        hz_expo(&s, c[11] * d4 * e3, GK_LIT(4.0), GK_LIT(3.0), d3);
-    }
-    c = ctx->c[GK__SW_POLAR];
-    if ((ctx->forms & (1u << GK__SW_POLAR)) != 0u) {
-        hz_poly(&s, ((c[0] + c[1]) + c[2]) * delta, GK_LIT(1.0));
-        hz_poly(&s, c[3] * d3, GK_LIT(3.0));
-        hz_poly(&s, c[4] * d7, GK_LIT(7.0));
-        hz_expo(&s, c[5] * delta * e1, GK_LIT(1.0), GK_LIT(1.0), delta);
-        hz_expo(&s, c[6] * d2 * e1, GK_LIT(2.0), GK_LIT(1.0), delta);
-        hz_expo(&s, c[7] * d5 * e1, GK_LIT(5.0), GK_LIT(1.0), delta);
-        hz_expo(&s, (c[8] + c[9]) * delta * e2, GK_LIT(1.0), GK_LIT(2.0), d2);
-        hz_expo(&s, c[10] * d4 * e2, GK_LIT(4.0), GK_LIT(2.0), d2);
-        hz_expo(&s, c[11] * d2 * e3, GK_LIT(2.0), GK_LIT(3.0), d3);
-    }
+    hz_poly(&s, g[0] * delta, GK_LIT(1.0));
+    hz_poly(&s, g[1] * d2, GK_LIT(2.0));
+    hz_poly(&s, g[2] * d3, GK_LIT(3.0));
+    hz_poly(&s, g[3] * d7, GK_LIT(7.0));
+    hz_expo(&s, g[4] * delta * e1, GK_LIT(1.0), GK_LIT(1.0), delta);
+    hz_expo(&s, g[5] * d2 * e1, GK_LIT(2.0), GK_LIT(1.0), delta);
+    hz_expo(&s, g[6] * d5 * e1, GK_LIT(5.0), GK_LIT(1.0), delta);
+    hz_expo(&s, g[7] * delta * e2, GK_LIT(1.0), GK_LIT(2.0), d2);
+    hz_expo(&s, g[8] * d4 * e2, GK_LIT(4.0), GK_LIT(2.0), d2);
+    hz_expo(&s, g[9] * d2 * e3, GK_LIT(2.0), GK_LIT(3.0), d3);
+    hz_expo(&s, g[10] * d3 * e3, GK_LIT(3.0), GK_LIT(3.0), d3);
+    hz_expo(&s, g[11] * d4 * e3, GK_LIT(4.0), GK_LIT(3.0), d3);
     *out = s;
 }
 
@@ -511,15 +495,10 @@ static gk_real hz_liquid_start(gk_real tr) {
    d_k = 1, l_k = 1)): delta0 = 2 Pi / (1 + sqrt(1 + 4 B Pi)) solves the second-order series, one
    fixed-point step delta = Pi / (1 + B delta0 + C delta0^2) adds the third. */
 static gk_real hz_gas_start(const hz_ctx *ctx, gk_real limit) {
-    gk_real b = GK_LIT(0.0), c = GK_LIT(0.0), q, d;
-    int f, k;
-    for (f = 0; f < 2; ++f) {
-        for (k = 0; k < GK__SW_TERMS; ++k) {
-            if (hz_d[f][k] == 1u) { b += ctx->c[f][k]; }
-            if (hz_d[f][k] == 2u) { c += GK_LIT(2.0) * ctx->c[f][k]; }
-            if (hz_d[f][k] == 1u && hz_l[f][k] == 1u) { c -= GK_LIT(2.0) * ctx->c[f][k]; }
-        }
-    }
+    /* the d = 1 groups (1,0) (1,1) (1,2); the d = 2 groups (2,0) (2,1) (2,3), and (1,1) again */
+    const gk_real b = ctx->g[0] + ctx->g[4] + ctx->g[7];
+    const gk_real c = GK_LIT(2.0) * ((ctx->g[1] + ctx->g[5] + ctx->g[9]) - ctx->g[4]);
+    gk_real q, d;
     q = GK_LIT(1.0) + GK_LIT(4.0) * b * ctx->pi;
     /* without a virial root the ideal-gas density: below the vapour root when there is one */
     if (!(q > GK_LIT(0.0))) {

@@ -107,15 +107,14 @@ typedef struct gk__sw_fluid {
     gk_real n[GK__SW_TERMS]; /* n_1 ... n_12 */
 } gk__sw_fluid;
 
-/* A Span-Wagner model, pure or mixed: reducing values, validity range, the forms present, and
-   where the coefficients are: one row (a pure fluid), or the caller's arrays of count gases and
+/* A Span-Wagner model, pure or mixed: reducing values, validity range, and where the
+   coefficients are: one row (a pure fluid), or the caller's arrays of count gases and
    mole fractions (a mixture: they must stay valid while the model is used; rows are looked up
    again per solve). Small plain data (firmware stack), built by gk__sw_model_*(). */
 typedef struct gk__hz_model {
     gk_real t_r;                     /* reducing temperature, K */
     gk_real rho_r;                   /* reducing density, mol/m^3 */
     gk_real t_min, t_max, p_max;     /* validity */
-    unsigned forms;                  /* bit (1 << gk__sw_form) set when that form is present */
     const gk__sw_fluid *fluid;       /* the row of a pure fluid, else NULL */
     const gk_gas *const *gas;        /* a mixture's gases (count of them), or NULL */
     const gk__sw_fluid *const *rows; /* or a mixture's rows (dry air), else NULL */
