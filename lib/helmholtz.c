@@ -370,8 +370,14 @@ static inline void hz_expo(hz_sums *s, gk_real term, gk_real d, gk_real l, gk_re
     s->s2 += (g * (g - GK_LIT(1.0)) - l * l * dl) * term;
 }
 
-/* The 12 groups (see hz_group). */
-static void hz_eval(const hz_ctx *ctx, gk_real delta, hz_sums *out) {
+/* The 12 groups (see hz_group). Always inlined: inside hz_root() its registers are saved once
+   (firmware stack: 40 B less on the deepest call, for about 360 B of code). */
+#  if defined(__GNUC__)
+#    define HZ_INLINE inline __attribute__((always_inline))
+#  else
+#    define HZ_INLINE inline
+#  endif
+static HZ_INLINE void hz_eval(const hz_ctx *ctx, gk_real delta, hz_sums *out) {
     const gk_real d2 = delta * delta, d3 = d2 * delta, d4 = d2 * d2, d5 = d4 * delta;
     const gk_real d7 = d4 * d3;
     const gk_real e1 = gk_exp(-delta), e2 = gk_exp(-d2), e3 = gk_exp(-d3);
