@@ -7,7 +7,7 @@
  * - Per temperature, the products n_k tau^t_k are formed once and added into 12 coefficients,
  *   one per group of terms with equal exponents (d, l) (the two forms have 12 such groups
  *   between them), summed over the components of a mixture. Every t_k is a multiple of 1/8
- *   (Part I), so tau^t_k is an integer power of tau (a table of products) times tau^(j/8),
+ *   (Part I), so tau^t_k is an integer power of tau (repeated squaring) times tau^(j/8),
  *   j = 0..7, from three square roots: no pow() call.
  * - Per density, one pass over the 12 groups with delta^1 ... delta^7 by multiplication and the
  *   three exponentials exp(-delta), exp(-delta^2), exp(-delta^3) gives alpha_r,
@@ -314,21 +314,32 @@ typedef struct hz_sums {
     gk_real a, s1, s2;
 } hz_sums;
 
-/* Adds x n_k tau^t_k of a row into its groups; t_k in eighths = an integer power tp[] times
+/* tau^n for 0 <= n < 16 by repeated squaring (once per state and term). */
+static gk_real hz_ipow(gk_real tau, unsigned n) {
+    gk_real r = GK_LIT(1.0);
+    while (n != 0u) {
+        if ((n & 1u) != 0u) { r *= tau; }
+        tau *= tau;
+        n >>= 1u;
+    }
+    return r;
+}
+
+/* Adds x n_k tau^t_k of a row into its groups; t_k in eighths = an integer power of tau times
    fr[j] = tau^(j/8). A row that is NULL adds nothing (cannot happen for a model built by
    gk__sw_model_*()). */
-static void hz_add_row(hz_ctx *ctx, const gk__sw_fluid *fl, gk_real x, const gk_real *tp,
+static void hz_add_row(hz_ctx *ctx, const gk__sw_fluid *fl, gk_real x, gk_real tau,
                        const gk_real *fr) {
     int k;
     if (fl == NULL) { return; }
     for (k = 0; k < GK__SW_TERMS; ++k) {
         unsigned t8 = hz_t8[fl->form][k];
-        ctx->g[hz_group[fl->form][k]] += (x * fl->n[k]) * (tp[t8 >> 3u] * fr[t8 & 7u]);
+        ctx->g[hz_group[fl->form][k]] += (x * fl->n[k]) * (hz_ipow(tau, t8 >> 3u) * fr[t8 & 7u]);
     }
 }
 
 static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
-    gk_real fr[8], tp[15];
+    gk_real fr[8];
     size_t i;
     int k;
     fr[0] = GK_LIT(1.0);
@@ -339,16 +350,14 @@ static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
     fr[5] = fr[4] * fr[1];
     fr[6] = fr[4] * fr[2];
     fr[7] = fr[4] * fr[3];
-    tp[0] = GK_LIT(1.0);
-    for (k = 1; k < 15; ++k) { tp[k] = tp[k - 1] * tau; }
     for (k = 0; k < HZ_GROUPS; ++k) { ctx->g[k] = GK_LIT(0.0); }
     if (m->fluid != NULL) {
-        hz_add_row(ctx, m->fluid, GK_LIT(1.0), tp, fr);
+        hz_add_row(ctx, m->fluid, GK_LIT(1.0), tau, fr);
     } else {
         for (i = 0; i < m->count; ++i) {
             if (m->x[i] > GK_LIT(0.0)) {
                 hz_add_row(ctx, (m->rows != NULL) ? m->rows[i] : gk__sw_find(m->gas[i]), m->x[i],
-                           tp, fr);
+                           tau, fr);
             }
         }
     }
