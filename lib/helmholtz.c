@@ -7,7 +7,7 @@
  * - Per temperature, the products n_k tau^t_k are formed once and added into 12 coefficients,
  *   one per group of terms with equal exponents (d, l) (the two forms have 12 such groups
  *   between them), summed over the components of a mixture. Every t_k is a multiple of 1/8
- *   (Part I), so tau^t_k is an integer power of tau (repeated squaring) times tau^(j/8),
+ *   (Part I), so tau^t_k is one of 8 integer powers of tau (products) times tau^(j/8),
  *   j = 0..7, from three square roots: no pow() call.
  * - Per density, one pass over the 12 groups with delta^1 ... delta^7 by multiplication and the
  *   three exponentials exp(-delta), exp(-delta^2), exp(-delta^3) gives alpha_r,
@@ -314,32 +314,31 @@ typedef struct hz_sums {
     gk_real a, s1, s2;
 } hz_sums;
 
-/* tau^n for 0 <= n < 16 by repeated squaring (once per state and term). */
-static gk_real hz_ipow(gk_real tau, unsigned n) {
-    gk_real r = GK_LIT(1.0);
-    while (n != 0u) {
-        if ((n & 1u) != 0u) { r *= tau; }
-        tau *= tau;
-        n >>= 1u;
-    }
-    return r;
-}
+/* The integer powers of tau the exponents use (the integer parts of t_k: 0, 1, 2, 3, 4, 6, 12,
+   14) and, per term, the slot of its power in that list. */
+enum {
+    HZ_TAU_POWERS = 8
+};
+static const unsigned char hz_tslot[2][GK__SW_TERMS] = {
+    { 0, 1, 1, 1, 0, 0, 0, 1, 3, 3, 7, 6 }, /* nonpolar: 0 1 1 1 0 0 0 1 3 3 14 12 */
+    { 0, 1, 1, 0, 0, 2, 2, 2, 3, 5, 4, 6 }  /* polar: 0 1 1 0 0 2 2 2 3 6 4 12 */
+};
 
-/* Adds x n_k tau^t_k of a row into its groups; t_k in eighths = an integer power of tau times
+/* Adds x n_k tau^t_k of a row into its groups; t_k in eighths = an integer power tp[slot] times
    fr[j] = tau^(j/8). A row that is NULL adds nothing (cannot happen for a model built by
    gk__sw_model_*()). */
-static void hz_add_row(hz_ctx *ctx, const gk__sw_fluid *fl, gk_real x, gk_real tau,
+static void hz_add_row(hz_ctx *ctx, const gk__sw_fluid *fl, gk_real x, const gk_real *tp,
                        const gk_real *fr) {
     int k;
     if (fl == NULL) { return; }
     for (k = 0; k < GK__SW_TERMS; ++k) {
-        unsigned t8 = hz_t8[fl->form][k];
-        ctx->g[hz_group[fl->form][k]] += (x * fl->n[k]) * (hz_ipow(tau, t8 >> 3u) * fr[t8 & 7u]);
+        unsigned f = (unsigned)fl->form;
+        ctx->g[hz_group[f][k]] += (x * fl->n[k]) * (tp[hz_tslot[f][k]] * fr[hz_t8[f][k] & 7u]);
     }
 }
 
 static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
-    gk_real fr[8];
+    gk_real fr[8], tp[HZ_TAU_POWERS];
     size_t i;
     int k;
     fr[0] = GK_LIT(1.0);
@@ -350,14 +349,22 @@ static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
     fr[5] = fr[4] * fr[1];
     fr[6] = fr[4] * fr[2];
     fr[7] = fr[4] * fr[3];
+    tp[0] = GK_LIT(1.0);
+    tp[1] = tau;
+    tp[2] = tau * tau;
+    tp[3] = tp[2] * tau;
+    tp[4] = tp[2] * tp[2];
+    tp[5] = tp[3] * tp[3];
+    tp[6] = tp[5] * tp[5];
+    tp[7] = tp[6] * tp[2];
     for (k = 0; k < HZ_GROUPS; ++k) { ctx->g[k] = GK_LIT(0.0); }
     if (m->fluid != NULL) {
-        hz_add_row(ctx, m->fluid, GK_LIT(1.0), tau, fr);
+        hz_add_row(ctx, m->fluid, GK_LIT(1.0), tp, fr);
     } else {
         for (i = 0; i < m->count; ++i) {
             if (m->x[i] > GK_LIT(0.0)) {
                 hz_add_row(ctx, (m->rows != NULL) ? m->rows[i] : gk__sw_find(m->gas[i]), m->x[i],
-                           tau, fr);
+                           tp, fr);
             }
         }
     }
