@@ -53,9 +53,9 @@ static void make_states(double t_lo, double t_hi, double p_lo, double p_hi) {
 static double pass_sw(const gk__hz_model *m) {
     double s = 0.0;
     for (int i = 0; i < NSTATES; ++i) {
-        gk__hz_result r;
+        gk_eos_result r;
         if (gk__hz_solve(m, (gk_real)P[i], (gk_real)T[i], GK_ROOT_STABLE, &r) == GK_OK) {
-            s += (double)r.z + (double)r.ln_phi + (double)r.molar_density;
+            s += (double)r.z + (double)r.fugacity_coefficient + (double)r.molar_volume.m3_per_mol;
         }
     }
     return s;

@@ -134,46 +134,42 @@ static gk_status fluid_sw_model(const gk__fluid *f, gk__hz_model *m) {
                : gk__sw_model_gas(f->gas, m);
 }
 
-/* A state of a reference-grade model (helmholtz.h), in the result form of the cubics. Out of
-   line: the cubic path does not carry its frame. */
+/* The state of the hydrogen equation (hydrogen.h) in the result form: one root. */
+static GK__FLUID_NOINLINE gk_status fluid_h2_state(const gk__fluid *f, gk_real p, gk_real t,
+                                                   gk_eos_result *out) {
+    gk__h2_state h;
+    gk_real phi, vm;
+    gk_status st = gk__h2_solve(p, t, &h);
+    if (st != GK_OK) { return st; }
+    phi = gk_exp(h.ln_phi);
+    vm = GK_LIT(1.0) / h.molar_density;
+    if (!gk_positive(phi) || !gk_positive(vm)) { return GK_ERR_RANGE; }
+    out->z = h.z;
+    out->molar_volume.m3_per_mol = vm;
+    out->fugacity_coefficient = phi;
+    out->root_count = 1;
+    out->z_roots[0] = h.z;
+    out->z_roots[1] = GK_LIT(0.0);
+    out->z_roots[2] = GK_LIT(0.0);
+    /* a lone root above the critical temperature is labelled as the cubics do */
+    out->branch = (t > f->tc) ? GK_ROOT_SUPERCRITICAL : GK_ROOT_GAS;
+    return GK_OK;
+}
+
+/* A state of a reference-grade model (helmholtz.h, hydrogen.h). Out of line: the cubic path
+   does not carry its frame. */
 static GK__FLUID_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk_real p, gk_real t,
                                                           gk_root root, gk_eos_result *out) {
     gk__hz_model m;
-    gk__hz_result r;
-    gk_real phi, vm;
     gk_status st;
     if (f->eos == GK_EOS_HYDROGEN) {
-        gk__h2_state h;
-        st = gk__h2_solve(p, t, &h);
-        if (st != GK_OK) { return st; }
-        /* one root: the result form of a lone root (the label is set below) */
-        r.z = h.z;
-        r.molar_density = h.molar_density;
-        r.ln_phi = h.ln_phi;
-        r.root_count = 1;
-        r.z_roots[0] = h.z;
-        r.z_roots[1] = GK_LIT(0.0);
-        r.z_roots[2] = GK_LIT(0.0);
-        r.branch = GK_ROOT_GAS;
+        st = fluid_h2_state(f, p, t, out);
     } else {
         st = fluid_sw_model(f, &m);
-        if (st == GK_OK) { st = gk__hz_solve(&m, p, t, root, &r); }
+        if (st == GK_OK) { st = gk__hz_solve(&m, p, t, root, out); }
     }
-    if (st != GK_OK) { return st; }
-    phi = gk_exp(r.ln_phi);
-    vm = GK_LIT(1.0) / r.molar_density;
-    if (!gk_positive(phi) || !gk_positive(vm)) { return GK_ERR_RANGE; }
-    out->z = r.z;
-    out->molar_volume.m3_per_mol = vm;
-    out->fugacity_coefficient = phi;
-    out->root_count = r.root_count;
-    out->z_roots[0] = r.z_roots[0];
-    out->z_roots[1] = r.z_roots[1];
-    out->z_roots[2] = r.z_roots[2];
-    /* a lone root above the critical (reducing) temperature is labelled as the cubics do */
-    out->branch = (r.root_count == 1 && t > f->tc) ? GK_ROOT_SUPERCRITICAL : r.branch;
-    out->model = f->eos;
-    return GK_OK;
+    if (st == GK_OK) { out->model = f->eos; }
+    return st;
 }
 
 #endif

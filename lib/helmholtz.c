@@ -546,13 +546,14 @@ static void hz_z_lnphi(const hz_ctx *ctx, gk_real delta, const hz_sums *s, gk_re
 
 /* Writes the chosen root (index 0 = liquid-like, 1 = vapour-like) into *out. Out of line: its
    locals are not in the frame that lies under the root searches (firmware stack budget). */
-static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, const hz_ctx *ctx, const gk_real dl[2],
-                                     const hz_sums sl[2], const int found[2], gk_root root,
-                                     gk__hz_result *out) {
+static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, const hz_ctx *ctx, gk_real t,
+                                     const gk_real dl[2], const hz_sums sl[2], const int found[2],
+                                     gk_root root, gk_eos_result *out) {
     int n = found[0] + found[1];
     int i = (found[1] != 0) ? 1 : 0; /* the vapour-like root, or the only one */
     gk_real z[2] = { GK_LIT(0.0), GK_LIT(0.0) }, lp[2] = { GK_LIT(0.0), GK_LIT(0.0) };
-    gk__hz_result r;
+    gk_real phi, vm;
+    gk_root branch;
     int k;
     for (k = 0; k < 2; ++k) {
         if (found[k] != 0) { hz_z_lnphi(ctx, dl[k], &sl[k], &z[k], &lp[k]); }
@@ -562,27 +563,29 @@ static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, const hz_ctx *ctx, c
     } else if (n == 2 && root == GK_ROOT_STABLE) {
         i = (lp[0] < lp[1]) ? 0 : 1; /* a tie goes to the gas */
     }
-    r.z = z[i];
-    r.molar_density = dl[i] * m->rho_r;
-    r.ln_phi = lp[i];
-    r.root_count = n;
-    r.z_roots[0] = (n == 2) ? z[0] : z[i];
-    r.z_roots[1] = (n == 2) ? z[1] : GK_LIT(0.0);
-    r.z_roots[2] = GK_LIT(0.0);
     if (n == 2) {
-        r.branch = (i == 0) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
+        branch = (i == 0) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
+    } else if (t > m->t_r) {
+        branch = GK_ROOT_SUPERCRITICAL; /* a lone root above T_r, as the cubics label it */
     } else {
-        r.branch = (dl[i] > GK_LIT(1.0)) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
+        branch = (dl[i] > GK_LIT(1.0)) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
     }
-    if (!gk_positive(r.z) || !gk_positive(r.molar_density) || !gk_finite(r.ln_phi)) {
-        return GK_ERR_RANGE;
-    }
-    *out = r;
+    phi = gk_exp(lp[i]);
+    vm = GK_LIT(1.0) / (dl[i] * m->rho_r);
+    if (!gk_positive(z[i]) || !gk_positive(vm) || !gk_positive(phi)) { return GK_ERR_RANGE; }
+    out->z = z[i];
+    out->molar_volume.m3_per_mol = vm;
+    out->fugacity_coefficient = phi;
+    out->root_count = n;
+    out->z_roots[0] = (n == 2) ? z[0] : z[i];
+    out->z_roots[1] = (n == 2) ? z[1] : GK_LIT(0.0);
+    out->z_roots[2] = GK_LIT(0.0);
+    out->branch = branch;
     return GK_OK;
 }
 
 gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
-                       gk__hz_result *out) {
+                       gk_eos_result *out) {
     hz_ctx ctx;
     gk_real dl[2] = { GK_LIT(0.0), GK_LIT(0.0) };
     hz_sums sl[2];
@@ -609,7 +612,7 @@ gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root
     }
     if (found[0] == 1 && found[1] == 1 && dl[0] < dl[1]) { return GK_ERR_NO_SOLUTION; }
     if (found[0] + found[1] == 0) { return GK_ERR_NO_SOLUTION; }
-    return hz_pick(m, &ctx, dl, sl, found, root, out);
+    return hz_pick(m, &ctx, t, dl, sl, found, root, out);
 }
 
 gk_status gk__hz_pressure(const gk__hz_model *m, gk_real rho, gk_real t, gk_real *out) {

@@ -39,8 +39,8 @@
  * mechanically stable (dp/drho > 0 checked at every accepted root). root_count is 1 or 2: the
  * mechanically unstable root(s) between a vapour-like and a liquid-like root are not located and
  * not reported (z_roots holds the liquid-like then the vapour-like Z, ascending, unused entries 0).
- * With one root, branch is GK_ROOT_LIQUID when delta > 1 (denser than the reducing density),
- * else GK_ROOT_GAS.
+ * With one root, branch is GK_ROOT_SUPERCRITICAL above T_r, else GK_ROOT_LIQUID when delta > 1
+ * (denser than the reducing density), else GK_ROOT_GAS.
  *
  * Status contract (every function; outputs written only on GK_OK, and then finite):
  *
@@ -122,16 +122,6 @@ typedef struct gk__hz_model {
     size_t count;
 } gk__hz_model;
 
-/* A solved state. */
-typedef struct gk__hz_result {
-    gk_real z;             /* compressibility factor of the returned root */
-    gk_real molar_density; /* mol/m^3 */
-    gk_real ln_phi;        /* ln of the fugacity coefficient (of the mixture as a whole) */
-    int root_count;        /* 1 or 2 (see the file comment) */
-    gk_real z_roots[3];    /* ascending; unused entries 0 */
-    gk_root branch;        /* GK_ROOT_GAS or GK_ROOT_LIQUID */
-} gk__hz_result;
-
 /* The coefficient row of a gas (matched by its formula, case-sensitive, as gk_gas_find()),
    or NULL when the gas is NULL or not covered (air has no row: see gk__sw_model_gas()). */
 const gk__sw_fluid *gk__sw_find(const gk_gas *gas);
@@ -149,9 +139,11 @@ gk_status gk__sw_model_gas(const gk_gas *gas, gk__hz_model *out);
 gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_t count,
                                gk__hz_model *out);
 
-/* Z, density and ln phi at p (Pa), T (K) with the root choice above. */
+/* The state at p (Pa), T (K) with the root choice above, in the result form of the cubics:
+   every field of *out but model (left to the caller) is written, on GK_OK only. A lone root
+   above T_r is labelled GK_ROOT_SUPERCRITICAL. */
 gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
-                       gk__hz_result *out);
+                       gk_eos_result *out);
 
 /* Pressure (Pa) at molar density rho (mol/m^3) and T (K): p = rho R T (1 + delta dalpha_r/ddelta).
    GK_ERR_RANGE also when the pressure is above p_max; GK_ERR_NO_SOLUTION when it is not > 0
