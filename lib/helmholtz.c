@@ -512,23 +512,23 @@ static gk_real hz_liquid_start(gk_real tr) {
     return (d < GK__HZ_DELTA_MAX) ? d : GK_LIT(0.5) * (GK_LIT(1.0) + GK__HZ_DELTA_MAX);
 }
 
-/* Vapour-like start from the virial series Z = 1 + B delta + C delta^2 (reduced coefficients
-   at delta -> 0: B = sum of c_k over the d_k = 1 terms, C = 2 (sum over d_k = 2) - 2 (sum over
-   d_k = 1, l_k = 1)): delta0 = 2 Pi / (1 + sqrt(1 + 4 B Pi)) solves the second-order series, one
-   fixed-point step delta = Pi / (1 + B delta0 + C delta0^2) adds the third. */
-static gk_real hz_gas_start(const hz_ctx *ctx, gk_real limit) {
+/* Vapour-like start from the virial series Z = 1 + B delta + C delta^2 (reduced coefficients at
+   delta -> 0: B = the sum of the d = 1 groups, C = 2 (sum of the d = 2 groups) - 2 (the (1,1)
+   group)): delta0 = 2 Pi / (1 + sqrt(1 + 4 B Pi)) solves the second-order series, one
+   fixed-point step delta = Pi / (1 + B delta0 + C delta0^2) adds the third. Out of line: its
+   temporaries stay out of gk__hz_solve's frame, which lies under the Newton loop (firmware
+   stack). */
+static HZ_NOINLINE gk_real hz_gas_start(const hz_ctx *ctx, gk_real limit) {
     /* the d = 1 groups (1,0) (1,1) (1,2); the d = 2 groups (2,0) (2,1) (2,3), and (1,1) again */
     const gk_real b = ctx->g[0] + ctx->g[4] + ctx->g[7];
     const gk_real c = GK_LIT(2.0) * ((ctx->g[1] + ctx->g[5] + ctx->g[9]) - ctx->g[4]);
-    gk_real q, d;
-    q = GK_LIT(1.0) + GK_LIT(4.0) * b * ctx->pi;
+    gk_real q = GK_LIT(1.0) + GK_LIT(4.0) * b * ctx->pi, d = ctx->pi;
     /* without a virial root the ideal-gas density: below the vapour root when there is one */
-    if (!(q > GK_LIT(0.0))) {
-        return (ctx->pi < GK_LIT(0.5) * limit) ? ctx->pi : GK_LIT(0.5) * limit;
+    if (q > GK_LIT(0.0)) {
+        d = GK_LIT(2.0) * ctx->pi / (GK_LIT(1.0) + gk_sqrt(q));
+        q = GK_LIT(1.0) + (b + c * d) * d;
+        d = (q > GK_LIT(0.0)) ? ctx->pi / q : d;
     }
-    d = GK_LIT(2.0) * ctx->pi / (GK_LIT(1.0) + gk_sqrt(q));
-    q = GK_LIT(1.0) + (b + c * d) * d;
-    d = (q > GK_LIT(0.0)) ? ctx->pi / q : d;
     return (d < GK_LIT(0.5) * limit) ? d : GK_LIT(0.5) * limit;
 }
 
