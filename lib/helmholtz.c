@@ -314,6 +314,11 @@ typedef struct hz_sums {
     gk_real a, s1, s2;
 } hz_sums;
 
+/* A root found: its reduced density, Z and ln phi. */
+typedef struct hz_rootrec {
+    gk_real delta, z, ln_phi;
+} hz_rootrec;
+
 /* The integer powers of tau the exponents use (the integer parts of t_k: 0, 1, 2, 3, 4, 6, 12,
    14) and, per term, the slot of its power in that list. */
 enum {
@@ -414,24 +419,36 @@ static HZ_INLINE void hz_eval(const hz_ctx *ctx, gk_real delta, hz_sums *out) {
     *out = s;
 }
 
+/* Z and ln phi of a root delta with its sums. Z = Pi / delta (exact at the root, so a liquid's
+   small Z keeps its relative precision, where 1 + S1 would cancel); ln phi = alpha_r + x - ln Z
+   with x = S1 = Z - 1 where |x| < 1/2 (a gas), else Pi/delta - 1: an absolute error of a few
+   eps, so phi is good to a few eps relative. */
+static void hz_z_lnphi(const hz_ctx *ctx, gk_real delta, const hz_sums *s, gk_real *z,
+                       gk_real *lnphi) {
+    gk_real zz = ctx->pi / delta;
+    gk_real x = (gk_fabs(s->s1) < GK_LIT(0.5)) ? s->s1 : zz - GK_LIT(1.0);
+    *z = zz;
+    *lnphi = (s->a + x) - gk_log(zz);
+}
+
 /* ---------------------------------------------------------------- density root */
 
 /* One density root by safeguarded Newton (see the top of the file). dir = +1: the vapour-like
    root, approached from below; dir = -1: the liquid-like root, approached from above.
    Returns 1 with the root, 0 when the branch has no root, -1 when the iteration cap is reached. */
-static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, gk_real *delta_out,
-                   hz_sums *out) {
+static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, hz_rootrec *out) {
     const gk_real limit = split ? GK_LIT(1.0) : (dir > 0) ? GK__HZ_DELTA_MAX : GK_LIT(0.0);
     const gk_real sgn = (dir > 0) ? GK_LIT(1.0) : GK_LIT(-1.0);
     gk_real near_end = (dir > 0) ? GK_LIT(0.0) : GK__HZ_DELTA_MAX;
     gk_real far_end = limit;
     gk_real x = start, best_x = start, best_f = GK_REAL_MAX, slope_near = GK_LIT(1.0);
-    hz_sums s, best_s = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
-    bool stepped = false, far_seen = (dir < 0 && !split);
+    hz_sums s;
+    bool stepped = false, far_seen = (dir < 0 && !split), settle = false;
     int it;
     for (it = 0; it < GK__HZ_ITER_MAX; ++it) {
         gk_real f, fp, dx, xn;
         hz_eval(ctx, x, &s);
+        if (settle) { break; } /* the sums at the best point, after a stall */
         f = x * (GK_LIT(1.0) + s.s1) - ctx->pi;
         fp = GK_LIT(1.0) + GK_LIT(2.0) * s.s1 + s.s2;
         if (sgn * f < GK_LIT(0.0)) {
@@ -451,9 +468,10 @@ static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, gk_rea
         if (gk_fabs(f) < best_f) {
             best_f = gk_fabs(f);
             best_x = x;
-            best_s = s;
         } else if (stepped && gk_fabs(x - best_x) <= HZ_STALL_TOL * GK_REAL_EPS * x) {
-            break; /* rounding level: keep the best point */
+            x = best_x; /* rounding level: back to the best point (evaluated once more) */
+            settle = true;
+            continue;
         }
         dx = (fp > GK_LIT(0.0)) ? -f / fp : GK_LIT(0.0);
         if (fp > GK_LIT(0.0) && gk_fabs(dx) <= HZ_QUAD_TOL * x) {
@@ -461,10 +479,9 @@ static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, gk_rea
                (f''/(2 f')) dx^2, below eps; take the step and move the sums to first order
                (d(alpha_r) = S1 dx/delta, d(S1) = (S1 + S2) dx/delta) without evaluating again */
             gk_real r = dx / x;
-            best_x = x + dx;
-            best_s.a = s.a + s.s1 * r;
-            best_s.s1 = s.s1 + (s.s1 + s.s2) * r;
-            best_s.s2 = s.s2;
+            x += dx;
+            s.a += s.s1 * r;
+            s.s1 += (s.s1 + s.s2) * r;
             break;
         }
         xn = x + dx;
@@ -483,12 +500,11 @@ static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, gk_rea
     }
     if (it == GK__HZ_ITER_MAX) { return -1; }
     /* dp/drho > 0 at the accepted root: mechanically stable, no spurious root */
-    if (!(GK_LIT(1.0) + GK_LIT(2.0) * best_s.s1 + best_s.s2 > GK_LIT(0.0)) ||
-        !(best_x > GK_LIT(0.0))) {
+    if (!(GK_LIT(1.0) + GK_LIT(2.0) * s.s1 + s.s2 > GK_LIT(0.0)) || !(x > GK_LIT(0.0))) {
         return 0;
     }
-    *delta_out = best_x;
-    *out = best_s;
+    out->delta = x;
+    hz_z_lnphi(ctx, x, &s, &out->z, &out->ln_phi);
     return 1;
 }
 
@@ -532,53 +548,35 @@ static HZ_NOINLINE gk_real hz_gas_start(const hz_ctx *ctx, gk_real limit) {
     return (d < GK_LIT(0.5) * limit) ? d : GK_LIT(0.5) * limit;
 }
 
-/* Z and ln phi of a root delta with its sums. Z = Pi / delta (exact at the root, so a liquid's
-   small Z keeps its relative precision, where 1 + S1 would cancel); ln phi = alpha_r + x - ln Z
-   with x = S1 = Z - 1 where |x| < 1/2 (a gas), else Pi/delta - 1: an absolute error of a few
-   eps, so phi is good to a few eps relative. */
-static void hz_z_lnphi(const hz_ctx *ctx, gk_real delta, const hz_sums *s, gk_real *z,
-                       gk_real *lnphi) {
-    gk_real zz = ctx->pi / delta;
-    gk_real x = (gk_fabs(s->s1) < GK_LIT(0.5)) ? s->s1 : zz - GK_LIT(1.0);
-    *z = zz;
-    *lnphi = (s->a + x) - gk_log(zz);
-}
-
 /* Writes the chosen root (index 0 = liquid-like, 1 = vapour-like) into *out. Out of line: its
    locals are not in the frame that lies under the root searches (firmware stack budget). */
-static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, const hz_ctx *ctx, gk_real t,
-                                     const gk_real dl[2], const hz_sums sl[2], const int found[2],
-                                     gk_root root, gk_eos_result *out) {
+static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, gk_real t, const hz_rootrec rr[2],
+                                     const int found[2], gk_root root, gk_eos_result *out) {
     int n = found[0] + found[1];
     int i = (found[1] != 0) ? 1 : 0; /* the vapour-like root, or the only one */
-    gk_real z[2] = { GK_LIT(0.0), GK_LIT(0.0) }, lp[2] = { GK_LIT(0.0), GK_LIT(0.0) };
     gk_real phi, vm;
     gk_root branch;
-    int k;
-    for (k = 0; k < 2; ++k) {
-        if (found[k] != 0) { hz_z_lnphi(ctx, dl[k], &sl[k], &z[k], &lp[k]); }
-    }
     if (n == 2 && root == GK_ROOT_LIQUID) {
         i = 0;
     } else if (n == 2 && root == GK_ROOT_STABLE) {
-        i = (lp[0] < lp[1]) ? 0 : 1; /* a tie goes to the gas */
+        i = (rr[0].ln_phi < rr[1].ln_phi) ? 0 : 1; /* a tie goes to the gas */
     }
     if (n == 2) {
         branch = (i == 0) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
     } else if (t > m->t_r) {
         branch = GK_ROOT_SUPERCRITICAL; /* a lone root above T_r, as the cubics label it */
     } else {
-        branch = (dl[i] > GK_LIT(1.0)) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
+        branch = (rr[i].delta > GK_LIT(1.0)) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
     }
-    phi = gk_exp(lp[i]);
-    vm = GK_LIT(1.0) / (dl[i] * m->rho_r);
-    if (!gk_positive(z[i]) || !gk_positive(vm) || !gk_positive(phi)) { return GK_ERR_RANGE; }
-    out->z = z[i];
+    phi = gk_exp(rr[i].ln_phi);
+    vm = GK_LIT(1.0) / (rr[i].delta * m->rho_r);
+    if (!gk_positive(rr[i].z) || !gk_positive(vm) || !gk_positive(phi)) { return GK_ERR_RANGE; }
+    out->z = rr[i].z;
     out->molar_volume.m3_per_mol = vm;
     out->fugacity_coefficient = phi;
     out->root_count = n;
-    out->z_roots[0] = (n == 2) ? z[0] : z[i];
-    out->z_roots[1] = (n == 2) ? z[1] : GK_LIT(0.0);
+    out->z_roots[0] = (n == 2) ? rr[0].z : rr[i].z;
+    out->z_roots[1] = (n == 2) ? rr[1].z : GK_LIT(0.0);
     out->z_roots[2] = GK_LIT(0.0);
     out->branch = branch;
     return GK_OK;
@@ -587,11 +585,9 @@ static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, const hz_ctx *ctx, g
 gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
                        gk_eos_result *out) {
     hz_ctx ctx;
-    gk_real dl[2] = { GK_LIT(0.0), GK_LIT(0.0) };
-    hz_sums sl[2];
+    hz_rootrec rr[2];
     int found[2] = { 0, 0 };
     bool split;
-    gk_real lim;
     gk_status st;
     if (m == NULL || out == NULL || !hz_root_valid(root)) { return GK_ERR_ARGUMENT; }
     if (!gk_positive(p)) { return GK_ERR_DOMAIN; }
@@ -601,18 +597,19 @@ gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root
     ctx.pi = p / (m->rho_r * GK_R * t);
     if (!gk_positive(ctx.pi)) { return GK_ERR_RANGE; }
     split = (t < HZ_SPLIT_TR * m->t_r);
-    lim = split ? GK_LIT(1.0) : GK__HZ_DELTA_MAX;
-    found[1] = hz_root(&ctx, 1, split, hz_gas_start(&ctx, lim), &dl[1], &sl[1]);
+    found[1] =
+        hz_root(&ctx, 1, split, hz_gas_start(&ctx, split ? GK_LIT(1.0) : GK__HZ_DELTA_MAX), &rr[1]);
     if (t < HZ_TWO_ROOT_TR * m->t_r) {
-        found[0] = hz_root(&ctx, -1, split, hz_liquid_start(t / m->t_r), &dl[0], &sl[0]);
+        found[0] = hz_root(&ctx, -1, split, hz_liquid_start(t / m->t_r), &rr[0]);
     }
     if (found[0] < 0 || found[1] < 0) { return GK_ERR_NO_SOLUTION; }
-    if (found[0] == 1 && found[1] == 1 && gk_fabs(dl[0] - dl[1]) <= HZ_SAME_ROOT * dl[1]) {
+    if (found[0] == 1 && found[1] == 1 &&
+        gk_fabs(rr[0].delta - rr[1].delta) <= HZ_SAME_ROOT * rr[1].delta) {
         found[0] = 0; /* one root, reached from both sides */
     }
-    if (found[0] == 1 && found[1] == 1 && dl[0] < dl[1]) { return GK_ERR_NO_SOLUTION; }
+    if (found[0] == 1 && found[1] == 1 && rr[0].delta < rr[1].delta) { return GK_ERR_NO_SOLUTION; }
     if (found[0] + found[1] == 0) { return GK_ERR_NO_SOLUTION; }
-    return hz_pick(m, &ctx, t, dl, sl, found, root, out);
+    return hz_pick(m, t, rr, found, root, out);
 }
 
 gk_status gk__hz_pressure(const gk__hz_model *m, gk_real rho, gk_real t, gk_real *out) {
