@@ -73,6 +73,8 @@ typedef struct quantity {
     gk_unit unit; /* base library unit */
     int gauge;
     int ref;
+    const char *uname; /* the unit's spelling and meaning ("" for none) */
+    const char *uwhat;
     const char *text; /* the argument as given */
     char where[40];   /* "argument 3" or "column p" */
 } quantity;

@@ -159,8 +159,8 @@ const word gkq_words[] = {
      "are named (any order; a unit in the name: p_bar, T_degC, or --units p=bar,T=degC);\n"
      "other columns are passed through. Delimiters: comma, semicolon or tab; a UTF-8 BOM is\n"
      "skipped. Without a header each row holds WORD's arguments as on the command line.",
-     "printf 'id,gas,p_barg,T_F\\n7,N2,150,70\\n' | gkq batch state",
-     "gkq -j --units p=psig batch contents < log.csv"},
+     "gkq batch state < rows.csv",
+     "gkq -j --units p=psig,T=F batch contents < log.csv"},
     {"help", NULL, run_help, NULL, 0, "", 0, NULL, "help [WORD]",
      "This text, or the help of one word.", "gkq help", "gkq help flow"},
     {"version", NULL, run_version, NULL, 0, "", 0, NULL, "version",

@@ -111,7 +111,7 @@ gk_status word_flow(const settings *set, args *a, record *r, detail *why) {
         if (st == GK_OK) {
             st = gk_flow_from_reference(set->model, as_fluid(&f), qin, ref_in, p, t, &qa);
         }
-        snprintf(given, sizeof given, "volume flow at %s", gkq_refs[qq->ref - 1].what);
+        snprintf(given, sizeof given, "%s: %s", qq->uname, qq->uwhat);
     } else {
         st = gk_volume_flow_from((gk_real)qq->value, qq->unit, &qa);
         snprintf(given, sizeof given, "actual volume flow");
@@ -205,7 +205,7 @@ const field fill_fields[] = {
     {"p", "fill pressure (absolute)", F_REAL, DIM_PRESSURE, "bar", ""},
     {"barometer", "barometer", F_REAL, DIM_PRESSURE, "kPa", ""},
     {"p_gauge", "fill pressure (gauge)", F_REAL, DIM_PRESSURE, "bar", ""},
-    {"p_ideal", "fill pressure, ideal gas (abs.)", F_REAL, DIM_PRESSURE, "bar", ""},
+    {"p_ideal", "fill pressure, ideal gas", F_REAL, DIM_PRESSURE, "bar", ""},
 };
 /* clang-format on */
 const size_t fill_nfields = GKQ_ARRAY_SIZE(fill_fields);
@@ -273,7 +273,7 @@ const field retemp_fields[] = {
     {"p_end", "pressure after (absolute)", F_REAL, DIM_PRESSURE, "bar", ""},
     {"p_end_gauge", "pressure after (gauge)", F_REAL, DIM_PRESSURE, "bar", ""},
     {"z_end", "compressibility Z after", F_REAL, NOD, "", ""},
-    {"p_end_ideal", "pressure after, ideal gas (abs.)", F_REAL, DIM_PRESSURE, "bar", ""},
+    {"p_end_ideal", "pressure after, ideal gas", F_REAL, DIM_PRESSURE, "bar", ""},
 };
 /* clang-format on */
 const size_t retemp_nfields = GKQ_ARRAY_SIZE(retemp_fields);

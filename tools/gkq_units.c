@@ -261,6 +261,8 @@ gk_status parse_quantity(const char *s, const char *where, quantity *q, detail *
 
     memset(&out, 0, sizeof out);
     out.text = s;
+    out.uname = "";
+    out.uwhat = "";
     copy_text(out.where, sizeof out.where, where);
     if (!looks_like_number(s)) {
         blame(why, &out, "not a number (expected a number and its unit, e.g. 2.5bar)");
@@ -314,6 +316,8 @@ gk_status parse_quantity(const char *s, const char *where, quantity *q, detail *
     out.unit = tu.base;
     out.gauge = tu.gauge || mark == 1;
     out.ref = tu.ref;
+    out.uname = tu.name;
+    out.uwhat = tu.what;
     out.value = v * tu.mult;
     *q = out;
     return GK_OK;
@@ -362,20 +366,23 @@ int list_units(FILE *out) {
           "letter case.\n",
           out);
     for (d = DIM_PRESSURE; d <= DIM_NUMBER; d = (dim)(d + 1)) {
-        int any = 0;
-        fprintf(out, "\n%s\n ", dim_name(d));
+        fprintf(out, "\n%s\n", dim_name(d));
         for (i = 0; i < (size_t)GK_UNIT_COUNT; i++) {
-            if (lib_dim((gk_unit)i) == d) {
-                size_t k;
-                int ci = 0;
-                for (k = 0; k < GKQ_ARRAY_SIZE(lib_ci); k++) {
-                    if (strcmp(lib_ci[k], gk_unit_symbol((gk_unit)i)) == 0) { ci = 1; }
-                }
-                fprintf(out, " %s%s", gk_unit_symbol((gk_unit)i), ci ? "*" : "");
-                any = 1;
+            size_t k;
+            int ci = 0;
+            gk_real si;
+            const char *sym = gk_unit_symbol((gk_unit)i);
+            if (lib_dim((gk_unit)i) != d) { continue; }
+            for (k = 0; k < GKQ_ARRAY_SIZE(lib_ci); k++) {
+                if (strcmp(lib_ci[k], sym) == 0) { ci = 1; }
+            }
+            if (d == DIM_TEMPERATURE) {
+                fprintf(out, "  %-8s%s temperature scale\n", sym, ci ? "*" : " ");
+            } else if (gk_convert((gk_real)1.0, (gk_unit)i, si_unit(d), &si) == GK_OK) {
+                fprintf(out, "  %-8s%s = %.10g %s\n", sym, ci ? "*" : " ", (double)si,
+                        gk_unit_symbol(si_unit(d)));
             }
         }
-        if (any) { fputc('\n', out); }
         for (i = 0; i < GKQ_ARRAY_SIZE(tool_units); i++) {
             const tool_unit *t = &tool_units[i];
             if (t->u.d == d) {
