@@ -333,6 +333,13 @@ static gk_status header_row(const settings *set, const word *w, const sheet *sh,
                 if ((st = row_option(&w->roles[i], t, where[na], &rs, why)) != GK_OK) { return st; }
                 break;
             }
+            if (w->roles[i].d != DIM_NONE && w->roles[i].d != DIM_NUMBER &&
+                !(isdigit((unsigned char)cells[c][0]) || cells[c][0] == '.' || cells[c][0] == '-' ||
+                  cells[c][0] == '+')) {
+                say(why, "%s '%.60s': not a number; expected a %s", where[na], cells[c],
+                    dim_name(w->roles[i].d));
+                return GK_ERR_PARSE;
+            }
             argv[na] = with_unit(&sh->col[c], cells[c], buf[na], sizeof buf[0]);
             wh[na] = where[na];
             na++;

@@ -316,13 +316,6 @@ gk_status need(args *a, dim d, size_t k, const char *what, const quantity **out,
             a->w[a->wexp], what, example_of(d));
         return GK_ERR_ARGUMENT;
     }
-    for (i = 0; i < a->nq; i++) {
-        if (!a->used_q[i] && a->q[i].d != d && a->q[i].d != DIM_NUMBER) {
-            blame(why, &a->q[i], "a %s, but a %s (the %s) was expected (e.g. %s)",
-                  dim_name(a->q[i].d), dim_name(d), what, example_of(d));
-            return GK_ERR_ARGUMENT;
-        }
-    }
     say(why, "the %s is missing (a %s, e.g. %s)", what, dim_name(d), example_of(d));
     return GK_ERR_ARGUMENT;
 }
@@ -611,11 +604,11 @@ gk_status check_gas_phase(const fluid_in *f, gk_pressure p, gk_temperature t, co
     }
     if (st != GK_OK || res.branch != GK_ROOT_LIQUID || (double)t.k >= f->tc_k) { return GK_OK; }
     say(why,
-        "%s: '%.80s' is liquid at %.6g bar, %.4g degC (%s, below its critical temperature %.4g "
+        "%s%s'%.80s' is liquid at %.6g bar, %.4g degC (%s, below its critical temperature %.4g "
         "degC): the contents of a liquefied gas do not follow from its pressure; weigh the "
         "cylinder",
-        what, f->text, (double)p.pa / 1e5, (double)t.k - 273.15, model_title(GKQ_PHASE_MODEL),
-        f->tc_k - 273.15);
+        what != NULL ? what : "", what != NULL ? ": " : "", f->text, (double)p.pa / 1e5,
+        (double)t.k - 273.15, model_title(GKQ_PHASE_MODEL), f->tc_k - 273.15);
     return GK_ERR_RANGE;
 }
 

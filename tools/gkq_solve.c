@@ -94,7 +94,7 @@ gk_status word_flow(const settings *set, args *a, record *r, detail *why) {
     if ((st = word_pressure(set, qp, 0, r, "barometer", &p, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
     if ((st = fluid_of(set, a, p, t, &f, r, why)) != GK_OK) { return st; }
-    if ((st = check_gas_phase(&f, p, t, "flow", why)) != GK_OK) { return st; }
+    if ((st = check_gas_phase(&f, p, t, NULL, why)) != GK_OK) { return st; }
     output_reference(set, qq->ref, &ref_out, what, sizeof what);
     one.m3_per_s = (gk_real)1.0;
     st = gk_flow_to_mass(set->model, as_fluid(&f), one, p, t, &w1);
@@ -187,7 +187,7 @@ static gk_status pressure_for_amount(const settings *set, const fluid_in *f, gk_
             f->text, p0 / 20.0 / 1e5, p0 * 20.0 / 1e5, 100.0 * err);
         return GK_ERR_NO_SOLUTION;
     }
-    if ((st = check_gas_phase(f, p, t, "fill", why)) != GK_OK) { return st; }
+    if ((st = check_gas_phase(f, p, t, NULL, why)) != GK_OK) { return st; }
     *out = p;
     *c_out = c;
     return GK_OK;
@@ -491,7 +491,7 @@ gk_status word_reldensity(const settings *set, args *a, record *r, detail *why) 
     if (qt != NULL && (st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
     if ((st = parse_fluid(a->w[0], a->wwhere[0], &f, why)) != GK_OK) { return st; }
     if ((st = check_water(&f, p, t, why)) != GK_OK) { return st; }
-    if ((st = check_gas_phase(&f, p, t, "relative density", why)) != GK_OK) { return st; }
+    if ((st = check_gas_phase(&f, p, t, NULL, why)) != GK_OK) { return st; }
     if ((st = gk_relative_density(set->model, as_fluid(&f), p, t, &d)) != GK_OK) {
         return explain(st, "relative density of", &f, why);
     }

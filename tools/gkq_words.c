@@ -519,7 +519,7 @@ gk_status word_contents(const settings *set, args *a, record *r, detail *why) {
     if ((st = word_pressure(set, qp, 0, r, "barometer", &p, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
     if ((st = word_fluid(set, a, p, t, &f, r, why)) != GK_OK) { return st; }
-    if ((st = check_gas_phase(&f, p, t, "contents", why)) != GK_OK) { return st; }
+    if ((st = check_gas_phase(&f, p, t, NULL, why)) != GK_OK) { return st; }
     st = gk_vessel_contents(set->model, as_fluid(&f), v, p, t, set->ref, &c);
     if (st != GK_OK) { return explain(st, "contents of", &f, why); }
     st = gk_vessel_contents(GK_EOS_IDEAL, as_fluid(&f), v, p, t, set->ref, &ci);

@@ -473,7 +473,7 @@ case_batch_header() {
     head -n 1 "$TMP/out" | grep -q '^line,status,message,time,note,fluid,.*,p_Pa,T_K,' || fail "header: $(head -n 1 "$TMP/out")"
     [ "$(wc -l <"$TMP/out")" -eq 3 ] || fail "header batch: $(wc -l <"$TMP/out") lines"
     grep -q '^2,ok,,2026-12-04T08:00,"cyl ""A""",N2,' "$TMP/out" || fail "pass-through: $(sed -n 2p "$TMP/out")"
-    grep -q "^3,argument,\"column p_barg 'abc'" "$TMP/out" || fail "bad cell not named: $(sed -n 3p "$TMP/out")"
+    grep -q "^3,parse,\"column p_barg 'abc': not a number; expected a pressure" "$TMP/out" || fail "bad cell not named: $(sed -n 3p "$TMP/out")"
     # 1 bar gauge over 101.325 kPa, 0 degC: ideal molar volume R T / p (CODATA 2018 R)
     vm=$(awk -F, 'NR == 1 { for (i = 1; i <= NF; i++) if ($i == "molar_volume_m3_per_mol") c = i } $1 == "2" { print $c }' "$TMP/out")
     near "header row Vm" "$vm" "$(awk -v R=$R 'BEGIN{printf "%.12g", R*273.15/201325}')" "$REL"
