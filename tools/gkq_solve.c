@@ -171,6 +171,13 @@ static gk_status pressure_for_amount(const settings *set, const fluid_in *f, gk_
     }
     p.pa = (gk_real)sqrt(lo * hi);
     st = gk_vessel_contents(set->model, as_fluid(f), v, p, t, set->ref, &c);
+    if ((st == GK_ERR_RANGE ||
+         (st == GK_OK && refused && (double)c.amount.mol < n_target * 0.999)) &&
+        (double)t.k >= f->tc_k) {
+        say(why, "'%.80s': no pressure within the model's range holds that much at %.4g degC",
+            f->text, (double)t.k - 273.15);
+        return GK_ERR_RANGE;
+    }
     if (st == GK_ERR_RANGE || (st == GK_OK && refused && (double)c.amount.mol < n_target * 0.999)) {
         say(why,
             "'%.80s' cannot hold that much as a gas at %.4g degC: it liquefies first (a "
