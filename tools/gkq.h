@@ -176,8 +176,8 @@ typedef struct args {
 } args;
 
 gk_status collect_args(int argc, char **argv, const char *const *where, args *a, detail *why);
-const quantity *take(args *a, dim d, size_t k);
-gk_status need(args *a, dim d, size_t k, const char *what, const quantity **out, detail *why);
+const quantity *take(args *a, dim d);
+gk_status need(args *a, dim d, const char *what, const quantity **out, detail *why);
 gk_status need_word(const args *a, size_t k, const char *what, detail *why);
 gk_status all_used(const args *a, size_t words_expected, const char *wname, detail *why);
 gk_status to_pressure(const quantity *q, gk_pressure baro, gk_pressure *out, detail *why);
@@ -242,6 +242,7 @@ void rec_print(FILE *out, const settings *set, const record *r, const char *wnam
 void print_json_string(FILE *out, const char *s);
 void print_csv_text(FILE *out, const char *s);
 int output_failed(FILE *out);
+int finish_output(FILE *out);
 
 /* ------------------------------------------------------------------ words */
 

@@ -260,16 +260,13 @@ gk_status collect_args(int argc, char **argv, const char *const *where, args *a,
     return GK_OK;
 }
 
-/* The k-th (0-based) quantity of dimension d, or NULL; marks it used. */
-const quantity *take(args *a, dim d, size_t k) {
-    size_t i, seen = 0;
+/* The next quantity of dimension d not taken yet (in the order given), or NULL; marks it taken. */
+const quantity *take(args *a, dim d) {
+    size_t i;
     for (i = 0; i < a->nq; i++) {
         if (a->q[i].d == d && !a->used_q[i]) {
-            if (seen == k) {
-                a->used_q[i] = 1;
-                return &a->q[i];
-            }
-            seen++;
+            a->used_q[i] = 1;
+            return &a->q[i];
         }
     }
     return NULL;
@@ -296,10 +293,9 @@ static const char *example_of(dim d) {
     }
 }
 
-gk_status need(args *a, dim d, size_t k, const char *what, const quantity **out, detail *why) {
-    const quantity *q = take(a, d, 0);
+gk_status need(args *a, dim d, const char *what, const quantity **out, detail *why) {
+    const quantity *q = take(a, d);
     size_t i;
-    (void)k;
     if (q != NULL) {
         *out = q;
         return GK_OK;

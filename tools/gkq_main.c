@@ -268,7 +268,7 @@ int word_help(FILE *out, const word *w) {
         for (ro = w->roles; ro->name != NULL; ro++) { fprintf(out, " %s", ro->name); }
         fputc('\n', out);
     }
-    return output_failed(out) ? 1 : 0;
+    return finish_output(out);
 }
 
 static int run_help(const settings *set, int argc, char **argv) {
@@ -277,7 +277,7 @@ static int run_help(const settings *set, int argc, char **argv) {
     (void)set;
     if (argc == 0) {
         usage(stdout);
-        return output_failed(stdout) ? 1 : 0;
+        return finish_output(stdout);
     }
     w = find_word(argv[0]);
     if (w == NULL) {
@@ -299,7 +299,7 @@ static int run_version(const settings *set, int argc, char **argv) {
     /* gkq is built with the library it ships with: one version for both */
     printf("gkq %s (gaskit %s, %s build)\n", gk_version(), gk_version(),
            (gk_build_flags() & GK_BUILD_FLOAT) != 0u ? "float" : "double");
-    return output_failed(stdout) ? 1 : 0;
+    return finish_output(stdout);
 }
 
 static int run_batch_word(const settings *set, int argc, char **argv) {
@@ -322,11 +322,6 @@ static int run_batch_word(const settings *set, int argc, char **argv) {
 }
 
 /* ------------------------------------------------------------------ one word */
-
-static int write_failed(void) {
-    fprintf(stderr, "gkq: cannot write the output: %s\n", strerror(errno != 0 ? errno : EIO));
-    return 1;
-}
 
 int run_word(const settings *set, const word *w, int argc, char **argv) {
     args a;
@@ -355,7 +350,7 @@ int run_word(const settings *set, const word *w, int argc, char **argv) {
         }
         rec_print(stdout, set, &r, w->name);
     }
-    return output_failed(stdout) ? write_failed() : 0;
+    return finish_output(stdout);
 }
 
 /* ------------------------------------------------------------------ options */
@@ -589,7 +584,7 @@ int main(int argc, char **argv) {
     if (nrest == 0) {
         if (help) {
             usage(stdout);
-            return output_failed(stdout) ? write_failed() : 0;
+            return finish_output(stdout);
         }
         usage(stderr);
         return 2;

@@ -3,6 +3,7 @@
  * lines and CSV. Machine keys carry their unit ("p_Pa", "T_K", "p_bar" under -u bar); fields
  * without a dimension carry their fixed unit ("deviation_pct") or are plain numbers ("z").
  */
+#include <errno.h>
 #include <string.h>
 
 #include "gkq.h"
@@ -209,3 +210,10 @@ void rec_print(FILE *out, const settings *set, const record *r, const char *wnam
 
 /* Flushes and reports whether any write to out failed (a full disk, a closed pipe). */
 int output_failed(FILE *out) { return fflush(out) != 0 || ferror(out) != 0; }
+
+/* 0 when everything written to out arrived, else 1 with a message on stderr. */
+int finish_output(FILE *out) {
+    if (!output_failed(out)) { return 0; }
+    fprintf(stderr, "gkq: cannot write the output: %s\n", strerror(errno != 0 ? errno : EIO));
+    return 1;
+}

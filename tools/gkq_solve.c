@@ -82,14 +82,13 @@ gk_status word_flow(const settings *set, args *a, record *r, detail *why) {
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
-    qq = take(a, DIM_VOLUME_FLOW, 0);
-    if (qq == NULL) { qq = take(a, DIM_MASS_FLOW, 0); }
+    qq = take(a, DIM_VOLUME_FLOW);
+    if (qq == NULL) { qq = take(a, DIM_MASS_FLOW); }
     if (qq == NULL) {
-        return need(a, DIM_VOLUME_FLOW, 0, "flow (actual, at a reference, or a mass flow)", &qq,
-                    why);
+        return need(a, DIM_VOLUME_FLOW, "flow (actual, at a reference, or a mass flow)", &qq, why);
     }
-    if ((st = need(a, DIM_PRESSURE, 0, "line pressure", &qp, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_TEMPERATURE, 0, "line temperature", &qt, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_PRESSURE, "line pressure", &qp, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, "line temperature", &qt, why)) != GK_OK) { return st; }
     if ((st = all_used(a, 1, "flow", why)) != GK_OK) { return st; }
     if ((st = word_pressure(set, qp, 0, r, "barometer", &p, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
@@ -229,11 +228,11 @@ gk_status word_fill(const settings *set, args *a, record *r, detail *why) {
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_VOLUME, 0, "vessel volume", &qv, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt, why)) != GK_OK) { return st; }
-    qn = take(a, DIM_AMOUNT, 0);
-    if (qn == NULL) { qn = take(a, DIM_MASS, 0); }
-    if (qn == NULL) { return need(a, DIM_MASS, 0, "target amount or mass", &qn, why); }
+    if ((st = need(a, DIM_VOLUME, "vessel volume", &qv, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, "temperature", &qt, why)) != GK_OK) { return st; }
+    qn = take(a, DIM_AMOUNT);
+    if (qn == NULL) { qn = take(a, DIM_MASS); }
+    if (qn == NULL) { return need(a, DIM_MASS, "target amount or mass", &qn, why); }
     if ((st = all_used(a, 1, "fill", why)) != GK_OK) { return st; }
     if ((st = to_volume(qv, &v, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
@@ -296,9 +295,9 @@ gk_status word_retemp(const settings *set, args *a, record *r, detail *why) {
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_PRESSURE, 0, "pressure before", &qp, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature before", &qt1, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature after", &qt2, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_PRESSURE, "pressure before", &qp, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, "temperature before", &qt1, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, "temperature after", &qt2, why)) != GK_OK) { return st; }
     if ((st = all_used(a, 1, "retemp", why)) != GK_OK) { return st; }
     if ((st = word_pressure(set, qp, 0, r, "barometer", &p1, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt1, &t1, why)) != GK_OK) { return st; }
@@ -350,9 +349,9 @@ gk_status word_rh(const settings *set, args *a, record *r, detail *why) {
     gk_status st;
 
     a->wexp = 0;
-    if ((st = need(a, DIM_TEMPERATURE, 0, "gas temperature", &qt, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_TEMPERATURE, 0, "dew point", &qd, why)) != GK_OK) { return st; }
-    qp = take(a, DIM_PRESSURE, 0);
+    if ((st = need(a, DIM_TEMPERATURE, "gas temperature", &qt, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, "dew point", &qd, why)) != GK_OK) { return st; }
+    qp = take(a, DIM_PRESSURE);
     if ((st = all_used(a, 0, "rh", why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qd, &td, why)) != GK_OK) { return st; }
@@ -417,10 +416,10 @@ gk_status word_effusion(const settings *set, args *a, record *r, detail *why) {
     (void)set;
     a->wexp = 1;
     if ((st = need_word(a, 0, "reference gas", why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_TIME, 0, "effusion time of the unknown gas", &qu, why)) != GK_OK) {
+    if ((st = need(a, DIM_TIME, "effusion time of the unknown gas", &qu, why)) != GK_OK) {
         return st;
     }
-    if ((st = need(a, DIM_TIME, 0, "effusion time of the reference gas", &qr, why)) != GK_OK) {
+    if ((st = need(a, DIM_TIME, "effusion time of the reference gas", &qr, why)) != GK_OK) {
         return st;
     }
     if ((st = all_used(a, 1, "effusion", why)) != GK_OK) { return st; }
@@ -487,8 +486,8 @@ gk_status word_reldensity(const settings *set, args *a, record *r, detail *why) 
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
-    qp = take(a, DIM_PRESSURE, 0);
-    qt = take(a, DIM_TEMPERATURE, 0);
+    qp = take(a, DIM_PRESSURE);
+    qt = take(a, DIM_TEMPERATURE);
     if ((st = all_used(a, 1, "reldensity", why)) != GK_OK) { return st; }
     p = set->ref.p; /* without a state: at the reference condition (-R) */
     t = set->ref.t;

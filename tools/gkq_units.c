@@ -391,5 +391,5 @@ int list_units(FILE *out) {
         }
     }
     fputs("  (none)    a bare number: a fraction (0.45) or a count\n", out);
-    return output_failed(out) ? 1 : 0;
+    return finish_output(out);
 }

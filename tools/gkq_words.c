@@ -123,8 +123,8 @@ gk_status word_state(const settings *set, args *a, record *r, detail *why) {
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_PRESSURE, 0, "pressure", &qp, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_PRESSURE, "pressure", &qp, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, "temperature", &qt, why)) != GK_OK) { return st; }
     if ((st = all_used(a, 1, "state", why)) != GK_OK) { return st; }
     if ((st = word_pressure(set, qp, 0, r, "barometer", &p, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
@@ -289,8 +289,8 @@ gk_status word_speeds(const settings *set, args *a, record *r, detail *why) {
 
     a->wexp = 2;
     if ((st = need_word(a, 0, "fluid", why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt, why)) != GK_OK) { return st; }
-    qp = take(a, DIM_PRESSURE, 0);
+    if ((st = need(a, DIM_TEMPERATURE, "temperature", &qt, why)) != GK_OK) { return st; }
+    qp = take(a, DIM_PRESSURE);
     if ((st = all_used(a, 2, "speeds", why)) != GK_OK) { return st; }
     if ((st = parse_fluid(a->w[0], a->wwhere[0], &f, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
@@ -341,6 +341,7 @@ gk_status word_speeds(const settings *set, args *a, record *r, detail *why) {
 
 /* clang-format off */
 const field water_fields[] = {
+    {"barometer", "barometer (for gauge readings)", F_REAL, DIM_PRESSURE, "kPa", ""},
     {"T", "saturation temperature", F_REAL, DIM_TEMPERATURE, "degC", ""},
     {"p_sat", "vapour pressure", F_REAL, DIM_PRESSURE, "kPa", ""},
     {"phase", "over", F_TEXT, NOD, "", ""},
@@ -369,7 +370,7 @@ gk_status word_water(const settings *set, args *a, record *r, detail *why) {
         if ((st = to_temperature(q, &t, why)) != GK_OK) { return st; }
         st = gk_water_vapour_pressure(t, &p);
     } else if (q->d == DIM_PRESSURE) {
-        if ((st = to_pressure(q, set->baro, &p, why)) != GK_OK) { return st; }
+        if ((st = word_pressure(set, q, 0, r, "barometer", &p, why)) != GK_OK) { return st; }
         st = gk_water_saturation_temperature(p, &t);
     } else {
         blame(why, q, "a %s, but a temperature or a pressure was expected", dim_name(q->d));
@@ -416,9 +417,9 @@ gk_status word_dew(const settings *set, args *a, record *r, detail *why) {
     double rh = 0.0;
 
     a->wexp = 0;
-    if ((st = need(a, DIM_PRESSURE, 0, "pressure", &qp, why)) != GK_OK) { return st; }
-    qt = take(a, DIM_TEMPERATURE, 0);
-    qrh = take(a, DIM_NUMBER, 0);
+    if ((st = need(a, DIM_PRESSURE, "pressure", &qp, why)) != GK_OK) { return st; }
+    qt = take(a, DIM_TEMPERATURE);
+    qrh = take(a, DIM_NUMBER);
     if ((st = all_used(a, 0, "dew", why)) != GK_OK) { return st; }
     if ((st = word_pressure(set, qp, 0, r, "barometer", &p, why)) != GK_OK) { return st; }
     if (qt == NULL && qrh == NULL) {
@@ -511,9 +512,9 @@ gk_status word_contents(const settings *set, args *a, record *r, detail *why) {
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_VOLUME, 0, "vessel volume", &qv, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_PRESSURE, 0, "pressure", &qp, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_VOLUME, "vessel volume", &qv, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_PRESSURE, "pressure", &qp, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, "temperature", &qt, why)) != GK_OK) { return st; }
     if ((st = all_used(a, 1, "contents", why)) != GK_OK) { return st; }
     if ((st = to_volume(qv, &v, why)) != GK_OK) { return st; }
     if ((st = word_pressure(set, qp, 0, r, "barometer", &p, why)) != GK_OK) { return st; }
@@ -577,13 +578,13 @@ gk_status word_leak(const settings *set, args *a, record *r, detail *why) {
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_VOLUME, 0, "test volume", &qv, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_PRESSURE, 0, "start pressure", &qp1, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_PRESSURE, 0, "end pressure", &qp2, why)) != GK_OK) { return st; }
-    if ((st = need(a, DIM_TEMPERATURE, 0, "temperature", &qt1, why)) != GK_OK) { return st; }
-    qt2 = take(a, DIM_TEMPERATURE, 0);
+    if ((st = need(a, DIM_VOLUME, "test volume", &qv, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_PRESSURE, "start pressure", &qp1, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_PRESSURE, "end pressure", &qp2, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TEMPERATURE, "temperature", &qt1, why)) != GK_OK) { return st; }
+    qt2 = take(a, DIM_TEMPERATURE);
     if (qt2 == NULL) { qt2 = qt1; /* one temperature: the same at start and end */ }
-    if ((st = need(a, DIM_TIME, 0, "elapsed time", &qd, why)) != GK_OK) { return st; }
+    if ((st = need(a, DIM_TIME, "elapsed time", &qd, why)) != GK_OK) { return st; }
     if ((st = all_used(a, 1, "leak", why)) != GK_OK) { return st; }
     if ((st = to_volume(qv, &v, why)) != GK_OK) { return st; }
     if ((st = word_pressure(set, qp1, 0, r, "barometer", &p1, why)) != GK_OK) { return st; }
@@ -667,7 +668,7 @@ int word_gases(const settings *set, int argc, char **argv) {
                 printf("%6s\n", "-");
             }
         }
-        return output_failed(stdout) ? 1 : 0;
+        return finish_output(stdout);
     }
     for (i = 0; i < n; i++) {
         const gk_gas *g = gk_gas_at(i);
@@ -686,7 +687,7 @@ int word_gases(const settings *set, int argc, char **argv) {
         rec_real(&r, "vdw_b", (double)g->vdw_b);
         rec_print(stdout, set, &r, "gases");
     }
-    return output_failed(stdout) ? 1 : 0;
+    return finish_output(stdout);
 }
 
 int word_units(const settings *set, int argc, char **argv) {
