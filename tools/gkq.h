@@ -29,7 +29,8 @@
 #define GKQ_PHASE_MODEL GK_EOS_PENG_ROBINSON
 
 #define GKQ_LINE_MAX 1024 /* longest batch line (bytes, without the newline) */
-#define GKQ_CELLS_MAX 16  /* most cells in a batch row / arguments of a word */
+#define GKQ_CELLS_MAX 16  /* most arguments of a word (a batch row without a header) */
+#define GKQ_COLS_MAX 64   /* most columns of a batch file with a header row */
 #define GKQ_TEXT_MAX 320  /* longest message or fluid text kept */
 #define GKQ_FIELDS_MAX 28 /* most fields in one output record */
 #define GKQ_SHOW_MAX 16   /* most display units */

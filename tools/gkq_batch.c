@@ -29,7 +29,7 @@ typedef struct sheet {
     char delim;
     int header;
     size_t ncols;
-    column col[GKQ_CELLS_MAX];
+    column col[GKQ_COLS_MAX];
 } sheet;
 
 /* Splits one line in place into at most max cells at delim. Quotes ("...", "" for a quote) let
@@ -358,6 +358,11 @@ static gk_status plain_row(const settings *set, const word *w, char **cells, int
     args a;
     int i;
     gk_status st;
+    if (n > GKQ_CELLS_MAX) {
+        say(why, "%d cells: without a header row a row holds at most %d arguments", n,
+            GKQ_CELLS_MAX);
+        return GK_ERR_ARGUMENT;
+    }
     for (i = 0; i < n; i++) {
         snprintf(where[i], sizeof where[0], "column %d", i + 1);
         wh[i] = where[i];
@@ -380,7 +385,7 @@ int run_batch(const settings *set_in, const word *w) {
     memset(&sh, 0, sizeof sh);
     sh.delim = ',';
     for (;;) {
-        char *cells[GKQ_CELLS_MAX];
+        char *cells[GKQ_COLS_MAX];
         int n, too_long, has_nul;
         detail why;
         gk_status st;
@@ -410,7 +415,7 @@ int run_batch(const settings *set_in, const word *w) {
         for (k = 0; text[k] == ' ' || text[k] == '\t'; k++) {}
         if (text[k] == '\0' || text[k] == '#') { continue; /* blank or comment */ }
         if (first) { sh.delim = pick_delimiter(text); }
-        n = split_cells(text, sh.delim, cells, GKQ_CELLS_MAX);
+        n = split_cells(text, sh.delim, cells, GKQ_COLS_MAX);
         if (first) {
             first = 0;
             if (n > 0 && read_header(w, set, cells, n, &sh)) {
@@ -422,7 +427,7 @@ int run_batch(const settings *set_in, const word *w) {
         rows++;
         if (n < 0) {
             st = GK_ERR_PARSE;
-            say(&why, "malformed quotes or more than %d cells", GKQ_CELLS_MAX);
+            say(&why, "malformed quotes or more than %d cells", GKQ_COLS_MAX);
             n = 0;
         } else if (sh.header) {
             st = header_row(set, w, &sh, cells, n, &r, &why);

@@ -487,6 +487,11 @@ case_batch_header() {
         || fail "batch -j"
     printf 'gas,p,T\nN2,2bar,20C\n' | "$GKQ" -k batch state | grep -q '^line=2 status=ok message= fluid=N2 .*p_Pa=200000' \
         || fail "batch -k"
+    # a logger's file with many columns: 40 pass-through columns survive
+    awk 'BEGIN { h = "gas,p,T"; d = "N2,2bar,20C"; for (i = 0; i < 40; i++) { h = h ",x" i; d = d "," i }; print h; print d }' \
+        | "$GKQ" batch state >"$TMP/out" || fail "40 extra columns: exit"
+    awk -F, 'NR == 2 && $2 == "ok" && $4 == "0" && $43 == "39" { ok = 1 } END { exit !ok }' "$TMP/out" \
+        || fail "40 extra columns not passed through: $(sed -n 2p "$TMP/out" | cut -c1-80)"
     # a header alone is no failure; a per-row barometer and humidity come from their columns
     printf 'gas,p,T\n' | "$GKQ" batch state >"$TMP/out" || fail "header-only batch exit"
     [ "$(wc -l <"$TMP/out")" -eq 1 ] || fail "header-only batch output"
