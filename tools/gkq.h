@@ -142,6 +142,7 @@ typedef struct settings {
 const char *model_name(gk_eos e);
 const char *model_title(gk_eos e);
 int parse_model(const char *s, gk_eos *out);
+void model_list(char *buf, size_t cap, const char *sep);
 int parse_root(const char *s, gk_root *out);
 gk_status parse_reference(const char *s, const settings *set, gk_reference *out, char *what,
                           size_t whatcap, detail *why);

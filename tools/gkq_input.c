@@ -122,6 +122,18 @@ const char *model_title(gk_eos e) {
     return "?";
 }
 
+/* The short names of the models, separated by sep. */
+void model_list(char *buf, size_t cap, const char *sep) {
+    size_t i, n = 0;
+    if (cap == 0) { return; }
+    buf[0] = '\0';
+    for (i = 0; i < GKQ_ARRAY_SIZE(models) && n < cap; i++) {
+        int k = snprintf(buf + n, cap - n, "%s%s", i > 0 ? sep : "", models[i].name);
+        if (k < 0) { break; }
+        n += (size_t)k;
+    }
+}
+
 /* A model by its short name or its title, in any letter case ("PR", "Peng-Robinson"). */
 int parse_model(const char *s, gk_eos *out) {
     size_t i;

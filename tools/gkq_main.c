@@ -224,6 +224,7 @@ static void word_suggest(const char *text, char *buf, size_t cap) {
 
 void usage(FILE *out) {
     size_t i;
+    char models[160];
     fputs("gkq - gas-property queries on gaskit\n\nusage: gkq [options] WORD ARGUMENTS...\n\n"
           "words:\n",
           out);
@@ -238,9 +239,11 @@ void usage(FILE *out) {
           "  quantities of different kinds may come in any order; two of one kind keep theirs\n"
           "FLUID: a gas by formula or name (N2, \"carbon dioxide\") or a mixture\n"
           "  \"CO2=5%;N2=balance\" (';' or ',' between components)\n"
-          "\noptions:\n"
-          "  -m, --model M        ideal | vdw | rk | srk | pr    (default pr)\n"
-          "  -r, --root R         stable | gas | liquid          (default stable)\n"
+          "\noptions:\n",
+          out);
+    model_list(models, sizeof models, " | ");
+    fprintf(out, "  -m, --model M        %s (default %s)\n", models, model_name(GKQ_DEFAULT_MODEL));
+    fputs("  -r, --root R         stable | gas | liquid          (default stable)\n"
           "  -b, --barometer P    barometer for gauge readings (default 101.325kPa)\n"
           "  --barometer-end P    barometer at the end of a leak test (default: -b)\n"
           "  -R, --ref REF        reference condition: 0C 0C-100kPa 15C 20C 25C 60F or P@T\n"
@@ -523,8 +526,11 @@ static int parse_options(int argc, char **argv, settings *set, char **rest, int 
             return run_version(set, 0, NULL);
         } else if ((v = option_value(argc, argv, &i, "-m", "--model", &missing)) != NULL) {
             if (!parse_model(v, &set->model)) {
-                return fail_usage("-m '%.60s': unknown model; expected ideal, vdw, rk, srk or pr",
-                                  v);
+                char models[160];
+                model_list(models, sizeof models, ", ");
+                fprintf(stderr, "gkq: -m '%.60s': unknown model; expected one of %s\n", v, models);
+                fputs("gkq: try 'gkq help'\n", stderr);
+                return 2;
             }
         } else if ((v = option_value(argc, argv, &i, "-r", "--root", &missing)) != NULL) {
             if (!parse_root(v, &set->root)) {

@@ -372,7 +372,7 @@ case_messages() {
     # options: models in any case, and the expected values named
     "$GKQ" -m PR state N2 1bar 20degC >/dev/null 2>&1 || fail "-m PR refused"
     "$GKQ" -m Peng-Robinson state N2 1bar 20degC >/dev/null 2>&1 || fail "-m Peng-Robinson refused"
-    must_fail 2 "'magic': unknown model; expected ideal, vdw, rk, srk or pr" -m magic state N2 1bar 20C
+    must_fail 2 "'magic': unknown model; expected one of ideal, vdw, rk, srk, pr" -m magic state N2 1bar 20C
     must_fail 2 "'foo' is not known: expected 0C" -R foo state N2 1bar 20C
     must_fail 2 "'SCF' is not a unit.*did you mean 'SCFM'" -u SCF state N2 1bar 20C
     must_fail 1 "unknown unit 'kpsi'.*gkq units" convert 5kpsi Pa
