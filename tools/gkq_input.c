@@ -409,7 +409,7 @@ gk_status to_volume(const quantity *q, gk_volume *out, detail *why) {
 /* A fraction such as a relative humidity: "45%" or "0.45". A bare number above 1 is refused
    with the percentage it would mean, since "50" for 50 % is the usual slip. */
 gk_status fraction_of(const quantity *q, const char *what, double *out, detail *why) {
-    int percent = strchr(q->text, '%') != NULL;
+    int percent = strchr(q->text, '%') != NULL || strcmp(q->uname, "pct") == 0;
     if (q->d != DIM_NUMBER) {
         blame(why, q, "a %s, but the %s was expected (e.g. 45%% or 0.45)", dim_name(q->d), what);
         return GK_ERR_ARGUMENT;

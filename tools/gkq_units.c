@@ -78,6 +78,7 @@ static const tool_unit tool_units[] = {
     {{"min", DIM_TIME, NO_UNIT, 60.0, 0, 0, "minute"}, 0},
     {{"h", DIM_TIME, NO_UNIT, 3600.0, 0, 0, "hour"}, 0},
     {{"%", DIM_NUMBER, NO_UNIT, 0.01, 0, 0, "percent (relative humidity, fractions)"}, 0},
+    {{"pct", DIM_NUMBER, NO_UNIT, 0.01, 0, 0, "percent, as in the keys gkq writes (rh_pct)"}, 0},
 };
 /* clang-format on */
 

@@ -487,6 +487,14 @@ case_batch_header() {
         || fail "batch -j"
     printf 'gas,p,T\nN2,2bar,20C\n' | "$GKQ" -k batch state | grep -q '^line=2 status=ok message= fluid=N2 .*p_Pa=200000' \
         || fail "batch -k"
+    # the output of a batch reads back as input: its keys name the columns with their units
+    printf 'gas,p_barg,T_F,rh\nN2,1,68,40%%\n' | "$GKQ" -m ideal batch state >"$TMP/once" || fail "first pass"
+    "$GKQ" -m ideal batch state <"$TMP/once" >"$TMP/twice" || fail "second pass: $(cat "$TMP/twice")"
+    for key in p_Pa T_K density_kg_per_m3 x_water; do
+        a=$(awk -F, -v k=$key 'NR == 1 { for (i = 1; i <= NF; i++) if ($i == k) c = i } NR == 2 { print $c }' "$TMP/once")
+        b=$(awk -F, -v k=$key 'NR == 1 { for (i = 1; i <= NF; i++) if ($i == k) c = i } NR == 2 { print $c }' "$TMP/twice")
+        near "round trip $key" "$b" "$a" "$REL"
+    done
     # a logger's file with many columns: 40 pass-through columns survive
     awk 'BEGIN { h = "gas,p,T"; d = "N2,2bar,20C"; for (i = 0; i < 40; i++) { h = h ",x" i; d = d "," i }; print h; print d }' \
         | "$GKQ" batch state >"$TMP/out" || fail "40 extra columns: exit"
