@@ -323,7 +323,7 @@ gk_status word_pressure(const settings *set, const quantity *q, int at_end, reco
                         const char *key, gk_pressure *out, detail *why);
 void rec_model(record *r, const settings *set);
 void rec_reference(record *r, const settings *set);
-const char *branch_text(const gk_eos_result *res, const fluid_in *f, gk_temperature t);
+const char *branch_text(const gk_eos_result *res);
 
 #define GKQ_ARRAY_SIZE(a) (sizeof(a) / sizeof((a)[0]))
 

@@ -25,28 +25,29 @@ void rec_model(record *r, const settings *set) { rec_text(r, "model", model_name
 
 void rec_reference(record *r, const settings *set) { rec_text(r, "reference", set->ref_what); }
 
-/* The branch of a solved state: a lone root above the critical temperature (of a mixture, the
-   pseudo-critical one) is supercritical, neither gas nor liquid. */
+/* The branch of a solved state, as the library labels it: a lone root above the model's
+   critical temperature (of a mixture, the pseudo-critical one) is GK_ROOT_SUPERCRITICAL, neither
+   gas nor liquid. */
 typedef enum branch_kind {
     BRANCH_GAS,
     BRANCH_LIQUID,
     BRANCH_SUPERCRITICAL
 } branch_kind;
 
-static branch_kind branch_of(const gk_eos_result *res, const fluid_in *f, gk_temperature t) {
-    if (res->root_count == 1 && (double)t.k > f->tc_k) { return BRANCH_SUPERCRITICAL; }
+static branch_kind branch_of(const gk_eos_result *res) {
+    if (res->branch == GK_ROOT_SUPERCRITICAL) { return BRANCH_SUPERCRITICAL; }
     return res->branch == GK_ROOT_LIQUID ? BRANCH_LIQUID : BRANCH_GAS;
 }
 
-const char *branch_text(const gk_eos_result *res, const fluid_in *f, gk_temperature t) {
+const char *branch_text(const gk_eos_result *res) {
     static const char *const names[] = { "gas", "liquid", "supercritical" };
-    return names[branch_of(res, f, t)];
+    return names[branch_of(res)];
 }
 
 /* The asked branch (-r gas / -r liquid) must exist: with a lone root the model has only one. */
 static gk_status check_branch(const settings *set, const gk_eos_result *res, const fluid_in *f,
-                              gk_temperature t, detail *why) {
-    branch_kind b = branch_of(res, f, t);
+                              detail *why) {
+    branch_kind b = branch_of(res);
     const char *asked = set->root == GK_ROOT_LIQUID ? "liquid" : "gas";
     if (set->root == GK_ROOT_STABLE || res->root_count != 1) { return GK_OK; }
     if (b == BRANCH_SUPERCRITICAL) {
@@ -59,7 +60,7 @@ static gk_status check_branch(const settings *set, const gk_eos_result *res, con
     }
     if ((b == BRANCH_LIQUID) != (set->root == GK_ROOT_LIQUID)) {
         say(why, "-r %s: '%.80s' has no %s root at this state; the model has one root here, %s",
-            asked, f->text, asked, branch_text(res, f, t));
+            asked, f->text, asked, branch_text(res));
         return GK_ERR_NO_SOLUTION;
     }
     return GK_OK;
@@ -139,7 +140,7 @@ gk_status word_state(const settings *set, args *a, record *r, detail *why) {
         st = gk_eos_solve(set->model, f.gas, p, t, set->root, &res);
     }
     if (st != GK_OK) { return explain(st, "state of", &f, why); }
-    if ((st = check_branch(set, &res, &f, t, why)) != GK_OK) { return st; }
+    if ((st = check_branch(set, &res, &f, why)) != GK_OK) { return st; }
     if ((st = gk_ideal_density(p, t, f.m, &rho_i)) != GK_OK) {
         return explain(st, "ideal density of", &f, why);
     }
@@ -159,7 +160,7 @@ gk_status word_state(const settings *set, args *a, record *r, detail *why) {
     rec_real(r, "density", rho);
     rec_real(r, "phi", (double)res.fugacity_coefficient);
     rec_real(r, "fugacity", (double)res.fugacity_coefficient * (double)p.pa);
-    rec_text(r, "branch", branch_text(&res, &f, t));
+    rec_text(r, "branch", branch_text(&res));
     rec_real(r, "root_count", (double)res.root_count);
     for (i = 0; i < res.root_count && i < 3; i++) {
         static const char *const keys[3] = { "z_root_1", "z_root_2", "z_root_3" };
