@@ -129,9 +129,10 @@ static int match_role(const char *aliases, const char *name, tunit *unit) {
             alias[n] = '\0';
             if (same_ci(name, alias)) { return 1; }
             if (strlen(name) > n + 1 && name[n] == '_' && strlen(name + n + 1) < sizeof rest) {
-                for (k = 0;
-                     k < n && tolower((unsigned char)name[k]) == tolower((unsigned char)alias[k]);
-                     k++) {}
+                char head[40];
+                memcpy(head, name, n);
+                head[n] = '\0';
+                k = same_ci(head, alias) ? n : 0;
                 if (k == n) {
                     /* "L_per_min" -> "L/min" */
                     const char *s = name + n + 1;

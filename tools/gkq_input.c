@@ -627,8 +627,6 @@ gk_status explain(gk_status st, const char *what, const fluid_in *f, detail *why
             "%s '%.80s': outside what the model covers (liquid at the state or at the "
             "reference condition, or a result too large)",
             what, f->text);
-    } else if (st == GK_ERR_NO_SOLUTION) {
-        say(why, "%s '%.80s': %s", what, f->text, plain_status(st));
     } else if (st != GK_OK) {
         say(why, "%s '%.80s': %s", what, f->text, plain_status(st));
     }

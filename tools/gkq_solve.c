@@ -307,6 +307,8 @@ gk_status word_retemp(const settings *set, args *a, record *r, detail *why) {
     if ((st = check_gas_phase(&f, p1, t1, "before", why)) != GK_OK) { return st; }
     /* a closed vessel keeps its amount per volume: 1 m3 stands for any volume */
     v.m3 = (gk_real)1.0;
+    p2.pa = (gk_real)0.0;
+    memset(&c2, 0, sizeof c2);
     st = gk_vessel_contents(set->model, as_fluid(&f), v, p1, t1, set->ref, &c1);
     if (st != GK_OK) { return explain(st, "state before of", &f, why); }
     st = pressure_for_amount(set, &f, v, t2, (double)c1.amount.mol, &p2, &c2, why);
