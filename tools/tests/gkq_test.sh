@@ -638,8 +638,21 @@ case_leak_baro() {
     must_fail 2 "absolute pressure" --barometer-end 2barg leak N2 2L 3barg 2.99barg 20degC 1h
 }
 
+case_demo_units() {
+    # the demo's leak figure in g/h is typed back into gkq, and gkq's own leak of the same
+    # (invented) readings agrees with it to the 3 digits the demo prints
+    [ -n "${GKQ_DEMO:-}" ] || { echo "no demo built: skipped"; return; }
+    line=$("$GKQ_DEMO" | grep "temperature-compensated, PR .* g/h)")
+    gph=$(printf '%s\n' "$line" | sed -n 's/.*mol\/s, \([0-9.e+-]*\) g\/h).*/\1/p')
+    [ -n "$gph" ] || fail "no g/h figure in the demo: $line"
+    run convert "${gph}g/h" kg/s; ok
+    near "demo g/h typed back" "$(kv value "$OUT")" "$(awk -v g="$gph" 'BEGIN{printf "%.12g", g/3.6e6}')" "$REL"
+    run -m pr -u g/h -b 26.42inHg leak N2 51.9in3 87psig 86.62psig 70.2F 69.8F 15min; ok
+    near "gkq leak beside the demo" "$(kv mass_lost_g_per_h "$OUT")" "$gph" 6e-3
+}
+
 case "$CASE" in
-    convert|state|speeds|water|contents|leak|gases|batch|errors|robust|writes|messages|units|help|batch_header|wet|phase|flow|solve|leak_baro) "case_$CASE" ;;
+    convert|state|speeds|water|contents|leak|gases|batch|errors|robust|writes|messages|units|help|batch_header|wet|phase|flow|solve|leak_baro|demo_units) "case_$CASE" ;;
     *) echo "unknown case $CASE"; exit 2 ;;
 esac
 if [ "$FAILS" -ne 0 ]; then echo "$CASE: $FAILS failure(s)"; exit 1; fi
