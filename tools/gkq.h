@@ -22,11 +22,11 @@
 #include "gaskit/gaskit.h"
 
 /* The model gkq uses when -m is not given: the most accurate model the library carries. */
-#define GKQ_DEFAULT_MODEL GK_EOS_PENG_ROBINSON
+#define GKQ_DEFAULT_MODEL GK_EOS_BEST
 /* The model that decides whether a pure gas or a mixture is liquid at a state, whatever model
-   computes the answer (the ideal gas has no liquid of its own): a cubic model has the vapour
-   and liquid roots whose fugacities tell the stable phase. */
-#define GKQ_PHASE_MODEL GK_EOS_PENG_ROBINSON
+   computes the answer (the ideal gas has no liquid of its own): the most accurate one, whose
+   stable root tells the phase (Span-Wagner where it covers the fluid, else Peng-Robinson). */
+#define GKQ_PHASE_MODEL GK_EOS_BEST
 
 #define GKQ_LINE_MAX 1024 /* longest batch line (bytes, without the newline) */
 #define GKQ_CELLS_MAX 16  /* most arguments of a word (a batch row without a header) */
@@ -234,6 +234,8 @@ typedef struct record {
     int set[GKQ_FIELDS_MAX];
     double v[GKQ_FIELDS_MAX];
     char s[GKQ_FIELDS_MAX][96];
+    gk_eos served; /* the model that computed the record (with best: the one chosen) */
+    int has_served;
 } record;
 
 void rec_init(record *r, const field *f, size_t n);
@@ -321,7 +323,8 @@ extern const size_t state_nfields, convert_nfields, speeds_nfields, water_nfield
 /* Shared steps of the words. */
 gk_status word_pressure(const settings *set, const quantity *q, int at_end, record *r,
                         const char *key, gk_pressure *out, detail *why);
-void rec_model(record *r, const settings *set);
+gk_status use_model(const settings *set, const fluid_in *f, gk_pressure p, gk_temperature t,
+                    settings *out, record *r);
 void rec_reference(record *r, const settings *set);
 const char *branch_text(const gk_eos_result *res);
 

@@ -103,6 +103,9 @@ static const struct { const char *name; gk_eos e; const char *title; } models[] 
     {"rk", GK_EOS_REDLICH_KWONG, "Redlich-Kwong"},
     {"srk", GK_EOS_SOAVE_REDLICH_KWONG, "Soave-Redlich-Kwong"},
     {"pr", GK_EOS_PENG_ROBINSON, "Peng-Robinson"},
+    {"sw", GK_EOS_SPAN_WAGNER, "Span-Wagner"},
+    {"hydrogen", GK_EOS_HYDROGEN, "hydrogen equation"},
+    {"best", GK_EOS_BEST, "best available"},
 };
 /* clang-format on */
 
@@ -616,7 +619,7 @@ gk_status check_gas_phase(const fluid_in *f, gk_pressure p, gk_temperature t, co
         "degC): the contents of a liquefied gas do not follow from its pressure; weigh the "
         "cylinder",
         what != NULL ? what : "", what != NULL ? ": " : "", f->text, (double)p.pa / 1e5,
-        (double)t.k - 273.15, model_title(GKQ_PHASE_MODEL), f->tc_k - 273.15);
+        (double)t.k - 273.15, model_title(res.model), f->tc_k - 273.15);
     return GK_ERR_RANGE;
 }
 
@@ -624,8 +627,13 @@ gk_status check_gas_phase(const fluid_in *f, gk_pressure p, gk_temperature t, co
 gk_status explain(gk_status st, const char *what, const fluid_in *f, detail *why) {
     if (st == GK_ERR_RANGE) {
         say(why,
-            "%s '%.80s': outside what the model covers (liquid at the state or at the "
-            "reference condition, or a result too large)",
+            "%s '%.80s': outside what the model covers (its temperature or pressure range, "
+            "liquid at the state or at the reference condition, or a result too large)",
+            what, f->text);
+    } else if (st == GK_ERR_NOT_FOUND) {
+        say(why,
+            "%s '%.80s': the model has no equation for this fluid (-m best picks one that "
+            "has)",
             what, f->text);
     } else if (st != GK_OK) {
         say(why, "%s '%.80s': %s", what, f->text, plain_status(st));

@@ -346,7 +346,10 @@ int run_word(const settings *set, const word *w, int argc, char **argv) {
                r.s[2]);
         if (r.set[3]) { printf("  (gauge over the barometer %.6g kPa)\n", r.v[3] / 1000.0); }
     } else {
-        if (set->format == OUT_TEXT && (w->flags & W_MODEL) != 0u) {
+        if (set->format == OUT_TEXT && (w->flags & W_MODEL) != 0u && r.has_served &&
+            r.served != set->model) {
+            printf("%s (%s: %s)\n", w->title, model_title(set->model), model_title(r.served));
+        } else if (set->format == OUT_TEXT && (w->flags & W_MODEL) != 0u) {
             printf("%s (%s)\n", w->title, model_title(set->model));
         } else if (set->format == OUT_TEXT) {
             printf("%s\n", w->title);

@@ -52,6 +52,7 @@ static gk_status fluid_of(const settings *set, const args *a, gk_pressure p, gk_
 const field flow_fields[] = {
     {"fluid", "fluid", F_TEXT, NOD, "", ""},
     {"model", "model", F_TEXT, NOD, "", ""},
+    {"model_used", "model used", F_TEXT, NOD, "", ""},
     {"given", "flow given as", F_TEXT, NOD, "", ""},
     {"reference", "reference condition", F_TEXT, NOD, "", ""},
     {"barometer", "barometer (for gauge readings)", F_REAL, DIM_PRESSURE, "kPa", ""},
@@ -79,6 +80,7 @@ gk_status word_flow(const settings *set, args *a, record *r, detail *why) {
     gk_mass_flow w, w1;
     gk_real z;
     gk_status st;
+    settings mset;
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
@@ -94,6 +96,8 @@ gk_status word_flow(const settings *set, args *a, record *r, detail *why) {
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
     if ((st = fluid_of(set, a, p, t, &f, r, why)) != GK_OK) { return st; }
     if ((st = check_gas_phase(&f, p, t, NULL, why)) != GK_OK) { return st; }
+    if ((st = use_model(set, &f, p, t, &mset, r)) != GK_OK) { return st; }
+    set = &mset; /* from here on the concrete model (with best: the one chosen) */
     output_reference(set, qq->ref, &ref_out, what, sizeof what);
     one.m3_per_s = (gk_real)1.0;
     st = gk_flow_to_mass(set->model, as_fluid(&f), one, p, t, &w1);
@@ -125,7 +129,6 @@ gk_status word_flow(const settings *set, args *a, record *r, detail *why) {
     if (st == GK_OK) { st = gk_flow_to_mass(set->model, as_fluid(&f), qa, p, t, &w); }
     if (st != GK_OK) { return explain(st, "flow of", &f, why); }
     rec_text(r, "fluid", f.text);
-    rec_model(r, set);
     rec_text(r, "given", given);
     rec_text(r, "reference", what);
     rec_real(r, "p", (double)p.pa);
@@ -203,6 +206,7 @@ static gk_status pressure_for_amount(const settings *set, const fluid_in *f, gk_
 const field fill_fields[] = {
     {"fluid", "fluid", F_TEXT, NOD, "", ""},
     {"model", "model", F_TEXT, NOD, "", ""},
+    {"model_used", "model used", F_TEXT, NOD, "", ""},
     {"vessel", "vessel volume", F_REAL, DIM_VOLUME, "L", ""},
     {"T", "temperature", F_REAL, DIM_TEMPERATURE, "degC", ""},
     {"amount", "amount", F_REAL, DIM_AMOUNT, "mol", ""},
@@ -224,6 +228,7 @@ gk_status word_fill(const settings *set, args *a, record *r, detail *why) {
     gk_contents c;
     fluid_in f;
     gk_status st;
+    settings mset;
     double n;
 
     a->wexp = 1;
@@ -250,9 +255,11 @@ gk_status word_fill(const settings *set, args *a, record *r, detail *why) {
         blame(why, qn, "the target must be above 0");
         return st;
     }
+    p.pa = (gk_real)(n * (double)GK_R * (double)t.k / (double)v.m3); /* ideal-gas estimate */
+    if ((st = use_model(set, &f, p, t, &mset, r)) != GK_OK) { return st; }
+    set = &mset; /* from here on the concrete model (with best: the one chosen) */
     if ((st = pressure_for_amount(set, &f, v, t, n, &p, &c, why)) != GK_OK) { return st; }
     rec_text(r, "fluid", f.text);
-    rec_model(r, set);
     rec_real(r, "vessel", (double)v.m3);
     rec_real(r, "T", (double)t.k);
     rec_real(r, "amount", (double)c.amount.mol);
@@ -271,6 +278,7 @@ gk_status word_fill(const settings *set, args *a, record *r, detail *why) {
 const field retemp_fields[] = {
     {"fluid", "fluid", F_TEXT, NOD, "", ""},
     {"model", "model", F_TEXT, NOD, "", ""},
+    {"model_used", "model used", F_TEXT, NOD, "", ""},
     {"barometer", "barometer (for gauge readings)", F_REAL, DIM_PRESSURE, "kPa", ""},
     {"p_start", "pressure before (absolute)", F_REAL, DIM_PRESSURE, "bar", ""},
     {"T_start", "temperature before", F_REAL, DIM_TEMPERATURE, "degC", ""},
@@ -292,6 +300,7 @@ gk_status word_retemp(const settings *set, args *a, record *r, detail *why) {
     gk_contents c1, c2;
     fluid_in f;
     gk_status st;
+    settings mset;
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
@@ -305,6 +314,8 @@ gk_status word_retemp(const settings *set, args *a, record *r, detail *why) {
     if ((st = parse_fluid(a->w[0], a->wwhere[0], &f, why)) != GK_OK) { return st; }
     if ((st = check_water(&f, p1, t1, why)) != GK_OK) { return st; }
     if ((st = check_gas_phase(&f, p1, t1, "before", why)) != GK_OK) { return st; }
+    if ((st = use_model(set, &f, p1, t1, &mset, r)) != GK_OK) { return st; }
+    set = &mset; /* from here on the concrete model (with best: the one chosen) */
     /* a closed vessel keeps its amount per volume: 1 m3 stands for any volume */
     v.m3 = (gk_real)1.0;
     p2.pa = (gk_real)0.0;
@@ -315,7 +326,6 @@ gk_status word_retemp(const settings *set, args *a, record *r, detail *why) {
     if (st != GK_OK) { return st; }
     if ((st = check_water(&f, p2, t2, why)) != GK_OK) { return st; }
     rec_text(r, "fluid", f.text);
-    rec_model(r, set);
     rec_real(r, "p_start", (double)p1.pa);
     rec_real(r, "T_start", (double)t1.k);
     rec_real(r, "z_start", (double)c1.z);
@@ -467,6 +477,7 @@ gk_status word_effusion(const settings *set, args *a, record *r, detail *why) {
 const field reldensity_fields[] = {
     {"fluid", "fluid", F_TEXT, NOD, "", ""},
     {"model", "model", F_TEXT, NOD, "", ""},
+    {"model_used", "model used", F_TEXT, NOD, "", ""},
     {"barometer", "barometer (for gauge readings)", F_REAL, DIM_PRESSURE, "kPa", ""},
     {"p", "pressure (absolute)", F_REAL, DIM_PRESSURE, "bar", ""},
     {"T", "temperature", F_REAL, DIM_TEMPERATURE, "degC", ""},
@@ -485,6 +496,7 @@ gk_status word_reldensity(const settings *set, args *a, record *r, detail *why) 
     const gk_gas *air;
     gk_real d;
     gk_status st;
+    settings mset;
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
@@ -500,6 +512,8 @@ gk_status word_reldensity(const settings *set, args *a, record *r, detail *why) 
     if ((st = parse_fluid(a->w[0], a->wwhere[0], &f, why)) != GK_OK) { return st; }
     if ((st = check_water(&f, p, t, why)) != GK_OK) { return st; }
     if ((st = check_gas_phase(&f, p, t, NULL, why)) != GK_OK) { return st; }
+    if ((st = use_model(set, &f, p, t, &mset, r)) != GK_OK) { return st; }
+    set = &mset; /* from here on the concrete model (with best: the one chosen) */
     if ((st = gk_relative_density(set->model, as_fluid(&f), p, t, &d)) != GK_OK) {
         return explain(st, "relative density of", &f, why);
     }
@@ -508,7 +522,6 @@ gk_status word_reldensity(const settings *set, args *a, record *r, detail *why) 
         return st;
     }
     rec_text(r, "fluid", f.text);
-    rec_model(r, set);
     rec_real(r, "p", (double)p.pa);
     rec_real(r, "T", (double)t.k);
     rec_real(r, "molar_mass", (double)f.m.kg_per_mol);

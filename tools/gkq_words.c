@@ -21,7 +21,34 @@ gk_status word_pressure(const settings *set, const quantity *q, int at_end, reco
     return st;
 }
 
-void rec_model(record *r, const settings *set) { rec_text(r, "model", model_name(set->model)); }
+/* The concrete model for a fluid at a state, in *out (a copy of set): -m, or with best the one
+   the library picks there (Span-Wagner or the hydrogen equation where they cover the fluid,
+   else Peng-Robinson); where the pick does not cover the state (outside its temperature or
+   pressure range), Peng-Robinson. Records the model asked for and, when it differs, the one
+   used. */
+gk_status use_model(const settings *set, const fluid_in *f, gk_pressure p, gk_temperature t,
+                    settings *out, record *r) {
+    gk_eos_result res;
+    gk_status st = GK_OK;
+    *out = *set;
+    if (set->model == GK_EOS_BEST) {
+        if (f->is_mix) {
+            st = gk_mixture_eos_solve(GK_EOS_BEST, &f->mix, NULL, p, t, GK_ROOT_STABLE, &res);
+        } else {
+            st = gk_eos_solve(GK_EOS_BEST, f->gas, p, t, GK_ROOT_STABLE, &res);
+        }
+        if (st == GK_OK) {
+            out->model = res.model;
+        } else if (st == GK_ERR_RANGE) {
+            out->model = GK_EOS_PENG_ROBINSON;
+        }
+    }
+    rec_text(r, "model", model_name(set->model));
+    if (out->model != set->model) { rec_text(r, "model_used", model_name(out->model)); }
+    r->served = out->model;
+    r->has_served = 1;
+    return GK_OK;
+}
 
 void rec_reference(record *r, const settings *set) { rec_text(r, "reference", set->ref_what); }
 
@@ -88,6 +115,7 @@ static gk_status word_fluid(const settings *set, const args *a, gk_pressure p, g
 const field state_fields[] = {
     {"fluid", "fluid", F_TEXT, NOD, "", ""},
     {"model", "model", F_TEXT, NOD, "", ""},
+    {"model_used", "model used", F_TEXT, NOD, "", ""},
     {"root", "root asked", F_TEXT, NOD, "", ""},
     {"barometer", "barometer (for gauge readings)", F_REAL, DIM_PRESSURE, "kPa", ""},
     {"p", "pressure (absolute)", F_REAL, DIM_PRESSURE, "bar", ""},
@@ -119,6 +147,7 @@ gk_status word_state(const settings *set, args *a, record *r, detail *why) {
     gk_eos_result res;
     gk_density rho_i;
     gk_status st;
+    settings mset;
     double rho;
     int i;
 
@@ -130,6 +159,8 @@ gk_status word_state(const settings *set, args *a, record *r, detail *why) {
     if ((st = word_pressure(set, qp, 0, r, "barometer", &p, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
     if ((st = word_fluid(set, a, p, t, &f, r, why)) != GK_OK) { return st; }
+    if ((st = use_model(set, &f, p, t, &mset, r)) != GK_OK) { return st; }
+    set = &mset; /* from here on the concrete model (with best: the one chosen) */
     if (set->model == GK_EOS_IDEAL) {
         st = check_gas_phase(&f, p, t, "the ideal gas has no liquid", why);
         if (st != GK_OK) { return st; }
@@ -147,7 +178,6 @@ gk_status word_state(const settings *set, args *a, record *r, detail *why) {
     rho = (double)f.m.kg_per_mol / (double)res.molar_volume.m3_per_mol;
 
     rec_text(r, "fluid", f.text);
-    rec_model(r, set);
     rec_text(r, "root",
              set->root == GK_ROOT_STABLE ? "stable"
              : set->root == GK_ROOT_GAS  ? "gas"
@@ -483,6 +513,7 @@ gk_status word_dew(const settings *set, args *a, record *r, detail *why) {
 const field contents_fields[] = {
     {"fluid", "fluid", F_TEXT, NOD, "", ""},
     {"model", "model", F_TEXT, NOD, "", ""},
+    {"model_used", "model used", F_TEXT, NOD, "", ""},
     {"reference", "reference condition", F_TEXT, NOD, "", ""},
     {"barometer", "barometer (for gauge readings)", F_REAL, DIM_PRESSURE, "kPa", ""},
     {"vessel", "vessel volume", F_REAL, DIM_VOLUME, "L", ""},
@@ -510,6 +541,7 @@ gk_status word_contents(const settings *set, args *a, record *r, detail *why) {
     fluid_in f;
     gk_contents c, ci;
     gk_status st;
+    settings mset;
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
@@ -522,12 +554,13 @@ gk_status word_contents(const settings *set, args *a, record *r, detail *why) {
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
     if ((st = word_fluid(set, a, p, t, &f, r, why)) != GK_OK) { return st; }
     if ((st = check_gas_phase(&f, p, t, NULL, why)) != GK_OK) { return st; }
+    if ((st = use_model(set, &f, p, t, &mset, r)) != GK_OK) { return st; }
+    set = &mset; /* from here on the concrete model (with best: the one chosen) */
     st = gk_vessel_contents(set->model, as_fluid(&f), v, p, t, set->ref, &c);
     if (st != GK_OK) { return explain(st, "contents of", &f, why); }
     st = gk_vessel_contents(GK_EOS_IDEAL, as_fluid(&f), v, p, t, set->ref, &ci);
     if (st != GK_OK) { return explain(st, "ideal-gas contents of", &f, why); }
     rec_text(r, "fluid", f.text);
-    rec_model(r, set);
     rec_reference(r, set);
     rec_real(r, "vessel", (double)v.m3);
     rec_real(r, "p", (double)p.pa);
@@ -549,6 +582,7 @@ gk_status word_contents(const settings *set, args *a, record *r, detail *why) {
 const field leak_fields[] = {
     {"fluid", "fluid", F_TEXT, NOD, "", ""},
     {"model", "model", F_TEXT, NOD, "", ""},
+    {"model_used", "model used", F_TEXT, NOD, "", ""},
     {"reference", "reference condition", F_TEXT, NOD, "", ""},
     {"volume", "test volume", F_REAL, DIM_VOLUME, "L", ""},
     {"barometer", "barometer at start", F_REAL, DIM_PRESSURE, "kPa", ""},
@@ -576,6 +610,7 @@ gk_status word_leak(const settings *set, args *a, record *r, detail *why) {
     fluid_in f;
     gk_leak lk, lki;
     gk_status st;
+    settings mset;
 
     a->wexp = 1;
     if ((st = need_word(a, 0, "fluid (a gas or a mixture)", why)) != GK_OK) { return st; }
@@ -600,6 +635,8 @@ gk_status word_leak(const settings *set, args *a, record *r, detail *why) {
     if ((st = check_water(&f, p2, t2, why)) != GK_OK) { return st; }
     if ((st = check_gas_phase(&f, p1, t1, "leak test start", why)) != GK_OK) { return st; }
     if ((st = check_gas_phase(&f, p2, t2, "leak test end", why)) != GK_OK) { return st; }
+    if ((st = use_model(set, &f, p1, t1, &mset, r)) != GK_OK) { return st; }
+    set = &mset; /* from here on the concrete model (with best: the one chosen) */
     st = gk_leak_rate_pressure_decay(set->model, as_fluid(&f), v, p1, t1, p2, t2,
                                      (gk_real)qd->value, set->ref, &lk);
     if (st == GK_OK) {
@@ -615,7 +652,6 @@ gk_status word_leak(const settings *set, args *a, record *r, detail *why) {
     }
     if (st != GK_OK) { return explain(st, "leak of", &f, why); }
     rec_text(r, "fluid", f.text);
-    rec_model(r, set);
     rec_reference(r, set);
     rec_real(r, "volume", (double)v.m3);
     rec_real(r, "p_start", (double)p1.pa);

@@ -651,8 +651,33 @@ case_demo_units() {
     near "gkq leak beside the demo" "$(kv mass_lost_g_per_h "$OUT")" "$gph" 6e-3
 }
 
+case_models() {
+    # the default is the most accurate model the library carries (best): it names the model it
+    # used; the values are those of that model asked for directly (the reference-grade
+    # equations are checked against their papers in tests/test_helmholtz.c)
+    run state N2 200bar 20degC; ok
+    [ "$(kv model "$OUT")" = best ] || fail "default model: $(kv model "$OUT")"
+    [ "$(kv model_used "$OUT")" = sw ] || fail "best for N2: $(kv model_used "$OUT")"
+    z=$(kv z "$OUT")
+    run -m sw state N2 200bar 20degC; ok
+    near "best = Span-Wagner for N2" "$z" "$(kv z "$OUT")" "$REL"
+    "$GKQ" contents N2 50L 200bar 20C | head -n 1 | grep -q "^vessel contents (best available: Span-Wagner)$" \
+        || fail "title does not name the model used"
+    run -m pr state N2 200bar 20degC; ok
+    awk -v a="$z" -v b="$(kv z "$OUT")" 'BEGIN { exit (a - b > 0.01 || b - a > 0.01) ? 0 : 1 }' \
+        || fail "best gave Peng-Robinson's Z for N2 at 200 bar"
+    # outside the reference equation's range (600 K) best falls back to Peng-Robinson and says so
+    run state N2 1bar 700K; ok
+    [ "$(kv model_used "$OUT")" = pr ] || fail "N2 at 700 K: model used $(kv model_used "$OUT")"
+    run fill H2 50L 20C 1kg; ok
+    [ "$(kv model_used "$OUT")" = hydrogen ] || fail "best for H2: $(kv model_used "$OUT")"
+    must_fail 1 "no equation for this fluid" -m sw state He 100bar 20C
+    "$GKQ" help | grep -q "(default best)" || fail "help does not name the default model"
+    "$GKQ" -m SPAN-WAGNER state N2 1bar 20C >/dev/null 2>&1 || fail "-m SPAN-WAGNER refused"
+}
+
 case "$CASE" in
-    convert|state|speeds|water|contents|leak|gases|batch|errors|robust|writes|messages|units|help|batch_header|wet|phase|flow|solve|leak_baro|demo_units) "case_$CASE" ;;
+    convert|state|speeds|water|contents|leak|gases|batch|errors|robust|writes|messages|units|help|batch_header|wet|phase|flow|solve|leak_baro|demo_units|models) "case_$CASE" ;;
     *) echo "unknown case $CASE"; exit 2 ;;
 esac
 if [ "$FAILS" -ne 0 ]; then echo "$CASE: $FAILS failure(s)"; exit 1; fi
