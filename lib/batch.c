@@ -1,6 +1,6 @@
 /*
- * batch.c - the array calls of batch.h: ideal-gas density, and density, Z, vessel contents and
- * flows of a gas or mixture under a model.
+ * batch.c - the array calls of batch.h: ideal-gas density, the dry-gas pressure of wet gases,
+ * and density, Z, vessel contents and flows of a gas or mixture under a model.
  *
  * gk_ideal_density_batch() computes each block of elements in one loop without branches that
  * compilers vectorise: the density (p / R)(M / T), the same product of ratios as the fast path
@@ -162,6 +162,27 @@ size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk_real *
         } else {
             ok += ideal_block_mixed(n, p, t, m, lo, hi, out, st);
         }
+    }
+    return ok;
+}
+
+size_t gk_dry_gas_pressure_batch(size_t count, const gk_real *p_pa, const gk_real *t_k,
+                                 const gk_real *relative_humidity, gk_real *out_pa,
+                                 gk_status *status_out) {
+    size_t i, ok = 0;
+    if (p_pa == NULL || t_k == NULL || relative_humidity == NULL || out_pa == NULL) {
+        return fail_all(count, GK_ERR_ARGUMENT, out_pa, NULL, NULL, status_out);
+    }
+    for (i = 0; i < count; ++i) {
+        gk_pressure p, dry = { GK_LIT(0.0) };
+        gk_temperature t;
+        gk_status s;
+        p.pa = p_pa[i];
+        t.k = t_k[i];
+        s = gk_dry_gas_pressure(p, t, relative_humidity[i], &dry);
+        out_pa[i] = (s == GK_OK) ? dry.pa : GK_BATCH_NAN;
+        if (status_out != NULL) { status_out[i] = s; }
+        ok += (s == GK_OK) ? 1u : 0u;
     }
     return ok;
 }

@@ -328,6 +328,34 @@ static void null_arrays_zero_count_in_place(void **state) {
     }
 }
 
+/* Wet-gas correction: each element as gk_dry_gas_pressure(). Outside reference: the IAPWS-IF97
+   saturation pressure of water at 300 K, 0.353658941e-2 MPa (the release's computer-program
+   verification value for region 4, from memory): gas saturated at 101.325 kPa and 300 K holds
+   101325 - 3536.58941 Pa of dry gas. */
+static void dry_gas_pressure_batch(void **state) {
+    (void)state;
+    gk_real p[5] = { 101325, 101325, 101325, 2000, 101325 };
+    gk_real t[5] = { 300, (gk_real)293.15, (gk_real)700, (gk_real)293.15, (gk_real)-1 };
+    gk_real rh[5] = { 1, (gk_real)0.5, (gk_real)0.5, 1, (gk_real)0.5 };
+    gk_real out[5];
+    gk_status st[5];
+    assert_int_equal(gk_dry_gas_pressure_batch(5, p, t, rh, out, st), 2);
+    assert_rel(out[0], 101325.0 - 3536.58941, GK_TOL(1e-10, 1e-6));
+    for (int i = 0; i < 5; ++i) {
+        gk_pressure pi = { p[i] }, d = { GK_SENTINEL };
+        gk_temperature ti = { t[i] };
+        gk_status s = gk_dry_gas_pressure(pi, ti, rh[i], &d);
+        assert_element(out[i], st[i], s, d.pa);
+    }
+    assert_status(st[2], GK_ERR_RANGE);       /* above the critical temperature of water */
+    assert_status(st[3], GK_ERR_NO_SOLUTION); /* water partial pressure above p */
+    assert_status(st[4], GK_ERR_DOMAIN);
+    assert_int_equal(gk_dry_gas_pressure_batch(5, p, t, NULL, out, st), 0);
+    assert_status(st[0], GK_ERR_ARGUMENT);
+    assert_true(isnan(out[0]));
+    assert_int_equal(gk_dry_gas_pressure_batch(0, NULL, NULL, NULL, NULL, NULL), 0);
+}
+
 int main(void) {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(z_and_density_match_scalar),
@@ -335,6 +363,7 @@ int main(void) {
         cmocka_unit_test(published_values),
         cmocka_unit_test(whole_array_failures),
         cmocka_unit_test(null_arrays_zero_count_in_place),
+        cmocka_unit_test(dry_gas_pressure_batch),
     };
     return cmocka_run_group_tests_name("batch", tests, NULL, NULL);
 }

@@ -28,6 +28,7 @@
 
 #include "gaskit/eos.h"
 #include "gaskit/instrument.h"
+#include "gaskit/water.h"
 
 #ifdef __cplusplus
 extern "C" {
@@ -127,6 +128,19 @@ GK_API size_t gk_flow_to_mass_batch(gk_eos eos, gk_fluid fluid, size_t count,
                                     const gk_real *q_m3_per_s, const gk_real *p_pa,
                                     const gk_real *t_k, gk_real *out_kg_per_s,
                                     gk_status *status_out);
+
+/**
+ * @brief gk_dry_gas_pressure() over arrays: out[i] = p[i] - rh[i] p_ws(t[i]), the partial
+ *        pressures of the dry gas in wet gases (the wet-gas correction of a log of readings).
+ *
+ * p_ws is the vapour pressure of water (IAPWS-IF97) at and above 273.16 K, of ice (IAPWS 2011)
+ * below; the enhancement factor of moist gas (about 1.004 near ambient) is neglected.
+ * @param relative_humidity Relative humidities as fractions in [0, 1].
+ * @return Number of elements with status GK_OK.
+ */
+GK_API size_t gk_dry_gas_pressure_batch(size_t count, const gk_real *p_pa, const gk_real *t_k,
+                                        const gk_real *relative_humidity, gk_real *out_pa,
+                                        gk_status *status_out);
 
 /** @} */
 
