@@ -111,6 +111,12 @@ static size_t ideal_block_mixed(size_t n, const gk_real *p, const gk_real *t, gk
     return ok;
 }
 
+/* Status GK_OK for n elements. */
+static void fill_ok(size_t n, gk_status *st) {
+    size_t i;
+    for (i = 0; i < n; ++i) { st[i] = GK_OK; }
+}
+
 /* Every element fails with status s: NaN in each non-NULL output, s in status_out. */
 static size_t fail_all(size_t count, gk_status s, gk_real *out1, gk_real *out2, gk_real *out3,
                        gk_status *status_out) {
@@ -131,7 +137,7 @@ size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk_real *
     const gk_real hi = gk_scaled_bound(2);
     const gk_real lo = GK_LIT(1.0) / hi;
     const uint32_t key_lo = real_key(lo), span = real_key(hi) - key_lo;
-    size_t base, ok = 0;
+    size_t base, n = 0, ok = 0;
     bool fast;
     if (p_pa == NULL || t_k == NULL || out_kg_per_m3 == NULL) {
         return fail_all(count, GK_ERR_ARGUMENT, out_kg_per_m3, NULL, NULL, status_out);
@@ -141,12 +147,13 @@ size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk_real *
     }
     /* in place (out is p or t): element by element, which reads each input before writing */
     fast = in_bound(m.kg_per_mol, lo, hi) && out_kg_per_m3 != p_pa && out_kg_per_m3 != t_k;
-    for (base = 0; base < count; base += GK_BATCH_BLOCK) {
-        const size_t n = (count - base < GK_BATCH_BLOCK) ? count - base : GK_BATCH_BLOCK;
+    for (base = 0; base < count; base += n) {
+        const size_t rest = count - base;
         const gk_real *p = p_pa + base, *t = t_k + base;
         gk_real *out = out_kg_per_m3 + base;
         gk_status *st = (status_out != NULL) ? status_out + base : NULL;
         bool done = false;
+        n = (rest < GK_BATCH_BLOCK) ? rest : GK_BATCH_BLOCK;
         if (fast) {
             /* a full block with the constant trip count, which compilers vectorise at -O2 */
             done = (n == GK_BATCH_BLOCK)
@@ -154,10 +161,7 @@ size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk_real *
                        : ideal_block(n, p, t, m.kg_per_mol, key_lo, span, out);
         }
         if (done) {
-            size_t i;
-            if (st != NULL) {
-                for (i = 0; i < n; ++i) { st[i] = GK_OK; }
-            }
+            if (st != NULL) { fill_ok(n, st); }
             ok += n;
         } else {
             ok += ideal_block_mixed(n, p, t, m, lo, hi, out, st);

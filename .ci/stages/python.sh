@@ -60,7 +60,7 @@ timeout 300 "$venv/bin/python" "$root/bindings-examples/python/examples/fleet_lo
 
 passed=$(grep -Eo '[0-9]+ passed' "$out/pytest.txt" | tail -n 1)
 passed_f=$(grep -Eo '[0-9]+ passed' "$out/pytest-float.txt" | tail -n 1)
-ratio=$(awk '/^ideal density, +1000000 /{for (i = 1; i <= NF; ++i) if ($i == "(ratio") {print $(i + 1); exit}}' "$out/bench_batch.txt" | tr -d ')')
+ratio=$(awk '/^ideal density, +1000000 /{for (i = 1; i <= NF; ++i) if ($i == "(ratio") {print $(i + 1); exit}}' "$out/bench_batch.txt" | tr -d '),')
 pr_py=$(grep -m1 '^Peng-Robinson density' "$out/bench_numpy.txt" | sed -E 's/.*gaskit.arrays ([0-9.]+) ns.*C batch \(bench_batch\) ([0-9.]+) ns.*/Python \1 ns, C \2 ns per element/')
 w1=$(awk '/^1 worker/ {print $(NF - 4)}' "$out/fleet.txt")
 wn=$(awk '/^2 workers/ {print $(NF - 4)}' "$out/fleet.txt")
