@@ -202,13 +202,18 @@ typedef enum batch_op {
     BATCH_FLOW_TO_MASS
 } batch_op;
 
-/* What every element of one call shares. */
+/* One call: what every element shares, and the arrays. */
 typedef struct batch_job {
     batch_op op;
     gk_eos eos;
     gk_fluid fluid;
     gk_reference ref;
-    gk_molar_mass m; /* the mixture's molar mass (BATCH_DENSITY of a mixture only) */
+    gk_molar_mass m;   /* the mixture's molar mass (BATCH_DENSITY of a mixture only) */
+    const gk_real *x;  /* volumes or flows; NULL for density and Z */
+    const gk_real *p;  /* pressures, Pa */
+    const gk_real *t;  /* temperatures, K */
+    gk_real *out[3];   /* results; out[1], out[2] may be NULL */
+    gk_status *status; /* may be NULL */
 } batch_job;
 
 /* Density of a mixture at one state: M / Vm of the stable root. */
@@ -225,10 +230,10 @@ static gk_status mixture_density(const batch_job *job, gk_pressure p, gk_tempera
     return GK_OK;
 }
 
-/* One element: x is the element's volume or flow (unused by density and Z); r[0..2] receive
-   the results on GK_OK. */
-static gk_status batch_element(const batch_job *job, gk_real x, gk_pressure p, gk_temperature t,
-                               gk_real r[3]) {
+/* The scalar call of element i: x is its volume or flow (unused by density and Z); r[0..2]
+   receive the results on GK_OK. */
+static gk_status element_call(const batch_job *job, gk_real x, gk_pressure p, gk_temperature t,
+                              gk_real r[3]) {
     gk_status s;
     switch (job->op) {
         case BATCH_DENSITY:
@@ -269,34 +274,31 @@ static gk_status batch_element(const batch_job *job, gk_real x, gk_pressure p, g
     }
 }
 
-/* The element loop of every fluid call. x may be NULL for the calls without a volume or flow
-   input; out2 and out3 may be NULL. Each element's inputs are read before its outputs are
-   written, so an output may be an input array (in place). */
-static size_t batch_run(const batch_job *job, size_t count, const gk_real *x, const gk_real *p_pa,
-                        const gk_real *t_k, gk_real *out1, gk_real *out2, gk_real *out3,
-                        gk_status *status_out) {
-    size_t i, ok = 0;
-    for (i = 0; i < count; ++i) {
-        gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
-        gk_pressure p;
-        gk_temperature t;
-        gk_status s;
-        p.pa = p_pa[i];
-        t.k = t_k[i];
-        s = batch_element(job, (x != NULL) ? x[i] : GK_LIT(0.0), p, t, r);
-        if (s != GK_OK) { r[0] = r[1] = r[2] = GK_BATCH_NAN; }
-        out1[i] = r[0];
-        if (out2 != NULL) { out2[i] = r[1]; }
-        if (out3 != NULL) { out3[i] = r[2]; }
-        if (status_out != NULL) { status_out[i] = s; }
-        ok += (s == GK_OK) ? 1u : 0u;
+/* Element i: reads its inputs, then writes its results (NaN on failure) and status, so an
+   output may be an input array (in place). 1 when its status is GK_OK, else 0. Kept out of
+   line: its frame and its callee's are not under the caller's loop (firmware stack). */
+static GK_NOINLINE size_t batch_element(const batch_job *job, size_t i) {
+    gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
+    gk_pressure p;
+    gk_temperature t;
+    gk_status s;
+    int k;
+    p.pa = job->p[i];
+    t.k = job->t[i];
+    s = element_call(job, (job->x != NULL) ? job->x[i] : GK_LIT(0.0), p, t, r);
+    for (k = 0; k < 3; ++k) {
+        if (job->out[k] != NULL) { job->out[k][i] = (s == GK_OK) ? r[k] : GK_BATCH_NAN; }
     }
-    return ok;
+    if (job->status != NULL) { job->status[i] = s; }
+    return (s == GK_OK) ? 1u : 0u;
 }
 
-/* The whole-array checks of a fluid call: the model, exactly one of gas and mixture, and for
-   the density of a mixture its molar mass (into job->m). */
-static gk_status batch_prepare(batch_job *job) {
+/* The whole-array checks of a fluid call: the arrays, the model, exactly one of gas and
+   mixture, and for the density of a mixture its molar mass (into job->m). */
+static gk_status batch_prepare(batch_job *job, bool needs_x) {
+    if (job->p == NULL || job->t == NULL || job->out[0] == NULL || (needs_x && job->x == NULL)) {
+        return GK_ERR_ARGUMENT;
+    }
     if (!gk__eos_valid(job->eos)) { return GK_ERR_ARGUMENT; }
     if ((job->fluid.gas == NULL) == (job->fluid.mixture == NULL)) { return GK_ERR_ARGUMENT; }
     if (job->op == BATCH_DENSITY && job->fluid.mixture != NULL) {
@@ -306,81 +308,91 @@ static gk_status batch_prepare(batch_job *job) {
 }
 
 /* Checks the arrays and the job, then runs the elements (or fails them all). */
-static size_t batch_call(batch_job *job, size_t count, const gk_real *x, bool needs_x,
-                         const gk_real *p_pa, const gk_real *t_k, gk_real *out1, gk_real *out2,
-                         gk_real *out3, gk_status *status_out) {
+static GK_ALWAYS_INLINE size_t batch_run(batch_job *job, size_t count, bool needs_x) {
+    size_t i, ok = 0;
     gk_status s;
     if (count == 0u) { return 0; }
-    if (p_pa == NULL || t_k == NULL || out1 == NULL || (needs_x && x == NULL)) {
-        return fail_all(count, GK_ERR_ARGUMENT, out1, out2, out3, status_out);
+    s = batch_prepare(job, needs_x);
+    if (s != GK_OK) {
+        return fail_all(count, s, job->out[0], job->out[1], job->out[2], job->status);
     }
-    s = batch_prepare(job);
-    if (s != GK_OK) { return fail_all(count, s, out1, out2, out3, status_out); }
-    return batch_run(job, count, needs_x ? x : NULL, p_pa, t_k, out1, out2, out3, status_out);
+    for (i = 0; i < count; ++i) { ok += batch_element(job, i); }
+    return ok;
 }
 
-/* A job with the given operation, model, fluid and reference condition. */
-static batch_job batch_job_make(batch_op op, gk_eos eos, gk_fluid fluid, gk_reference ref) {
-    batch_job job;
-    job.op = op;
-    job.eos = eos;
-    job.fluid = fluid;
-    job.ref = ref;
-    job.m.kg_per_mol = GK_LIT(0.0);
-    return job;
-}
-
-/* The reference condition of the calls that have none (never read). */
-static gk_reference no_reference(void) {
-    gk_reference ref;
-    ref.p.pa = GK_LIT(0.0);
-    ref.t.k = GK_LIT(0.0);
-    return ref;
+/* A job with the given operation, model, fluid, inputs (x may be NULL) and first output; no
+   reference condition, no further outputs. */
+static GK_ALWAYS_INLINE void batch_job_init(batch_job *job, batch_op op, gk_eos eos, gk_fluid fluid,
+                                            const gk_real *x, const gk_real *p, const gk_real *t,
+                                            gk_real *out, gk_status *status) {
+    job->op = op;
+    job->eos = eos;
+    job->fluid = fluid;
+    job->ref.p.pa = GK_LIT(0.0);
+    job->ref.t.k = GK_LIT(0.0);
+    job->m.kg_per_mol = GK_LIT(0.0);
+    job->x = x;
+    job->p = p;
+    job->t = t;
+    job->out[0] = out;
+    job->out[1] = NULL;
+    job->out[2] = NULL;
+    job->status = status;
 }
 
 size_t gk_fluid_density_batch(gk_eos eos, gk_fluid fluid, size_t count, const gk_real *p_pa,
                               const gk_real *t_k, gk_real *out_kg_per_m3, gk_status *status_out) {
-    batch_job job = batch_job_make(BATCH_DENSITY, eos, fluid, no_reference());
-    return batch_call(&job, count, NULL, false, p_pa, t_k, out_kg_per_m3, NULL, NULL, status_out);
+    batch_job job;
+    batch_job_init(&job, BATCH_DENSITY, eos, fluid, NULL, p_pa, t_k, out_kg_per_m3, status_out);
+    return batch_run(&job, count, false);
 }
 
 size_t gk_eos_density_batch(gk_eos eos, const gk_gas *gas, size_t count, const gk_real *p_pa,
                             const gk_real *t_k, gk_real *out_kg_per_m3, gk_status *status_out) {
+    batch_job job;
     gk_fluid fluid;
     fluid.gas = gas;
     fluid.mixture = NULL;
     fluid.kij = NULL;
-    return gk_fluid_density_batch(eos, fluid, count, p_pa, t_k, out_kg_per_m3, status_out);
+    batch_job_init(&job, BATCH_DENSITY, eos, fluid, NULL, p_pa, t_k, out_kg_per_m3, status_out);
+    return batch_run(&job, count, false);
 }
 
 size_t gk_fluid_z_batch(gk_eos eos, gk_fluid fluid, size_t count, const gk_real *p_pa,
                         const gk_real *t_k, gk_real *out_z, gk_status *status_out) {
-    batch_job job = batch_job_make(BATCH_Z, eos, fluid, no_reference());
-    return batch_call(&job, count, NULL, false, p_pa, t_k, out_z, NULL, NULL, status_out);
+    batch_job job;
+    batch_job_init(&job, BATCH_Z, eos, fluid, NULL, p_pa, t_k, out_z, status_out);
+    return batch_run(&job, count, false);
 }
 
 size_t gk_vessel_contents_batch(gk_eos eos, gk_fluid fluid, gk_reference ref, size_t count,
                                 const gk_real *v_m3, const gk_real *p_pa, const gk_real *t_k,
                                 gk_real *out_mol, gk_real *out_kg, gk_real *out_reference_m3,
                                 gk_status *status_out) {
-    batch_job job = batch_job_make(BATCH_CONTENTS, eos, fluid, ref);
-    return batch_call(&job, count, v_m3, true, p_pa, t_k, out_mol, out_kg, out_reference_m3,
-                      status_out);
+    batch_job job;
+    batch_job_init(&job, BATCH_CONTENTS, eos, fluid, v_m3, p_pa, t_k, out_mol, status_out);
+    job.ref = ref;
+    job.out[1] = out_kg;
+    job.out[2] = out_reference_m3;
+    return batch_run(&job, count, true);
 }
 
 size_t gk_flow_to_reference_batch(gk_eos eos, gk_fluid fluid, gk_reference ref, size_t count,
                                   const gk_real *q_m3_per_s, const gk_real *p_pa,
                                   const gk_real *t_k, gk_real *out_m3_per_s,
                                   gk_status *status_out) {
-    batch_job job = batch_job_make(BATCH_FLOW_TO_REFERENCE, eos, fluid, ref);
-    return batch_call(&job, count, q_m3_per_s, true, p_pa, t_k, out_m3_per_s, NULL, NULL,
-                      status_out);
+    batch_job job;
+    batch_job_init(&job, BATCH_FLOW_TO_REFERENCE, eos, fluid, q_m3_per_s, p_pa, t_k, out_m3_per_s,
+                   status_out);
+    job.ref = ref;
+    return batch_run(&job, count, true);
 }
 
 size_t gk_flow_to_mass_batch(gk_eos eos, gk_fluid fluid, size_t count, const gk_real *q_m3_per_s,
                              const gk_real *p_pa, const gk_real *t_k, gk_real *out_kg_per_s,
                              gk_status *status_out) {
-    batch_job job = batch_job_make(BATCH_FLOW_TO_MASS, eos, fluid, no_reference());
-    return batch_call(&job, count, q_m3_per_s, true, p_pa, t_k, out_kg_per_s, NULL, NULL,
-                      status_out);
+    batch_job job;
+    batch_job_init(&job, BATCH_FLOW_TO_MASS, eos, fluid, q_m3_per_s, p_pa, t_k, out_kg_per_s,
+                   status_out);
+    return batch_run(&job, count, true);
 }
