@@ -28,8 +28,10 @@ cmake --build "$out-f" -j2 --target gaskit_shared
 venv=$out/venv
 rm -rf "$venv"
 "$py" -m venv --system-site-packages "$venv"
+# (from a copy: setuptools writes build/ and *.egg-info beside the sources it installs)
+rm -rf "$out/pkg-src" && cp -r "$root/bindings-examples/python" "$out/pkg-src"
 "$venv/bin/python" -m pip install --quiet --no-build-isolation --no-index --no-deps \
-    "$root/bindings-examples/python"
+    "$out/pkg-src"
 "$venv/bin/python" -c "import gaskit, sys; assert 'site-packages' in gaskit.__file__, gaskit.__file__"
 
 # 3. pytest against the installed package, from a directory outside the source tree
