@@ -223,11 +223,25 @@ static void published_values(void **state) {
         assert_int_equal(gk_fluid_density_batch(GK_EOS_IDEAL, air, 1, pa, ta, ra, NULL), 1);
         assert_rel(ra[0], 1.2250, 1e-4);
     }
-    /* Peng-Robinson N2 at 200 bar, 20 degC (mpmath of the published equation), and the
-       reference equation of Span et al. (2000) within 3 % */
-    assert_int_equal(gk_fluid_z_batch(GK_EOS_PENG_ROBINSON, n2, 2, p, t, z, st), 2);
-    assert_rel(z[1], 1.0222019220100198, TOL_PR);
-    assert_rel(z[1], 1.04, 0.03);
+    /* Peng-Robinson N2 at 200 bar, 20 degC (mpmath of the published equation with the
+       constants of the header comment, held here so that a change of the gas table does not
+       move the check), and the reference equation of Span et al. (2000) within 3 % */
+    {
+        static const gk_gas n2_pr = { "nitrogen",
+                                      "N2",
+                                      { (gk_real)28.014e-3 },
+                                      { (gk_real)126.2 },
+                                      { (gk_real)3.398e6 },
+                                      (gk_real)0.037,
+                                      0,
+                                      0,
+                                      0,
+                                      0 };
+        const gk_fluid f = { &n2_pr, NULL, NULL };
+        assert_int_equal(gk_fluid_z_batch(GK_EOS_PENG_ROBINSON, f, 2, p, t, z, st), 2);
+        assert_rel(z[1], 1.0222019220100198, TOL_PR);
+        assert_rel(z[1], 1.04, 0.03);
+    }
     /* the mass flow of 1 L/s of ideal N2 at 0 degC, 101.325 kPa: M / 22.41396954 L/mol */
     {
         gk_real q[1] = { (gk_real)1e-3 }, w[1];
