@@ -192,4 +192,4 @@ def state(fluid, p, t, *, model=DEFAULT_MODEL, root="stable"):
     vm = float(r.molar_volume)
     return State(float(r.z), vm, f.molar_mass / vm, float(r.fugacity_coefficient),
                  tuple(float(r.z_roots[i]) for i in range(r.root_count)),
-                 "liquid" if r.branch == 2 else "gas")
+                 {1: "gas", 2: "liquid", 3: "supercritical"}.get(int(r.branch), "gas"))
