@@ -9,13 +9,15 @@
  * fails is recomputed element by element, through gk_ideal_density() for the elements outside
  * the bound (zero, negative, not finite, subnormal or extreme inputs).
  *
- * The fluid calls check the model and the fluid once per array, then give each element the
- * result and status of the scalar function (see batch.h).
+ * The fluid calls open the fluid once per array in the fluid layer (fluid.h: the model, the
+ * composition, the gas data and k_ij checked once), form once what every element shares (the
+ * molar mass, Z at the reference condition), and then give each element the result and status
+ * of the scalar function, with its formulas and its order of checks (see batch.h).
  */
 #include <stdbool.h>
 #include <stdint.h>
 #include "gk_scaled.h"
-#include "eos_internal.h"
+#include "fluid.h"
 
 /* Elements computed and checked together: small enough that a block recomputed after a failed
    check reads its inputs from the first level of cache, large enough to amortise the loop. */
@@ -68,9 +70,8 @@ static inline uint32_t real_key(gk_real x) {
    check; when it fails the caller recomputes the block element by element (the inputs are
    intact). Inlined with n = GK_BATCH_BLOCK for a full block, so that the trip count is a
    constant (compilers then vectorise it also at -O2, with no remainder loop). */
-static GK_ALWAYS_INLINE bool ideal_block(size_t n, const gk_real *restrict p,
-                                         const gk_real *restrict t, gk_real m, uint32_t key_lo,
-                                         uint32_t span, gk_real *restrict out) {
+static inline bool ideal_block(size_t n, const gk_real *restrict p, const gk_real *restrict t,
+                               gk_real m, uint32_t key_lo, uint32_t span, gk_real *restrict out) {
     size_t i;
     uint32_t worst = 0u;
     for (i = 0; i < n; ++i) {
@@ -202,90 +203,76 @@ typedef enum batch_op {
     BATCH_FLOW_TO_MASS
 } batch_op;
 
-/* One call: what every element shares, and the arrays. */
+/* One call: the fluid opened once, what every element shares, and the arrays. */
 typedef struct batch_job {
+    gk__fluid fluid;  /* checked once for the whole array */
+    gk_reference ref; /* the reference condition (contents, reference flow) */
+    gk_real m;        /* molar mass, kg/mol (density, contents, mass flow) */
+    gk_real z_ref;    /* Z at the reference condition (contents, reference flow) */
     batch_op op;
-    gk_eos eos;
-    gk_fluid fluid;
-    gk_reference ref;
-    gk_molar_mass m;   /* the mixture's molar mass (BATCH_DENSITY of a mixture only) */
-    const gk_real *x;  /* volumes or flows; NULL for density and Z */
-    const gk_real *p;  /* pressures, Pa */
-    const gk_real *t;  /* temperatures, K */
-    gk_real *out[3];   /* results; out[1], out[2] may be NULL */
-    gk_status *status; /* may be NULL */
+    gk_status m_status;     /* of the molar mass: for every element with valid readings */
+    gk_status z_ref_status; /* of Z at the reference: for every element whose own Z is found */
+    const gk_real *x;       /* volumes or flows; NULL for density and Z */
+    const gk_real *p;       /* pressures, Pa */
+    const gk_real *t;       /* temperatures, K */
+    gk_real *out[3];        /* results; out[1], out[2] may be NULL */
+    gk_status *status;      /* may be NULL */
 } batch_job;
 
-/* Density of a mixture at one state: M / Vm of the stable root. */
-static gk_status mixture_density(const batch_job *job, gk_pressure p, gk_temperature t,
-                                 gk_real *rho) {
-    gk_eos_result r;
+/* Density or Z at one state: the stable root (gas or liquid), as gk_eos_density() and
+   gk_fluid_z() compute them. */
+static gk_status element_root(const batch_job *job, gk_pressure p, gk_temperature t, gk_real *r) {
+    gk_eos_result e;
     gk_real d;
-    const gk_status s = gk_mixture_eos_solve(job->eos, job->fluid.mixture, job->fluid.kij, p, t,
-                                             GK_ROOT_STABLE, &r);
+    const gk_status s = gk__fluid_state(&job->fluid, p, t, GK_ROOT_STABLE, &e);
     if (s != GK_OK) { return s; }
-    d = job->m.kg_per_mol / r.molar_volume.m3_per_mol;
+    if (job->op == BATCH_Z) {
+        *r = e.z;
+        return GK_OK;
+    }
+    d = job->m / e.molar_volume.m3_per_mol;
     if (!gk_positive(d)) { return GK_ERR_RANGE; }
-    *rho = d;
+    *r = d;
     return GK_OK;
 }
 
-/* The scalar call of element i: x is its volume or flow (unused by density and Z); r[0..2]
-   receive the results on GK_OK. */
-static gk_status element_call(const batch_job *job, gk_real x, gk_pressure p, gk_temperature t,
-                              gk_real r[3]) {
-    gk_status s;
+/* Contents, reference flow or mass flow at one state, with the formulas and the order of
+   statuses of gk_vessel_contents(), gk_flow_to_reference() and gk_flow_to_mass(): the
+   readings, the molar mass, Z at (p, T), Z at the reference, the result. */
+static gk_status element_amount(const batch_job *job, gk_real x, gk_pressure p, gk_temperature t,
+                                gk_real r[3]) {
+    gk_real z = GK_LIT(1.0), factor = GK_LIT(1.0), n, rho;
+    const bool readings = ((job->op == BATCH_CONTENTS) ? gk_positive(x) : gk_finite(x)) &&
+                          gk_positive(p.pa) && gk_positive(t.k);
+    gk_status s = readings ? job->m_status : GK_ERR_DOMAIN;
+    if (s == GK_OK) { s = gk__fluid_gas_z(&job->fluid, p, t, &z); }
+    if (s == GK_OK) { s = job->z_ref_status; }
+    if (s != GK_OK) { return s; }
     switch (job->op) {
-        case BATCH_DENSITY:
-            if (job->fluid.gas != NULL) {
-                gk_density rho = { GK_LIT(0.0) };
-                s = gk_eos_density(job->eos, job->fluid.gas, p, t, &rho);
-                r[0] = rho.kg_per_m3;
-                return s;
-            }
-            return mixture_density(job, p, t, &r[0]);
-        case BATCH_Z:
-            return gk_fluid_z(job->eos, job->fluid, p, t, &r[0]);
-        case BATCH_CONTENTS: {
-            gk_contents c = { { GK_LIT(0.0) }, { GK_LIT(0.0) }, { GK_LIT(0.0) }, GK_LIT(0.0) };
-            gk_volume v;
-            v.m3 = x;
-            s = gk_vessel_contents(job->eos, job->fluid, v, p, t, job->ref, &c);
-            r[0] = c.amount.mol;
-            r[1] = c.mass.kg;
-            r[2] = c.reference_volume.m3;
-            return s;
-        }
-        case BATCH_FLOW_TO_REFERENCE: {
-            gk_volume_flow q, out = { GK_LIT(0.0) };
-            q.m3_per_s = x;
-            s = gk_flow_to_reference(job->eos, job->fluid, q, p, t, job->ref, &out);
-            r[0] = out.m3_per_s;
-            return s;
-        }
-        default: {
-            gk_volume_flow q;
-            gk_mass_flow w = { GK_LIT(0.0) };
-            q.m3_per_s = x;
-            s = gk_flow_to_mass(job->eos, job->fluid, q, p, t, &w);
-            r[0] = w.kg_per_s;
-            return s;
-        }
+        case BATCH_FLOW_TO_REFERENCE:
+            /* q_ref = q (p / p_ref)(T_ref / T)(Z_ref / Z) */
+            s = gk_reference_factor(p, t, z, job->ref, job->z_ref, &factor);
+            r[0] = x * factor;
+            return (s != GK_OK) ? s : gk_check_result(r[0]);
+        case BATCH_FLOW_TO_MASS:
+            /* w = q rho, rho = p M / (Z R T) */
+            rho = (p.pa / (z * GK_R * t.k)) * job->m;
+            r[0] = x * rho;
+            return (gk_positive(rho) && gk_finite(r[0])) ? GK_OK : GK_ERR_RANGE;
+        default:
+            /* n = p V / (Z R T), mass n M, reference volume n Z_ref R T_ref / p_ref */
+            n = (p.pa / (z * GK_R * t.k)) * x;
+            r[0] = n;
+            r[1] = n * job->m;
+            r[2] = n * (job->z_ref * GK_R * job->ref.t.k / job->ref.p.pa);
+            return (gk_positive(r[0]) && gk_positive(r[1]) && gk_positive(r[2])) ? GK_OK
+                                                                                 : GK_ERR_RANGE;
     }
 }
 
-/* Element i: reads its inputs, then writes its results (NaN on failure) and status, so an
-   output may be an input array (in place). 1 when its status is GK_OK, else 0. Kept out of
-   line: its frame and its callee's are not under the caller's loop (firmware stack). */
-static GK_NOINLINE size_t batch_element(const batch_job *job, size_t i) {
-    gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
-    gk_pressure p;
-    gk_temperature t;
-    gk_status s;
+/* Writes element i: its results (NaN on failure) and its status. 1 when the status is GK_OK. */
+static size_t element_put(const batch_job *job, size_t i, gk_status s, const gk_real r[3]) {
     int k;
-    p.pa = job->p[i];
-    t.k = job->t[i];
-    s = element_call(job, (job->x != NULL) ? job->x[i] : GK_LIT(0.0), p, t, r);
     for (k = 0; k < 3; ++k) {
         if (job->out[k] != NULL) { job->out[k][i] = (s == GK_OK) ? r[k] : GK_BATCH_NAN; }
     }
@@ -293,44 +280,87 @@ static GK_NOINLINE size_t batch_element(const batch_job *job, size_t i) {
     return (s == GK_OK) ? 1u : 0u;
 }
 
-/* The whole-array checks of a fluid call: the arrays, the model, exactly one of gas and
-   mixture, and for the density of a mixture its molar mass (into job->m). */
-static gk_status batch_prepare(batch_job *job, bool needs_x) {
-    if (job->p == NULL || job->t == NULL || job->out[0] == NULL || (needs_x && job->x == NULL)) {
-        return GK_ERR_ARGUMENT;
+/* The elements of a density or Z call. Each element's inputs are read before its outputs are
+   written, so an output may be an input array (in place). Returns the number of GK_OK. */
+static size_t run_roots(const batch_job *job, size_t count) {
+    size_t i, ok = 0;
+    for (i = 0; i < count; ++i) {
+        gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
+        gk_pressure p;
+        gk_temperature t;
+        p.pa = job->p[i];
+        t.k = job->t[i];
+        ok += element_put(job, i, element_root(job, p, t, &r[0]), r);
     }
-    if (!gk__eos_valid(job->eos)) { return GK_ERR_ARGUMENT; }
-    if ((job->fluid.gas == NULL) == (job->fluid.mixture == NULL)) { return GK_ERR_ARGUMENT; }
-    if (job->op == BATCH_DENSITY && job->fluid.mixture != NULL) {
-        return gk_mixture_molar_mass(job->fluid.mixture, &job->m);
+    return ok;
+}
+
+/* The elements of a contents or flow call, as run_roots(). */
+static size_t run_amounts(const batch_job *job, size_t count) {
+    size_t i, ok = 0;
+    for (i = 0; i < count; ++i) {
+        gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
+        gk_pressure p;
+        gk_temperature t;
+        p.pa = job->p[i];
+        t.k = job->t[i];
+        ok += element_put(job, i, element_amount(job, job->x[i], p, t, r), r);
+    }
+    return ok;
+}
+
+/* What the whole array shares, once: the molar mass (density, contents, mass flow) and Z at
+   the reference condition (contents, reference flow). A reference that is not physical fails
+   every element (GK_ERR_DOMAIN, as the scalar call), and so does a molar mass that is not
+   valid for the density (the scalar call checks it before the state); other statuses are kept
+   for the elements, which report them in the scalar call's order. */
+static gk_status batch_shared(batch_job *job) {
+    const bool uses_ref = job->op == BATCH_CONTENTS || job->op == BATCH_FLOW_TO_REFERENCE;
+    if (uses_ref && (!gk_positive(job->ref.p.pa) || !gk_positive(job->ref.t.k))) {
+        return GK_ERR_DOMAIN;
+    }
+    if (job->op != BATCH_Z && job->op != BATCH_FLOW_TO_REFERENCE) {
+        job->m_status = gk__fluid_molar_mass(&job->fluid, &job->m);
+    }
+    if (job->op == BATCH_DENSITY) { return job->m_status; }
+    if (uses_ref) {
+        job->z_ref_status = gk__fluid_gas_z(&job->fluid, job->ref.p, job->ref.t, &job->z_ref);
     }
     return GK_OK;
 }
 
-/* Checks the arrays and the job, then runs the elements (or fails them all). */
-static GK_ALWAYS_INLINE size_t batch_run(batch_job *job, size_t count, bool needs_x) {
-    size_t i, ok = 0;
-    gk_status s;
-    if (count == 0u) { return 0; }
-    s = batch_prepare(job, needs_x);
-    if (s != GK_OK) {
-        return fail_all(count, s, job->out[0], job->out[1], job->out[2], job->status);
+/* Opens the fluid and checks the arrays and what the elements share. True when the elements
+   are to be run; false when there are none or all fail (then written here with the status of
+   the first check that failed). The elements run in run_roots() or run_amounts(), called by
+   the public function itself: neither loop's frame lies under the other's callees. */
+static bool batch_open(batch_job *job, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
+                       const gk_real *kij, size_t count) {
+    gk_status s = GK_OK;
+    const bool needs_x = job->op != BATCH_DENSITY && job->op != BATCH_Z;
+    if (count == 0u) { return false; }
+    if (job->p == NULL || job->t == NULL || job->out[0] == NULL || (needs_x && job->x == NULL)) {
+        s = GK_ERR_ARGUMENT;
     }
-    for (i = 0; i < count; ++i) { ok += batch_element(job, i); }
-    return ok;
+    if (s == GK_OK) { s = gk__fluid_init(&job->fluid, eos, gas, mix, kij); }
+    if (s == GK_OK) { s = batch_shared(job); }
+    if (s != GK_OK) {
+        (void)fail_all(count, s, job->out[0], job->out[1], job->out[2], job->status);
+        return false;
+    }
+    return true;
 }
 
-/* A job with the given operation, model, fluid, inputs (x may be NULL) and first output; no
-   reference condition, no further outputs. */
-static GK_ALWAYS_INLINE void batch_job_init(batch_job *job, batch_op op, gk_eos eos, gk_fluid fluid,
-                                            const gk_real *x, const gk_real *p, const gk_real *t,
-                                            gk_real *out, gk_status *status) {
+/* A job with the given operation, inputs (x may be NULL) and first output; no reference
+   condition, no further outputs. */
+static void batch_job_init(batch_job *job, batch_op op, const gk_real *x, const gk_real *p,
+                           const gk_real *t, gk_real *out, gk_status *status) {
     job->op = op;
-    job->eos = eos;
-    job->fluid = fluid;
     job->ref.p.pa = GK_LIT(0.0);
     job->ref.t.k = GK_LIT(0.0);
-    job->m.kg_per_mol = GK_LIT(0.0);
+    job->m = GK_LIT(0.0);
+    job->z_ref = GK_LIT(1.0);
+    job->m_status = GK_OK;
+    job->z_ref_status = GK_OK;
     job->x = x;
     job->p = p;
     job->t = t;
@@ -343,26 +373,25 @@ static GK_ALWAYS_INLINE void batch_job_init(batch_job *job, batch_op op, gk_eos 
 size_t gk_fluid_density_batch(gk_eos eos, gk_fluid fluid, size_t count, const gk_real *p_pa,
                               const gk_real *t_k, gk_real *out_kg_per_m3, gk_status *status_out) {
     batch_job job;
-    batch_job_init(&job, BATCH_DENSITY, eos, fluid, NULL, p_pa, t_k, out_kg_per_m3, status_out);
-    return batch_run(&job, count, false);
+    batch_job_init(&job, BATCH_DENSITY, NULL, p_pa, t_k, out_kg_per_m3, status_out);
+    if (!batch_open(&job, eos, fluid.gas, fluid.mixture, fluid.kij, count)) { return 0; }
+    return run_roots(&job, count);
 }
 
 size_t gk_eos_density_batch(gk_eos eos, const gk_gas *gas, size_t count, const gk_real *p_pa,
                             const gk_real *t_k, gk_real *out_kg_per_m3, gk_status *status_out) {
     batch_job job;
-    gk_fluid fluid;
-    fluid.gas = gas;
-    fluid.mixture = NULL;
-    fluid.kij = NULL;
-    batch_job_init(&job, BATCH_DENSITY, eos, fluid, NULL, p_pa, t_k, out_kg_per_m3, status_out);
-    return batch_run(&job, count, false);
+    batch_job_init(&job, BATCH_DENSITY, NULL, p_pa, t_k, out_kg_per_m3, status_out);
+    if (!batch_open(&job, eos, gas, NULL, NULL, count)) { return 0; }
+    return run_roots(&job, count);
 }
 
 size_t gk_fluid_z_batch(gk_eos eos, gk_fluid fluid, size_t count, const gk_real *p_pa,
                         const gk_real *t_k, gk_real *out_z, gk_status *status_out) {
     batch_job job;
-    batch_job_init(&job, BATCH_Z, eos, fluid, NULL, p_pa, t_k, out_z, status_out);
-    return batch_run(&job, count, false);
+    batch_job_init(&job, BATCH_Z, NULL, p_pa, t_k, out_z, status_out);
+    if (!batch_open(&job, eos, fluid.gas, fluid.mixture, fluid.kij, count)) { return 0; }
+    return run_roots(&job, count);
 }
 
 size_t gk_vessel_contents_batch(gk_eos eos, gk_fluid fluid, gk_reference ref, size_t count,
@@ -370,11 +399,12 @@ size_t gk_vessel_contents_batch(gk_eos eos, gk_fluid fluid, gk_reference ref, si
                                 gk_real *out_mol, gk_real *out_kg, gk_real *out_reference_m3,
                                 gk_status *status_out) {
     batch_job job;
-    batch_job_init(&job, BATCH_CONTENTS, eos, fluid, v_m3, p_pa, t_k, out_mol, status_out);
+    batch_job_init(&job, BATCH_CONTENTS, v_m3, p_pa, t_k, out_mol, status_out);
     job.ref = ref;
     job.out[1] = out_kg;
     job.out[2] = out_reference_m3;
-    return batch_run(&job, count, true);
+    if (!batch_open(&job, eos, fluid.gas, fluid.mixture, fluid.kij, count)) { return 0; }
+    return run_amounts(&job, count);
 }
 
 size_t gk_flow_to_reference_batch(gk_eos eos, gk_fluid fluid, gk_reference ref, size_t count,
@@ -382,17 +412,17 @@ size_t gk_flow_to_reference_batch(gk_eos eos, gk_fluid fluid, gk_reference ref, 
                                   const gk_real *t_k, gk_real *out_m3_per_s,
                                   gk_status *status_out) {
     batch_job job;
-    batch_job_init(&job, BATCH_FLOW_TO_REFERENCE, eos, fluid, q_m3_per_s, p_pa, t_k, out_m3_per_s,
-                   status_out);
+    batch_job_init(&job, BATCH_FLOW_TO_REFERENCE, q_m3_per_s, p_pa, t_k, out_m3_per_s, status_out);
     job.ref = ref;
-    return batch_run(&job, count, true);
+    if (!batch_open(&job, eos, fluid.gas, fluid.mixture, fluid.kij, count)) { return 0; }
+    return run_amounts(&job, count);
 }
 
 size_t gk_flow_to_mass_batch(gk_eos eos, gk_fluid fluid, size_t count, const gk_real *q_m3_per_s,
                              const gk_real *p_pa, const gk_real *t_k, gk_real *out_kg_per_s,
                              gk_status *status_out) {
     batch_job job;
-    batch_job_init(&job, BATCH_FLOW_TO_MASS, eos, fluid, q_m3_per_s, p_pa, t_k, out_kg_per_s,
-                   status_out);
-    return batch_run(&job, count, true);
+    batch_job_init(&job, BATCH_FLOW_TO_MASS, q_m3_per_s, p_pa, t_k, out_kg_per_s, status_out);
+    if (!batch_open(&job, eos, fluid.gas, fluid.mixture, fluid.kij, count)) { return 0; }
+    return run_amounts(&job, count);
 }

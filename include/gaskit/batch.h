@@ -14,7 +14,9 @@
  * - A NULL input array or a NULL (required) output array with a count above 0 fails every
  *   element with GK_ERR_ARGUMENT; nothing is ever written through a NULL pointer.
  * - Whole-array arguments (the model, the fluid, a reference condition, a molar mass) that are
- *   invalid fail every element with the status the scalar function gives for them.
+ *   invalid fail every element with the status the scalar function gives for them. The fluid
+ *   is checked once per array, and what every element shares (the molar mass, Z at the
+ *   reference condition) is computed once, with the scalar call's result.
  * - An output array may be the same array as an input array (computation in place); other
  *   partial overlaps of arrays are not allowed.
  * - The calls are reentrant and thread-safe (no state); they never allocate.
@@ -74,9 +76,9 @@ GK_API size_t gk_eos_density_batch(gk_eos eos, const gk_gas *gas, size_t count, 
  *        molar volume of the stable root of @p eos (gas or liquid, as gk_fluid_z()) and M the
  *        molar mass of the gas or the mixture (sum x_j M_j).
  *
- * For a gas each element is gk_eos_density(). For a mixture each element is
- * gk_mixture_eos_solve() with GK_ROOT_STABLE and M / Vm, with M from gk_mixture_molar_mass()
- * once per array (its failure fails every element with its status).
+ * For a gas each element is gk_eos_density(). For a mixture each element is the stable root of
+ * gk_mixture_eos_solve() and M / Vm; the mixture's M is formed once per array (GK_ERR_RANGE for
+ * every element when it underflows to 0).
  * @retval per element As gk_fluid_z(); GK_ERR_DOMAIN for a molar mass not finite or not > 0;
  *         GK_ERR_RANGE for a density that is not finite and > 0.
  * @return Number of elements with status GK_OK.

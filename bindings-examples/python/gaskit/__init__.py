@@ -38,7 +38,7 @@ from ._native import STATUS_NAMES, LibraryError, load, native
 from .errors import (ArgumentError, CompositionError, DomainError, GaskitError, NoSolutionError,
                      NotFoundError, ParseError, RangeError)
 
-__version__ = "0.1.0"
+__version__ = "0.2.0"
 
 __all__ = [
     "density", "z", "contents", "flow_to_reference", "mass_flow", "dry_gas_pressure",
@@ -65,7 +65,7 @@ class State(NamedTuple):
     density: float               #: kg/m3
     fugacity_coefficient: float  #: of the returned root (of the mixture as a whole)
     roots: tuple                 #: every real root of Z above the covolume, ascending
-    branch: str                  #: "gas" or "liquid"
+    branch: str                  #: "gas", "liquid" or "supercritical" (a lone root above Tc)
 
 
 def _one(result):
