@@ -37,7 +37,7 @@ rm -rf "$out/pkg-src" && cp -r "$root/bindings-examples/python" "$out/pkg-src"
 # 3. pytest against the installed package, from a directory outside the source tree
 export GASKIT_LIBRARY=$out/libgaskit.so
 export GASKIT_FLOAT_LIBRARY=$out-f/libgaskit.so
-cp -r "$root/bindings-examples/python/tests" "$out/pytests"
+rm -rf "$out/pytests" && cp -r "$root/bindings-examples/python/tests" "$out/pytests"
 run_pytest() {
   local rc=0
   (cd "$out" && "$venv/bin/python" -m pytest -q -p no:cacheprovider pytests "$@") || rc=$?
