@@ -29,7 +29,7 @@ weighed, not judged by pressure.
 """
 
 import ctypes
-from typing import NamedTuple
+from typing import NamedTuple, Optional
 
 from . import _core, arrays, errors
 from ._core import (DEFAULT_MODEL, BuildInfo, Fluid, Gas, Model, Reference, build_info, convert,
@@ -66,6 +66,7 @@ class State(NamedTuple):
     fugacity_coefficient: float  #: of the returned root (of the mixture as a whole)
     roots: tuple                 #: every real root of Z above the covolume, ascending
     branch: str                  #: "gas", "liquid" or "supercritical" (a lone root above Tc)
+    model: Optional[Model]       #: the model that served (with Model.BEST, the one it chose)
 
 
 def _one(result):
@@ -182,6 +183,7 @@ def state(fluid, p, t, *, model=DEFAULT_MODEL, root="stable"):
     tk = quantity(t, "temperature", argument="t")
     n = native()
     r = n.EosResult()
+    r.model = -1  # stays -1 with a library whose result has no model field
     st = f.struct
     if f.is_mixture:
         s = n.mixture_eos_solve(m, st.mixture, st.kij, pa, tk, roots[root], ctypes.byref(r))
@@ -192,4 +194,5 @@ def state(fluid, p, t, *, model=DEFAULT_MODEL, root="stable"):
     vm = float(r.molar_volume)
     return State(float(r.z), vm, f.molar_mass / vm, float(r.fugacity_coefficient),
                  tuple(float(r.z_roots[i]) for i in range(r.root_count)),
-                 {1: "gas", 2: "liquid", 3: "supercritical"}.get(int(r.branch), "gas"))
+                 {1: "gas", 2: "liquid", 3: "supercritical"}.get(int(r.branch), "gas"),
+                 _core.model_or_none(int(r.model)) if r.model >= 0 else None)

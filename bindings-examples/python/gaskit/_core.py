@@ -78,6 +78,14 @@ _MODEL_NAMES = {
 DEFAULT_MODEL = Model.PENG_ROBINSON
 
 
+def model_or_none(value):
+    """The :class:`Model` with that value, or None for a value this package does not know."""
+    try:
+        return Model(value)
+    except ValueError:
+        return None
+
+
 def model(spec):
     """A :class:`Model` from a member, its int value, or a name such as ``"pr"`` or
     ``"Peng-Robinson"`` (case, spaces and underscores do not matter)."""

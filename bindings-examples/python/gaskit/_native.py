@@ -124,8 +124,12 @@ class Native:
             _fields_ = [("p", real), ("t", real)]
 
         class EosResult(ctypes.Structure):
+            # gk_eos_result; "model" (the model that served) is the last field of libraries
+            # with the reference-grade models. The spare tail keeps a later, longer struct
+            # from being written past this buffer.
             _fields_ = [("z", real), ("molar_volume", real), ("fugacity_coefficient", real),
-                        ("root_count", c_int), ("z_roots", real * 3), ("branch", c_int)]
+                        ("root_count", c_int), ("z_roots", real * 3), ("branch", c_int),
+                        ("model", c_int), ("_spare", ctypes.c_double * 4)]
 
         self.Gas, self.Mixture, self.Fluid = Gas, Mixture, Fluid
         self.Reference, self.EosResult = Reference, EosResult
