@@ -14,7 +14,7 @@
  *   Liquids, 5th ed., Appendix A), evaluated independently with mpmath at 30 digits:
  *   Z(200 bar, 293.15 K) = 1.02220192201002.
  * - Span, Lemmon, Jacobsen, Wagner and Yokozeki, J. Phys. Chem. Ref. Data 29 (2000) 1361
- *   (nitrogen reference equation): Z(200 bar, 293.15 K) is about 1.04 (from memory); the
+ *   (nitrogen reference equation): Z(200 bar, 293.15 K) is about 1.05 (from memory); the
  *   Peng-Robinson value must lie within the 3 % the README states for simple gases.
  *
  * Float tolerances: a Peng-Robinson Z in binary32 is good to a few 1e-6 (2e-5 used); ideal-gas
@@ -240,7 +240,7 @@ static void published_values(void **state) {
         const gk_fluid f = { &n2_pr, NULL, NULL };
         assert_int_equal(gk_fluid_z_batch(GK_EOS_PENG_ROBINSON, f, 2, p, t, z, st), 2);
         assert_rel(z[1], 1.0222019220100198, TOL_PR);
-        assert_rel(z[1], 1.04, 0.03);
+        assert_rel(z[1], 1.05, 0.03);
     }
     /* the mass flow of 1 L/s of ideal N2 at 0 degC, 101.325 kPa: M / 22.41396954 L/mol */
     {

@@ -2,7 +2,8 @@
 """Cost of gaskit.arrays per element, beside the C batch call it wraps.
 
 1. 10^6 densities of an invented fuel gas (the mixture of bench/bench_batch.c) under each
-   model given (default Peng-Robinson) through gaskit.arrays.density, in ns per element; beside
+   model given (default Peng-Robinson; "pr,best" adds the reference-grade model) through
+   gaskit.arrays.density, in ns per element; beside
    it the C batch call gk_fluid_density_batch timed by bench_batch (C, when --c-bench names the
    program) and the same C call made through ctypes without the package's wrapper.
 2. The Python overhead per call: the time of gaskit.arrays.density at 1, 10^3, 10^4 and 10^6
@@ -28,6 +29,8 @@ import gaskit  # noqa: E402
 from gaskit._native import native  # noqa: E402
 
 FUEL = "CH4=0.90, C2H6=0.05, C3H8=0.01, N2=0.025, CO2=0.015"  # invented, as bench_batch.c
+# the labels bench_batch prints
+LABELS = {gaskit.Model.PENG_ROBINSON: "Peng-Robinson", gaskit.Model.BEST: "Reference-grade"}
 
 
 def best_of(fn, repeats):
@@ -73,14 +76,18 @@ def main():
     nat = native()
     for name in args.models.split(","):
         model = gaskit.model(name)
-        r = gaskit.arrays.density(fuel, p, t, model=model)
+        try:
+            r = gaskit.arrays.density(fuel, p, t, model=model)
+        except gaskit.ArgumentError:
+            print("%s: not in this library" % model.name)
+            continue
         secs = best_of(lambda: gaskit.arrays.density(fuel, p, t, model=model), 3)
         out = np.empty_like(p)
         st = np.empty(p.size, dtype=np.intc)
         raw = best_of(lambda: nat.fluid_density_batch(int(model), fuel.struct, p.size,
                                                       p.ctypes.data, t.ctypes.data,
                                                       out.ctypes.data, st.ctypes.data), 3)
-        label = model.name.replace("_", "-").title().replace("Van-Der-Waals", "van der Waals")
+        label = LABELS.get(model, model.name.replace("_", "-").title())
         c_txt = next((" C batch (bench_batch) %.1f ns," % v for k, v in c_ns.items()
                       if k.lower() == label.lower()), "")
         print("%s density of a 5-component mixture, %d elements: Python gaskit.arrays %.1f ns "

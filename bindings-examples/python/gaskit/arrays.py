@@ -150,7 +150,13 @@ def _raise_first(status, named, what=None):
     raise _core.element_error(s, inputs, index, what)
 
 
-def _finish(result, errors, named, what):
+def _finish(result, errors, named, what, model=None):
+    st = result.status
+    if model is not None and st.size and int(st.flat[0]) == 1 and np.all(st == 1):
+        # Every element GK_ERR_ARGUMENT: the arrays are never NULL from here and the fluid was
+        # checked, so the library does not know the model (one built without it, or older).
+        raise _errors.ArgumentError("the loaded library has no model %s" % model.name, "model",
+                                    model.name)
     if errors == "raise":
         _raise_first(result.status, named, what)
     elif errors != "nan":
@@ -159,7 +165,7 @@ def _finish(result, errors, named, what):
 
 
 def _fluid_model(fluid, model):
-    return _core.fluid(fluid), int(_core.model(model))
+    return _core.fluid(fluid), _core.model(model)
 
 
 def density(fluid, p, t, *, model=_core.DEFAULT_MODEL, p_unit=None, t_unit=None, unit=None,
@@ -180,10 +186,10 @@ def density(fluid, p, t, *, model=_core.DEFAULT_MODEL, p_unit=None, t_unit=None,
     (pa, tk), shape = _inputs([("p", p, p_unit, "pressure"), ("t", t, t_unit, "temperature")])
     n = pa.size
     out, st = _empty(n), np.empty(n, dtype=np.intc)
-    native().fluid_density_batch(m, f.struct, n, pa.ctypes.data, tk.ctypes.data,
+    native().fluid_density_batch(int(m), f.struct, n, pa.ctypes.data, tk.ctypes.data,
                                  out.ctypes.data, st.ctypes.data)
     r = ArrayResult(_out_unit(out, unit, "density").reshape(shape), st.reshape(shape))
-    return _finish(r, errors, [("p", pa), ("t", tk)], "the density")
+    return _finish(r, errors, [("p", pa), ("t", tk)], "the density", m)
 
 
 def z(fluid, p, t, *, model=_core.DEFAULT_MODEL, p_unit=None, t_unit=None, errors="nan"):
@@ -195,10 +201,10 @@ def z(fluid, p, t, *, model=_core.DEFAULT_MODEL, p_unit=None, t_unit=None, error
     (pa, tk), shape = _inputs([("p", p, p_unit, "pressure"), ("t", t, t_unit, "temperature")])
     n = pa.size
     out, st = _empty(n), np.empty(n, dtype=np.intc)
-    native().fluid_z_batch(m, f.struct, n, pa.ctypes.data, tk.ctypes.data, out.ctypes.data,
+    native().fluid_z_batch(int(m), f.struct, n, pa.ctypes.data, tk.ctypes.data, out.ctypes.data,
                            st.ctypes.data)
     return _finish(ArrayResult(out.reshape(shape), st.reshape(shape)), errors,
-                   [("p", pa), ("t", tk)], "Z")
+                   [("p", pa), ("t", tk)], "Z", m)
 
 
 def contents(fluid, volume, p, t, *, reference, model=_core.DEFAULT_MODEL, volume_unit=None,
@@ -220,12 +226,12 @@ def contents(fluid, volume, p, t, *, reference, model=_core.DEFAULT_MODEL, volum
     n = pa.size
     amt, mass, vref = _empty(n), _empty(n), _empty(n)
     st = np.empty(n, dtype=np.intc)
-    nat.vessel_contents_batch(m, f.struct, nat.Reference(ref.p, ref.t), n, v.ctypes.data,
+    nat.vessel_contents_batch(int(m), f.struct, nat.Reference(ref.p, ref.t), n, v.ctypes.data,
                               pa.ctypes.data, tk.ctypes.data, amt.ctypes.data,
                               mass.ctypes.data, vref.ctypes.data, st.ctypes.data)
     r = ContentsArrays(amt.reshape(shape), mass.reshape(shape), vref.reshape(shape),
                        st.reshape(shape))
-    return _finish(r, errors, [("volume", v), ("p", pa), ("t", tk)], "the vessel contents")
+    return _finish(r, errors, [("volume", v), ("p", pa), ("t", tk)], "the vessel contents", m)
 
 
 def amount(fluid, volume, p, t, *, model=_core.DEFAULT_MODEL, volume_unit=None, p_unit=None,
@@ -255,11 +261,11 @@ def flow_to_reference(fluid, flow, p, t, *, reference, model=_core.DEFAULT_MODEL
     nat = native()
     n = pa.size
     out, st = _empty(n), np.empty(n, dtype=np.intc)
-    nat.flow_to_reference_batch(m, f.struct, nat.Reference(ref.p, ref.t), n, q.ctypes.data,
+    nat.flow_to_reference_batch(int(m), f.struct, nat.Reference(ref.p, ref.t), n, q.ctypes.data,
                                 pa.ctypes.data, tk.ctypes.data, out.ctypes.data,
                                 st.ctypes.data)
     r = ArrayResult(_out_unit(out, unit, "volume flow").reshape(shape), st.reshape(shape))
-    return _finish(r, errors, [("flow", q), ("p", pa), ("t", tk)], "the reference flow")
+    return _finish(r, errors, [("flow", q), ("p", pa), ("t", tk)], "the reference flow", m)
 
 
 def mass_flow(fluid, flow, p, t, *, model=_core.DEFAULT_MODEL, flow_unit=None, p_unit=None,
@@ -275,10 +281,10 @@ def mass_flow(fluid, flow, p, t, *, model=_core.DEFAULT_MODEL, flow_unit=None, p
                                   ("t", t, t_unit, "temperature")])
     n = pa.size
     out, st = _empty(n), np.empty(n, dtype=np.intc)
-    native().flow_to_mass_batch(m, f.struct, n, q.ctypes.data, pa.ctypes.data, tk.ctypes.data,
+    native().flow_to_mass_batch(int(m), f.struct, n, q.ctypes.data, pa.ctypes.data, tk.ctypes.data,
                                 out.ctypes.data, st.ctypes.data)
     r = ArrayResult(_out_unit(out, unit, "mass flow").reshape(shape), st.reshape(shape))
-    return _finish(r, errors, [("flow", q), ("p", pa), ("t", tk)], "the mass flow")
+    return _finish(r, errors, [("flow", q), ("p", pa), ("t", tk)], "the mass flow", m)
 
 
 def dry_gas_pressure(p, t, relative_humidity, *, p_unit=None, t_unit=None, unit=None,
