@@ -333,15 +333,16 @@ static gk_status batch_shared(batch_job *job) {
    are to be run; false when there are none or all fail (then written here with the status of
    the first check that failed). The elements run in run_roots() or run_amounts(), called by
    the public function itself: neither loop's frame lies under the other's callees. */
-static bool batch_open(batch_job *job, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
-                       const gk_real *kij, size_t count) {
+static bool batch_open(batch_job *job, gk_eos eos, const gk_fluid *fluid, size_t count) {
     gk_status s = GK_OK;
     const bool needs_x = job->op != BATCH_DENSITY && job->op != BATCH_Z;
     if (count == 0u) { return false; }
     if (job->p == NULL || job->t == NULL || job->out[0] == NULL || (needs_x && job->x == NULL)) {
         s = GK_ERR_ARGUMENT;
     }
-    if (s == GK_OK) { s = gk__fluid_init(&job->fluid, eos, gas, mix, kij); }
+    if (s == GK_OK) {
+        s = gk__fluid_init(&job->fluid, eos, fluid->gas, fluid->mixture, fluid->kij);
+    }
     if (s == GK_OK) { s = batch_shared(job); }
     if (s != GK_OK) {
         (void)fail_all(count, s, job->out[0], job->out[1], job->out[2], job->status);
@@ -374,15 +375,19 @@ size_t gk_fluid_density_batch(gk_eos eos, gk_fluid fluid, size_t count, const gk
                               const gk_real *t_k, gk_real *out_kg_per_m3, gk_status *status_out) {
     batch_job job;
     batch_job_init(&job, BATCH_DENSITY, NULL, p_pa, t_k, out_kg_per_m3, status_out);
-    if (!batch_open(&job, eos, fluid.gas, fluid.mixture, fluid.kij, count)) { return 0; }
+    if (!batch_open(&job, eos, &fluid, count)) { return 0; }
     return run_roots(&job, count);
 }
 
 size_t gk_eos_density_batch(gk_eos eos, const gk_gas *gas, size_t count, const gk_real *p_pa,
                             const gk_real *t_k, gk_real *out_kg_per_m3, gk_status *status_out) {
     batch_job job;
+    gk_fluid fluid;
+    fluid.gas = gas;
+    fluid.mixture = NULL;
+    fluid.kij = NULL;
     batch_job_init(&job, BATCH_DENSITY, NULL, p_pa, t_k, out_kg_per_m3, status_out);
-    if (!batch_open(&job, eos, gas, NULL, NULL, count)) { return 0; }
+    if (!batch_open(&job, eos, &fluid, count)) { return 0; }
     return run_roots(&job, count);
 }
 
@@ -390,7 +395,7 @@ size_t gk_fluid_z_batch(gk_eos eos, gk_fluid fluid, size_t count, const gk_real 
                         const gk_real *t_k, gk_real *out_z, gk_status *status_out) {
     batch_job job;
     batch_job_init(&job, BATCH_Z, NULL, p_pa, t_k, out_z, status_out);
-    if (!batch_open(&job, eos, fluid.gas, fluid.mixture, fluid.kij, count)) { return 0; }
+    if (!batch_open(&job, eos, &fluid, count)) { return 0; }
     return run_roots(&job, count);
 }
 
@@ -403,7 +408,7 @@ size_t gk_vessel_contents_batch(gk_eos eos, gk_fluid fluid, gk_reference ref, si
     job.ref = ref;
     job.out[1] = out_kg;
     job.out[2] = out_reference_m3;
-    if (!batch_open(&job, eos, fluid.gas, fluid.mixture, fluid.kij, count)) { return 0; }
+    if (!batch_open(&job, eos, &fluid, count)) { return 0; }
     return run_amounts(&job, count);
 }
 
@@ -414,7 +419,7 @@ size_t gk_flow_to_reference_batch(gk_eos eos, gk_fluid fluid, gk_reference ref, 
     batch_job job;
     batch_job_init(&job, BATCH_FLOW_TO_REFERENCE, q_m3_per_s, p_pa, t_k, out_m3_per_s, status_out);
     job.ref = ref;
-    if (!batch_open(&job, eos, fluid.gas, fluid.mixture, fluid.kij, count)) { return 0; }
+    if (!batch_open(&job, eos, &fluid, count)) { return 0; }
     return run_amounts(&job, count);
 }
 
@@ -423,6 +428,6 @@ size_t gk_flow_to_mass_batch(gk_eos eos, gk_fluid fluid, size_t count, const gk_
                              gk_status *status_out) {
     batch_job job;
     batch_job_init(&job, BATCH_FLOW_TO_MASS, q_m3_per_s, p_pa, t_k, out_kg_per_s, status_out);
-    if (!batch_open(&job, eos, fluid.gas, fluid.mixture, fluid.kij, count)) { return 0; }
+    if (!batch_open(&job, eos, &fluid, count)) { return 0; }
     return run_amounts(&job, count);
 }

@@ -38,7 +38,7 @@ from ._native import STATUS_NAMES, LibraryError, load, native
 from .errors import (ArgumentError, CompositionError, DomainError, GaskitError, NoSolutionError,
                      NotFoundError, ParseError, RangeError)
 
-__version__ = "0.2.0"
+from ._native import PACKAGE_VERSION as __version__  # noqa: E402
 
 __all__ = [
     "density", "z", "contents", "flow_to_reference", "mass_flow", "dry_gas_pressure",

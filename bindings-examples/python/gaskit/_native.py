@@ -6,7 +6,7 @@ The library is looked for, in this order:
 2. the environment variable ``GASKIT_LIBRARY`` (a file path);
 3. a ``libgaskit.so*`` (``libgaskit.dylib``, ``gaskit.dll``) placed next to this package;
 4. the dynamic loader's usual search path (``LD_LIBRARY_PATH``, the ldconfig cache, ...),
-   as ``libgaskit.so.0`` and through :func:`ctypes.util.find_library`.
+   as ``libgaskit.so.0.2`` (the SONAME of 0.2) and through :func:`ctypes.util.find_library`.
 
 After loading, ``gk_version()`` and ``gk_build_flags()`` are checked against what this package
 was written for; a mismatch raises :class:`gaskit.LibraryError` naming the file and the reason.
@@ -19,10 +19,13 @@ import os
 import sys
 import threading
 
-# The C library this package was written for: major version 0, minor version 1 or later
-# (the batch calls of batch.h), and the build-flag bits it understands.
+# The C library this package was written for, and the build-flag bits it understands. In the
+# 0.x series a minor release may change the ABI (the SONAME is libgaskit.so.0.MINOR), so a 0.x
+# library must have exactly this minor version; from 1.0 on, the same major and at least this
+# minor.
 EXPECTED_MAJOR = 0
-MINIMUM_MINOR = 1
+EXPECTED_MINOR = 2
+PACKAGE_VERSION = "0.2.0"
 GK_BUILD_FLOAT = 0x1
 KNOWN_FLAGS = GK_BUILD_FLOAT
 
@@ -86,10 +89,13 @@ class Native:
         except ValueError:
             raise LibraryError("%s reports an unreadable version %r"
                                % (self.path, self.version)) from None
-        if major != EXPECTED_MAJOR or minor < MINIMUM_MINOR:
+        fits = major == EXPECTED_MAJOR and (minor == EXPECTED_MINOR if major == 0
+                                            else minor >= EXPECTED_MINOR)
+        if not fits:
             raise LibraryError(
-                "%s is libgaskit %s; this package needs %d.%d or a later %d.x"
-                % (self.path, self.version, EXPECTED_MAJOR, MINIMUM_MINOR, EXPECTED_MAJOR))
+                "%s is libgaskit %s; this package (gaskit %s) needs libgaskit %d.%d: install "
+                "the library and the package from the same source tree"
+                % (self.path, self.version, PACKAGE_VERSION, EXPECTED_MAJOR, EXPECTED_MINOR))
         if self.flags & ~KNOWN_FLAGS:
             raise LibraryError("%s (libgaskit %s) has build flags 0x%x that this package does "
                                "not know (it knows 0x%x): update the package"
@@ -188,11 +194,12 @@ def _candidates():
         for path in sorted(glob.glob(os.path.join(here, pattern))):
             yield path
     if sys.platform == "darwin":
-        yield "libgaskit.0.dylib"
+        yield "libgaskit.%d.dylib" % EXPECTED_MAJOR
     elif sys.platform == "win32":
         yield "gaskit.dll"
     else:
-        yield "libgaskit.so.0"
+        yield "libgaskit.so.%d.%d" % (EXPECTED_MAJOR, EXPECTED_MINOR)  # the SONAME of 0.x
+        yield "libgaskit.so.%d" % EXPECTED_MAJOR
     found = ctypes.util.find_library("gaskit")
     if found:
         yield found

@@ -44,10 +44,13 @@ def test_a_library_that_is_not_gaskit():
 
 def test_version_check(monkeypatch):
     lib = gaskit.load()
-    monkeypatch.setattr(lib, "version", "1.0.0")
-    with pytest.raises(gaskit.LibraryError, match="needs 0.1"):
-        lib._check_version([])
-    monkeypatch.setattr(lib, "version", "0.1.0")
+    for other in ("1.0.0", "0.1.0", "0.3.0"):  # 0.x: exactly the minor version (ABI)
+        monkeypatch.setattr(lib, "version", other)
+        with pytest.raises(gaskit.LibraryError, match="needs libgaskit 0.2"):
+            lib._check_version([])
+    monkeypatch.setattr(lib, "version", "0.2.1")
+    lib._check_version([])  # a patch release fits
+    monkeypatch.setattr(lib, "version", "0.2.0")
     monkeypatch.setattr(lib, "flags", 0x80)
     with pytest.raises(gaskit.LibraryError, match="build flags"):
         lib._check_version([])
