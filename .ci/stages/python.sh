@@ -16,7 +16,7 @@ cd "$(dirname "$0")/../.."
 root=$PWD
 py=/usr/bin/python3
 out=$root/build-python
-rows=${GASKIT_FLEET_ROWS:-300000}
+rows=${GASKIT_FLEET_ROWS:-1000000}
 
 cmake -B "$out" -DCMAKE_BUILD_TYPE=Release -DGASKIT_TESTS=OFF -DGASKIT_EXAMPLES=OFF
 cmake --build "$out" -j2 --target gaskit_shared bench_batch
@@ -58,7 +58,7 @@ test -s "$out/readme_snippet.py"
 "$venv/bin/python" "$root/bindings-examples/python/examples/bench_numpy.py" \
     --c-bench "$out/bench/bench_batch" --models pr,best | tee "$out/bench_numpy.txt"
 timeout 300 "$venv/bin/python" "$root/bindings-examples/python/examples/fleet_logs.py" \
-    --rows "$rows" --partitions 4 --workers 2 | tee "$out/fleet.txt"
+    --rows "$rows" --partitions 8 --workers 2 | tee "$out/fleet.txt"
 
 passed=$(grep -Eo '[0-9]+ passed' "$out/pytest.txt" | tail -n 1)
 passed_f=$(grep -Eo '[0-9]+ passed' "$out/pytest-float.txt" | tail -n 1)

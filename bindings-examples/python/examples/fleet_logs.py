@@ -11,7 +11,8 @@ flow every few seconds. The example
    above 100 %);
 2. processes it with Dask on a LocalCluster of worker processes, per row:
    - wet-gas correction: the dry-gas partial pressure p_dry = p - RH p_ws(T) (IAPWS-IF97);
-   - the real-gas density of the dry gas at p_dry (Peng-Robinson, the meter's gas quality);
+   - the real-gas density of the dry gas at p_dry (Peng-Robinson, or ``--model best`` for the
+     reference-grade model; the meter's gas quality);
    - the dry-gas flow at the reference condition 15 degC, 101.325 kPa (ISO 13443) and the
      dry-gas mass flow;
    and per meter a summary: readings, faulty readings, mean pressure, dry-gas volume and mass
@@ -33,7 +34,7 @@ methane (flammable) and may hold hydrogen sulfide (toxic): the figures are no su
 custody-transfer metering standards or site gas-detection equipment.
 
 Usage: python3 fleet_logs.py [--rows N] [--partitions P] [--workers N] [--dir DIR]
-                             [--scheduler ADDRESS] [--keep]
+                             [--scheduler ADDRESS] [--keep] [--model pr|best|...]
 """
 import argparse
 import glob
@@ -84,8 +85,12 @@ def write_partition(path, rows, seed):
     return rows
 
 
-def process_partition(df):
+MODEL = "pr"  # set from --model in main(); worker processes get it with the task
+
+
+def process_partition(df, model=None):
     """Per row: wet-gas correction, real-gas density, reference-condition flow, mass flow."""
+    model = model or MODEL
     out = df.copy()
     p = df["p_bar"].to_numpy(np.float64) * 1e5
     t = df["t_degC"].to_numpy(np.float64) + 273.15
@@ -101,8 +106,9 @@ def process_partition(df):
         if rows.size == 0:
             continue
         pd_rows, t_rows = dry.value[rows], t[rows]
-        d = gaskit.arrays.density(text, pd_rows, t_rows)
-        r = gaskit.arrays.flow_to_reference(text, q[rows], pd_rows, t_rows, reference=REFERENCE)
+        d = gaskit.arrays.density(text, pd_rows, t_rows, model=model)
+        r = gaskit.arrays.flow_to_reference(text, q[rows], pd_rows, t_rows, reference=REFERENCE,
+                                            model=model)
         rho[rows] = d.value
         q_ref[rows] = r.value
         w[rows] = q[rows] * d.value
@@ -127,11 +133,11 @@ def summarise(frame):
                                   dry_kg=("mass", "sum"))
 
 
-def run(client, pattern):
+def run(client, pattern, model):
     import dask.dataframe as dd
     frame = dd.read_csv(pattern, dtype={"meter": "object"}, blocksize=None)
-    meta = process_partition(frame._meta)
-    processed = frame.map_partitions(process_partition, meta=meta)
+    meta = process_partition(frame._meta, model)
+    processed = frame.map_partitions(process_partition, model, meta=meta)
     t0 = time.perf_counter()
     summary = client.compute(summarise(processed)).result()
     return summary, time.perf_counter() - t0
@@ -145,6 +151,8 @@ def main():
     ap.add_argument("--dir", help="where the CSV partitions go (default: a temporary folder)")
     ap.add_argument("--scheduler", help="address of a running Dask scheduler (a cluster)")
     ap.add_argument("--keep", action="store_true", help="keep the written log")
+    ap.add_argument("--model", default="pr",
+                    help='equation of state: "pr" (default), "best" (reference-grade), ...')
     args = ap.parse_args()
 
     from dask.distributed import Client, LocalCluster
@@ -153,8 +161,9 @@ def main():
     os.makedirs(workdir, exist_ok=True)
     pattern = os.path.join(workdir, "part-*.csv")
     info = gaskit.build_info()
-    print("gaskit %s (%s); log: %d rows in %d partitions under %s"
-          % (info.version, info.dtype, args.rows, args.partitions, workdir))
+    print("gaskit %s (%s), model %s; log: %d rows in %d partitions under %s"
+          % (info.version, info.dtype, gaskit.model(args.model).name, args.rows,
+             args.partitions, workdir))
     try:
         per = [args.rows // args.partitions + (i < args.rows % args.partitions)
                for i in range(args.partitions)]
@@ -178,7 +187,7 @@ def main():
                                              pure=False) for i, n in enumerate(per)]
                     written = sum(client.gather(futures))
                     print("wrote %d rows in %.1f s" % (written, time.perf_counter() - t0))
-                summary, secs = run(client, pattern)
+                summary, secs = run(client, pattern, args.model)
             finally:
                 client.close()
                 if cluster is not None:
