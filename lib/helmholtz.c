@@ -21,7 +21,7 @@
  *   seen; a step leaving the bracket is replaced by bisection. On the near side f' <= 0 after a
  *   Newton step means the branch's spinodal was passed with no root: that branch has none.
  *   A root is accepted only with f' > 0 (no spurious or unstable roots). Starts: the
- *   vapour-like root from the virial series to the third coefficient (hz_gas_start()); the
+ *   vapour-like root from the virial series to the fourth coefficient (hz_gas_start()); the
  *   liquid-like root from above, from 1.1 times Guggenheim's saturated-liquid estimate
  *   1 + (3/4)(1 - Tr) + (7/4)(1 - Tr)^(1/3) (E. A. Guggenheim, J. Chem. Phys. 13 (1945) 253,
  *   from memory; a start below the root is corrected by the bracket).
@@ -75,6 +75,8 @@ static const unsigned char hz_t8[2][GK__SW_TERMS] = {
 #  define HZ_STALL_TOL GK_LIT(1000.0)
 /* Two roots closer than this (relative) are the same root. */
 #  define HZ_SAME_ROOT GK_LIT(1e-4)
+/* Newton steps on the virial series for the vapour-like start (hz_gas_start()). */
+#  define HZ_START_STEPS 2
 
 /*
  * Coefficient rows. n_k: Span and Wagner 2003, Part II Tables (nonpolar fluids) and Part III
@@ -228,15 +230,22 @@ gk_status gk__sw_model_gas(const gk_gas *gas, gk__hz_model *out) {
     return GK_ERR_NOT_FOUND;
 }
 
-/* Adds x times the row to the mixture's range and reducing sums s[0..4]:
-   s[0] = sum x sqrt(Tc), s[1..4] = S0..S3, S_k = sum x v^(k/3), v = 1/rho_c. */
-static void hz_mix_add(gk__hz_model *m, const gk__sw_fluid *fl, gk_real x, gk_real s[5]) {
+/* What a mixture's model is built from: the reducing sums s[0] = sum x sqrt(Tc),
+   s[1..4] = S0..S3 with S_k = sum x v^(k/3), v = 1/rho_c, and the narrowest validity range. */
+typedef struct hz_mix_sums {
+    gk_real s[5];
+    gk_real t_min, t_max, p_max;
+} hz_mix_sums;
+
+/* Adds x times the row to the mixture's sums and range. Out of line: the sums stay in the
+   caller's frame, not in registers saved across the row lookups (firmware stack). */
+static HZ_NOINLINE void hz_mix_add(hz_mix_sums *m, const gk__sw_fluid *fl, gk_real x) {
     gk_real c = gk_cbrt(GK_LIT(1.0) / fl->rho_c);
-    s[0] += x * gk_sqrt(fl->t_c);
-    s[1] += x;
-    s[2] += x * c;
-    s[3] += x * c * c;
-    s[4] += x * c * c * c;
+    m->s[0] += x * gk_sqrt(fl->t_c);
+    m->s[1] += x;
+    m->s[2] += x * c;
+    m->s[3] += x * c * c;
+    m->s[4] += x * c * c * c;
     m->t_min = (fl->t_min > m->t_min) ? fl->t_min : m->t_min;
     m->t_max = (fl->t_max < m->t_max) ? fl->t_max : m->t_max;
     m->p_max = (fl->p_max < m->p_max) ? fl->p_max : m->p_max;
@@ -246,27 +255,31 @@ static void hz_mix_add(gk__hz_model *m, const gk__sw_fluid *fl, gk_real x, gk_re
    gk__sw_find(gas[i]); every component with x_i > 0 has a row (checked by the callers). */
 static gk_status hz_model_mix(const gk_gas *const *gas, const gk__sw_fluid *const *rows,
                               const gk_real *x, size_t count, gk__hz_model *out) {
-    gk__hz_model m;
-    gk_real s[5] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
+    hz_mix_sums m = { { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) },
+                      GK_LIT(0.0),
+                      GK_REAL_MAX,
+                      GK_REAL_MAX };
+    gk_real t_r, rho_r;
     size_t i;
-    m.t_min = GK_LIT(0.0);
-    m.t_max = GK_REAL_MAX;
-    m.p_max = GK_REAL_MAX;
-    m.fluid = NULL;
-    m.gas = gas;
-    m.rows = rows;
-    m.x = x;
-    m.count = count;
     for (i = 0; i < count; ++i) {
         if (x[i] > GK_LIT(0.0)) {
-            hz_mix_add(&m, (rows != NULL) ? rows[i] : gk__sw_find(gas[i]), x[i], s);
+            hz_mix_add(&m, (rows != NULL) ? rows[i] : gk__sw_find(gas[i]), x[i]);
         }
     }
-    if (!(s[1] > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
-    m.t_r = s[0] * s[0];
-    m.rho_r = GK_LIT(4.0) / (s[1] * s[4] + GK_LIT(3.0) * s[2] * s[3]);
-    if (!gk_positive(m.t_r) || !gk_positive(m.rho_r)) { return GK_ERR_DOMAIN; }
-    *out = m;
+    if (!(m.s[1] > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
+    t_r = m.s[0] * m.s[0];
+    rho_r = GK_LIT(4.0) / (m.s[1] * m.s[4] + GK_LIT(3.0) * m.s[2] * m.s[3]);
+    if (!gk_positive(t_r) || !gk_positive(rho_r)) { return GK_ERR_DOMAIN; }
+    out->t_r = t_r;
+    out->rho_r = rho_r;
+    out->t_min = m.t_min;
+    out->t_max = m.t_max;
+    out->p_max = m.p_max;
+    out->fluid = NULL;
+    out->gas = gas;
+    out->rows = rows;
+    out->x = x;
+    out->count = count;
     return GK_OK;
 }
 
@@ -275,17 +288,26 @@ static gk_status hz_model_rows(const gk__sw_fluid *const *rows, const gk_real *x
     return hz_model_mix(NULL, rows, x, count, out);
 }
 
-gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_t count,
-                               gk__hz_model *out) {
+/* The checks of gk__sw_model_mixture() on its components; GK_OK or the status. Out of line:
+   its loop's registers are not saved under the model's construction (firmware stack). */
+static HZ_NOINLINE gk_status hz_mixture_check(const gk_gas *const *gas, const gk_real *x,
+                                              size_t count) {
     size_t i;
-    if (gas == NULL || x == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     if (count == 0 || count > GK_MIXTURE_MAX) { return GK_ERR_DOMAIN; }
     for (i = 0; i < count; ++i) {
         if (gas[i] == NULL) { return GK_ERR_ARGUMENT; }
         if (!gk_finite(x[i]) || x[i] < GK_LIT(0.0) || x[i] > GK_LIT(1.0)) { return GK_ERR_DOMAIN; }
         if (x[i] > GK_LIT(0.0) && gk__sw_find(gas[i]) == NULL) { return GK_ERR_NOT_FOUND; }
     }
-    return hz_model_mix(gas, NULL, x, count, out);
+    return GK_OK;
+}
+
+gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_t count,
+                               gk__hz_model *out) {
+    gk_status st;
+    if (gas == NULL || x == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
+    st = hz_mixture_check(gas, x, count);
+    return (st == GK_OK) ? hz_model_mix(gas, NULL, x, count, out) : st;
 }
 
 /* ---------------------------------------------------------------- evaluation */
@@ -295,19 +317,10 @@ gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_
    temperature the terms of a group add into one coefficient G = sum n_k tau^t_k (over the
    forms present and, for a mixture, x_i over the components), so every density evaluation,
    pure or mixed, nonpolar or polar, is 12 terms at most. */
-enum {
-    HZ_GROUPS = 12
-};
 static const unsigned char hz_group[2][GK__SW_TERMS] = {
     { 0, 0, 0, 1, 2, 3, 5, 6, 7, 8, 10, 11 }, /* nonpolar */
     { 0, 0, 0, 2, 3, 4, 5, 6, 7, 7, 8, 9 }    /* polar */
 };
-
-/* Per-temperature state of one solve: the group coefficients G, and Pi. */
-typedef struct hz_ctx {
-    gk_real g[HZ_GROUPS];
-    gk_real pi; /* p / (rho_r R T) */
-} hz_ctx;
 
 /* alpha_r, S1 = delta alpha_r_delta (= Z - 1), S2 = delta^2 alpha_r_delta_delta. */
 typedef struct hz_sums {
@@ -329,31 +342,35 @@ static const unsigned char hz_tslot[2][GK__SW_TERMS] = {
     { 0, 1, 1, 0, 0, 2, 2, 2, 3, 5, 4, 6 }  /* polar: 0 1 1 0 0 2 2 2 3 6 4 12 */
 };
 
+/* tau^(j/8), j = 0..7, from rt = { tau^(1/2), tau^(1/4), tau^(1/8) } (bits 4, 2, 1 of j). */
+static inline gk_real hz_eighths(const gk_real rt[3], unsigned j) {
+    const gk_real a = ((j & 4u) != 0u) ? rt[0] : GK_LIT(1.0);
+    const gk_real b = ((j & 2u) != 0u) ? rt[1] : GK_LIT(1.0);
+    return ((j & 1u) != 0u) ? (a * b) * rt[2] : a * b;
+}
+
 /* Adds x n_k tau^t_k of a row into its groups; t_k in eighths = an integer power tp[slot] times
-   fr[j] = tau^(j/8). A row that is NULL adds nothing (cannot happen for a model built by
+   tau^(j/8). A row that is NULL adds nothing (cannot happen for a model built by
    gk__sw_model_*()). */
-static void hz_add_row(hz_ctx *ctx, const gk__sw_fluid *fl, gk_real x, const gk_real *tp,
-                       const gk_real *fr) {
+static void hz_add_row(gk_real *g, const gk__sw_fluid *fl, gk_real x, const gk_real *tp,
+                       const gk_real rt[3]) {
     int k;
     if (fl == NULL) { return; }
     for (k = 0; k < GK__SW_TERMS; ++k) {
         unsigned f = (unsigned)fl->form;
-        ctx->g[hz_group[f][k]] += (x * fl->n[k]) * (tp[hz_tslot[f][k]] * fr[hz_t8[f][k] & 7u]);
+        g[hz_group[f][k]] +=
+            (x * fl->n[k]) * (tp[hz_tslot[f][k]] * hz_eighths(rt, hz_t8[f][k] & 7u));
     }
 }
 
-static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
-    gk_real fr[8], tp[HZ_TAU_POWERS];
+/* The group coefficients at tau (see hz_group). */
+static void hz_tau_terms(const gk__hz_model *m, gk_real tau, gk_real *g) {
+    gk_real rt[3], tp[HZ_TAU_POWERS];
     size_t i;
     int k;
-    fr[0] = GK_LIT(1.0);
-    fr[4] = gk_sqrt(tau);
-    fr[2] = gk_sqrt(fr[4]);
-    fr[1] = gk_sqrt(fr[2]);
-    fr[3] = fr[2] * fr[1];
-    fr[5] = fr[4] * fr[1];
-    fr[6] = fr[4] * fr[2];
-    fr[7] = fr[4] * fr[3];
+    rt[0] = gk_sqrt(tau);
+    rt[1] = gk_sqrt(rt[0]);
+    rt[2] = gk_sqrt(rt[1]);
     tp[0] = GK_LIT(1.0);
     tp[1] = tau;
     tp[2] = tau * tau;
@@ -362,14 +379,14 @@ static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
     tp[5] = tp[3] * tp[3];
     tp[6] = tp[5] * tp[5];
     tp[7] = tp[6] * tp[2];
-    for (k = 0; k < HZ_GROUPS; ++k) { ctx->g[k] = GK_LIT(0.0); }
+    for (k = 0; k < GK__HZ_GROUPS; ++k) { g[k] = GK_LIT(0.0); }
     if (m->fluid != NULL) {
-        hz_add_row(ctx, m->fluid, GK_LIT(1.0), tp, fr);
+        hz_add_row(g, m->fluid, GK_LIT(1.0), tp, rt);
     } else {
         for (i = 0; i < m->count; ++i) {
             if (m->x[i] > GK_LIT(0.0)) {
-                hz_add_row(ctx, (m->rows != NULL) ? m->rows[i] : gk__sw_find(m->gas[i]), m->x[i],
-                           tp, fr);
+                hz_add_row(g, (m->rows != NULL) ? m->rows[i] : gk__sw_find(m->gas[i]), m->x[i], tp,
+                           rt);
             }
         }
     }
@@ -392,17 +409,18 @@ static inline void hz_expo(hz_sums *s, gk_real term, gk_real d, gk_real l, gk_re
 }
 
 /* The 12 groups (see hz_group). Always inlined: inside hz_root() its registers are saved once
-   (firmware stack: 40 B less on the deepest call, for about 360 B of code). */
+   (firmware stack). */
 #  if defined(__GNUC__)
 #    define HZ_INLINE inline __attribute__((always_inline))
 #  else
 #    define HZ_INLINE inline
 #  endif
-static HZ_INLINE void hz_eval(const hz_ctx *ctx, gk_real delta, hz_sums *out) {
+static HZ_INLINE void hz_eval(const gk_real *g, gk_real delta, hz_sums *out) {
+    /* the exponentials first: only delta is kept across the calls */
+    const gk_real e1 = gk_exp(-delta), e2 = gk_exp(-(delta * delta));
+    const gk_real e3 = gk_exp(-(delta * delta * delta));
     const gk_real d2 = delta * delta, d3 = d2 * delta, d4 = d2 * d2, d5 = d4 * delta;
     const gk_real d7 = d4 * d3;
-    const gk_real e1 = gk_exp(-delta), e2 = gk_exp(-d2), e3 = gk_exp(-d3);
-    const gk_real *g = ctx->g;
     hz_sums s = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
     hz_poly(&s, g[0] * delta, GK_LIT(1.0));
     hz_poly(&s, g[1] * d2, GK_LIT(2.0));
@@ -423,12 +441,12 @@ static HZ_INLINE void hz_eval(const hz_ctx *ctx, gk_real delta, hz_sums *out) {
    small Z keeps its relative precision, where 1 + S1 would cancel); ln phi = alpha_r + x - ln Z
    with x = S1 = Z - 1 where |x| < 1/2 (a gas), else Pi/delta - 1: an absolute error of a few
    eps, so phi is good to a few eps relative. */
-static void hz_z_lnphi(const hz_ctx *ctx, gk_real delta, const hz_sums *s, gk_real *z,
-                       gk_real *lnphi) {
-    gk_real zz = ctx->pi / delta;
+static void hz_z_lnphi(gk_real pi, gk_real delta, const hz_sums *s, hz_rootrec *out) {
+    gk_real zz = pi / delta;
     gk_real x = (gk_fabs(s->s1) < GK_LIT(0.5)) ? s->s1 : zz - GK_LIT(1.0);
-    *z = zz;
-    *lnphi = (s->a + x) - gk_log(zz);
+    out->delta = delta;
+    out->z = zz;
+    out->ln_phi = (s->a + x) - gk_log(zz);
 }
 
 /* ---------------------------------------------------------------- density root */
@@ -436,20 +454,19 @@ static void hz_z_lnphi(const hz_ctx *ctx, gk_real delta, const hz_sums *s, gk_re
 /* One density root by safeguarded Newton (see the top of the file). dir = +1: the vapour-like
    root, approached from below; dir = -1: the liquid-like root, approached from above.
    Returns 1 with the root, 0 when the branch has no root, -1 when the iteration cap is reached. */
-static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, hz_rootrec *out) {
-    const gk_real limit = split ? GK_LIT(1.0) : (dir > 0) ? GK__HZ_DELTA_MAX : GK_LIT(0.0);
+static int hz_root(const gk__hz_prepared *pr, int dir, bool split, gk_real start, hz_rootrec *out) {
     const gk_real sgn = (dir > 0) ? GK_LIT(1.0) : GK_LIT(-1.0);
     gk_real near_end = (dir > 0) ? GK_LIT(0.0) : GK__HZ_DELTA_MAX;
-    gk_real far_end = limit;
+    gk_real far_end = split ? GK_LIT(1.0) : (dir > 0) ? GK__HZ_DELTA_MAX : GK_LIT(0.0);
     gk_real x = start, best_x = start, best_f = GK_REAL_MAX, slope_near = GK_LIT(1.0);
     hz_sums s;
     bool stepped = false, far_seen = (dir < 0 && !split), settle = false;
     int it;
     for (it = 0; it < GK__HZ_ITER_MAX; ++it) {
         gk_real f, fp, dx, xn;
-        hz_eval(ctx, x, &s);
+        hz_eval(pr->g, x, &s);
         if (settle) { break; } /* the sums at the best point, after a stall */
-        f = x * (GK_LIT(1.0) + s.s1) - ctx->pi;
+        f = x * (GK_LIT(1.0) + s.s1) - pr->pi;
         fp = GK_LIT(1.0) + GK_LIT(2.0) * s.s1 + s.s2;
         if (sgn * f < GK_LIT(0.0)) {
             /* on the approach side the branch rises (f' > 0) and, for the vapour below
@@ -503,8 +520,7 @@ static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, hz_roo
     if (!(GK_LIT(1.0) + GK_LIT(2.0) * s.s1 + s.s2 > GK_LIT(0.0)) || !(x > GK_LIT(0.0))) {
         return 0;
     }
-    out->delta = x;
-    hz_z_lnphi(ctx, x, &s, &out->z, &out->ln_phi);
+    hz_z_lnphi(pr->pi, x, &s, out);
     return 1;
 }
 
@@ -528,32 +544,41 @@ static gk_real hz_liquid_start(gk_real tr) {
     return (d < GK__HZ_DELTA_MAX) ? d : GK_LIT(0.5) * (GK_LIT(1.0) + GK__HZ_DELTA_MAX);
 }
 
-/* Vapour-like start from the virial series Z = 1 + B delta + C delta^2 (reduced coefficients at
-   delta -> 0: B = the sum of the d = 1 groups, C = 2 (sum of the d = 2 groups) - 2 (the (1,1)
-   group)): delta0 = 2 Pi / (1 + sqrt(1 + 4 B Pi)) solves the second-order series, one
-   fixed-point step delta = Pi / (1 + B delta0 + C delta0^2) adds the third. Out of line: its
-   temporaries stay out of gk__hz_solve's frame, which lies under the Newton loop (firmware
-   stack). */
-static HZ_NOINLINE gk_real hz_gas_start(const hz_ctx *ctx, gk_real limit) {
-    /* the d = 1 groups (1,0) (1,1) (1,2); the d = 2 groups (2,0) (2,1) (2,3), and (1,1) again */
-    const gk_real b = ctx->g[0] + ctx->g[4] + ctx->g[7];
-    const gk_real c = GK_LIT(2.0) * ((ctx->g[1] + ctx->g[5] + ctx->g[9]) - ctx->g[4]);
-    gk_real q = GK_LIT(1.0) + GK_LIT(4.0) * b * ctx->pi, d = ctx->pi;
-    /* without a virial root the ideal-gas density: below the vapour root when there is one */
+/* Vapour-like start from the virial series Z = 1 + B delta + C delta^2 + D delta^3, whose reduced
+   coefficients at delta -> 0 follow from the groups by expanding exp(-delta^l): B = the sum of the
+   d = 1 groups (1,0) (1,1) (1,2); C = 2 ((2,0) + (2,1) + (2,3) - (1,1)); D = 3 ((3,0) + (3,3) +
+   (1,1)/2 - (2,1) - (1,2)). delta0 = 2 Pi / (1 + sqrt(1 + 4 B Pi)) solves the second-order
+   series; HZ_START_STEPS Newton steps on delta (1 + B delta + C delta^2 + D delta^3) = Pi add the
+   higher terms (kept only while they stay positive and the series rises). Without a virial root
+   the ideal-gas density, below the vapour root when there is one. Out of line: its temporaries
+   stay out of the frame under the Newton loop (firmware stack). */
+static HZ_NOINLINE gk_real hz_gas_start(const gk__hz_prepared *pr, gk_real limit) {
+    const gk_real *g = pr->g;
+    const gk_real b = g[0] + g[4] + g[7];
+    const gk_real c = GK_LIT(2.0) * (((g[1] + g[5]) + g[9]) - g[4]);
+    const gk_real e = GK_LIT(3.0) * (((g[2] + g[10]) + GK_LIT(0.5) * g[4]) - (g[5] + g[7]));
+    gk_real q = GK_LIT(1.0) + GK_LIT(4.0) * b * pr->pi, d = pr->pi;
+    int i;
     if (q > GK_LIT(0.0)) {
-        d = GK_LIT(2.0) * ctx->pi / (GK_LIT(1.0) + gk_sqrt(q));
-        q = GK_LIT(1.0) + (b + c * d) * d;
-        d = (q > GK_LIT(0.0)) ? ctx->pi / q : d;
+        d = GK_LIT(2.0) * pr->pi / (GK_LIT(1.0) + gk_sqrt(q));
+        for (i = 0; i < HZ_START_STEPS; ++i) {
+            const gk_real fz = d * (GK_LIT(1.0) + d * (b + d * (c + d * e))) - pr->pi;
+            const gk_real fd =
+                GK_LIT(1.0) + d * (GK_LIT(2.0) * b + d * (GK_LIT(3.0) * c + GK_LIT(4.0) * d * e));
+            const gk_real dn = d - fz / fd;
+            if (!(fd > GK_LIT(0.0)) || !(dn > GK_LIT(0.0))) { break; }
+            d = dn;
+        }
     }
     return (d < GK_LIT(0.5) * limit) ? d : GK_LIT(0.5) * limit;
 }
 
-/* Writes the chosen root (index 0 = liquid-like, 1 = vapour-like) into *out. Out of line: its
-   locals are not in the frame that lies under the root searches (firmware stack budget). */
-static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, gk_real t, const hz_rootrec rr[2],
-                                     const int found[2], gk_root root, gk_eos_result *out) {
-    int n = found[0] + found[1];
-    int i = (found[1] != 0) ? 1 : 0; /* the vapour-like root, or the only one */
+/* Writes the chosen root (index 0 = liquid-like, 1 = vapour-like) into *out; has_gas: rr[1]
+   holds a root, n: the number of roots in rr. Out of line: its locals are not in the frame that
+   lies under the root searches (firmware stack budget). */
+static HZ_NOINLINE gk_status hz_pick(const gk__hz_prepared *pr, const hz_rootrec rr[2],
+                                     bool has_gas, int n, gk_root root, gk_eos_result *out) {
+    int i = has_gas ? 1 : 0; /* the vapour-like root, or the only one */
     gk_real phi, vm;
     gk_root branch;
     if (n == 2 && root == GK_ROOT_LIQUID) {
@@ -563,13 +588,13 @@ static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, gk_real t, const hz_
     }
     if (n == 2) {
         branch = (i == 0) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
-    } else if (t > m->t_r) {
+    } else if (pr->tr > GK_LIT(1.0)) {
         branch = GK_ROOT_SUPERCRITICAL; /* a lone root above T_r, as the cubics label it */
     } else {
         branch = (rr[i].delta > GK_LIT(1.0)) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
     }
     phi = gk_exp(rr[i].ln_phi);
-    vm = GK_LIT(1.0) / (rr[i].delta * m->rho_r);
+    vm = GK_LIT(1.0) / (rr[i].delta * pr->rho_r);
     if (!gk_positive(rr[i].z) || !gk_positive(vm) || !gk_positive(phi)) { return GK_ERR_RANGE; }
     out->z = rr[i].z;
     out->molar_volume.m3_per_mol = vm;
@@ -582,38 +607,52 @@ static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, gk_real t, const hz_
     return GK_OK;
 }
 
-gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
-                       gk_eos_result *out) {
-    hz_ctx ctx;
-    hz_rootrec rr[2];
-    int found[2] = { 0, 0 };
-    bool split;
+gk_status gk__hz_prepare(const gk__hz_model *m, gk_real p, gk_real t, gk__hz_prepared *out) {
     gk_status st;
-    if (m == NULL || out == NULL || !hz_root_valid(root)) { return GK_ERR_ARGUMENT; }
+    if (m == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     if (!gk_positive(p)) { return GK_ERR_DOMAIN; }
     st = hz_check(m, p, t);
     if (st != GK_OK) { return st; }
-    hz_tau_terms(m, m->t_r / t, &ctx);
-    ctx.pi = p / (m->rho_r * GK_R * t);
-    if (!gk_positive(ctx.pi)) { return GK_ERR_RANGE; }
-    split = (t < HZ_SPLIT_TR * m->t_r);
-    found[1] =
-        hz_root(&ctx, 1, split, hz_gas_start(&ctx, split ? GK_LIT(1.0) : GK__HZ_DELTA_MAX), &rr[1]);
-    if (t < HZ_TWO_ROOT_TR * m->t_r) {
-        found[0] = hz_root(&ctx, -1, split, hz_liquid_start(t / m->t_r), &rr[0]);
+    out->pi = p / (m->rho_r * GK_R * t);
+    if (!gk_positive(out->pi)) { return GK_ERR_RANGE; }
+    hz_tau_terms(m, m->t_r / t, out->g);
+    out->tr = t / m->t_r;
+    out->rho_r = m->rho_r;
+    return GK_OK;
+}
+
+gk_status gk__hz_solve_prepared(const gk__hz_prepared *pr, gk_root root, gk_eos_result *out) {
+    hz_rootrec rr[2];
+    int liquid = 0, gas;
+    bool split;
+    if (pr == NULL || out == NULL || !hz_root_valid(root)) { return GK_ERR_ARGUMENT; }
+    split = (pr->tr < HZ_SPLIT_TR);
+    gas = hz_root(pr, 1, split, hz_gas_start(pr, split ? GK_LIT(1.0) : GK__HZ_DELTA_MAX), &rr[1]);
+    if (pr->tr < HZ_TWO_ROOT_TR) {
+        liquid = hz_root(pr, -1, split, hz_liquid_start(pr->tr), &rr[0]);
     }
-    if (found[0] < 0 || found[1] < 0) { return GK_ERR_NO_SOLUTION; }
-    if (found[0] == 1 && found[1] == 1 &&
+    if (liquid < 0 || gas < 0) { return GK_ERR_NO_SOLUTION; }
+    if (liquid == 1 && gas == 1 &&
         gk_fabs(rr[0].delta - rr[1].delta) <= HZ_SAME_ROOT * rr[1].delta) {
-        found[0] = 0; /* one root, reached from both sides */
+        liquid = 0; /* one root, reached from both sides */
     }
-    if (found[0] == 1 && found[1] == 1 && rr[0].delta < rr[1].delta) { return GK_ERR_NO_SOLUTION; }
-    if (found[0] + found[1] == 0) { return GK_ERR_NO_SOLUTION; }
-    return hz_pick(m, t, rr, found, root, out);
+    if (liquid == 1 && gas == 1 && rr[0].delta < rr[1].delta) { return GK_ERR_NO_SOLUTION; }
+    if (liquid + gas == 0) { return GK_ERR_NO_SOLUTION; }
+    return hz_pick(pr, rr, gas == 1, liquid + gas, root, out);
+}
+
+gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
+                       gk_eos_result *out) {
+    gk__hz_prepared pr;
+    gk_status st;
+    if (m == NULL || out == NULL || !hz_root_valid(root)) { return GK_ERR_ARGUMENT; }
+    st = gk__hz_prepare(m, p, t, &pr);
+    if (st != GK_OK) { return st; }
+    return gk__hz_solve_prepared(&pr, root, out);
 }
 
 gk_status gk__hz_pressure(const gk__hz_model *m, gk_real rho, gk_real t, gk_real *out) {
-    hz_ctx ctx;
+    gk_real g[GK__HZ_GROUPS];
     hz_sums s;
     gk_real delta, p;
     gk_status st;
@@ -623,8 +662,8 @@ gk_status gk__hz_pressure(const gk__hz_model *m, gk_real rho, gk_real t, gk_real
     if (st != GK_OK) { return st; }
     delta = rho / m->rho_r;
     if (!(delta <= GK__HZ_DELTA_MAX)) { return GK_ERR_RANGE; }
-    hz_tau_terms(m, m->t_r / t, &ctx);
-    hz_eval(&ctx, delta, &s);
+    hz_tau_terms(m, m->t_r / t, g);
+    hz_eval(g, delta, &s);
     p = rho * GK_R * t * (GK_LIT(1.0) + s.s1);
     if (!(p > GK_LIT(0.0))) { return GK_ERR_NO_SOLUTION; }
     if (!gk_finite(p) || p > m->p_max) { return GK_ERR_RANGE; }
