@@ -49,6 +49,13 @@
 #  else
 #    define HZ_NOINLINE
 #  endif
+/* Always inlines a helper into its caller, whose frame then holds its locals once (firmware
+   stack); only a hint without GCC or Clang. */
+#  if defined(__GNUC__)
+#    define HZ_INLINE inline __attribute__((always_inline))
+#  else
+#    define HZ_INLINE inline
+#  endif
 
 /* t_k in eighths: nonpolar 0.25 1.125 1.5 1.375 0.25 0.875 0.625 1.75 3.625 3.625 14.5 12;
    polar 0.25 1.25 1.5 0.25 0.875 2.375 2 2.125 3.5 6.5 4.75 12.5 */
@@ -342,35 +349,33 @@ static const unsigned char hz_tslot[2][GK__SW_TERMS] = {
     { 0, 1, 1, 0, 0, 2, 2, 2, 3, 5, 4, 6 }  /* polar: 0 1 1 0 0 2 2 2 3 6 4 12 */
 };
 
-/* tau^(j/8), j = 0..7, from rt = { tau^(1/2), tau^(1/4), tau^(1/8) } (bits 4, 2, 1 of j). */
-static inline gk_real hz_eighths(const gk_real rt[3], unsigned j) {
-    const gk_real a = ((j & 4u) != 0u) ? rt[0] : GK_LIT(1.0);
-    const gk_real b = ((j & 2u) != 0u) ? rt[1] : GK_LIT(1.0);
-    return ((j & 1u) != 0u) ? (a * b) * rt[2] : a * b;
-}
-
 /* Adds x n_k tau^t_k of a row into its groups; t_k in eighths = an integer power tp[slot] times
-   tau^(j/8). A row that is NULL adds nothing (cannot happen for a model built by
+   fr[j] = tau^(j/8). A row that is NULL adds nothing (cannot happen for a model built by
    gk__sw_model_*()). */
 static void hz_add_row(gk_real *g, const gk__sw_fluid *fl, gk_real x, const gk_real *tp,
-                       const gk_real rt[3]) {
+                       const gk_real *fr) {
     int k;
     if (fl == NULL) { return; }
     for (k = 0; k < GK__SW_TERMS; ++k) {
         unsigned f = (unsigned)fl->form;
-        g[hz_group[f][k]] +=
-            (x * fl->n[k]) * (tp[hz_tslot[f][k]] * hz_eighths(rt, hz_t8[f][k] & 7u));
+        g[hz_group[f][k]] += (x * fl->n[k]) * (tp[hz_tslot[f][k]] * fr[hz_t8[f][k] & 7u]);
     }
 }
 
-/* The group coefficients at tau (see hz_group). */
-static void hz_tau_terms(const gk__hz_model *m, gk_real tau, gk_real *g) {
-    gk_real rt[3], tp[HZ_TAU_POWERS];
+/* The group coefficients at tau (see hz_group). Inlined: one frame less under the state solve
+   (firmware stack). */
+static HZ_INLINE void hz_tau_terms(const gk__hz_model *m, gk_real tau, gk_real *g) {
+    gk_real fr[8], tp[HZ_TAU_POWERS];
     size_t i;
     int k;
-    rt[0] = gk_sqrt(tau);
-    rt[1] = gk_sqrt(rt[0]);
-    rt[2] = gk_sqrt(rt[1]);
+    fr[0] = GK_LIT(1.0);
+    fr[4] = gk_sqrt(tau);
+    fr[2] = gk_sqrt(fr[4]);
+    fr[1] = gk_sqrt(fr[2]);
+    fr[3] = fr[2] * fr[1];
+    fr[5] = fr[4] * fr[1];
+    fr[6] = fr[4] * fr[2];
+    fr[7] = fr[4] * fr[3];
     tp[0] = GK_LIT(1.0);
     tp[1] = tau;
     tp[2] = tau * tau;
@@ -381,12 +386,12 @@ static void hz_tau_terms(const gk__hz_model *m, gk_real tau, gk_real *g) {
     tp[7] = tp[6] * tp[2];
     for (k = 0; k < GK__HZ_GROUPS; ++k) { g[k] = GK_LIT(0.0); }
     if (m->fluid != NULL) {
-        hz_add_row(g, m->fluid, GK_LIT(1.0), tp, rt);
+        hz_add_row(g, m->fluid, GK_LIT(1.0), tp, fr);
     } else {
         for (i = 0; i < m->count; ++i) {
             if (m->x[i] > GK_LIT(0.0)) {
                 hz_add_row(g, (m->rows != NULL) ? m->rows[i] : gk__sw_find(m->gas[i]), m->x[i], tp,
-                           rt);
+                           fr);
             }
         }
     }
@@ -410,11 +415,6 @@ static inline void hz_expo(hz_sums *s, gk_real term, gk_real d, gk_real l, gk_re
 
 /* The 12 groups (see hz_group). Always inlined: inside hz_root() its registers are saved once
    (firmware stack). */
-#  if defined(__GNUC__)
-#    define HZ_INLINE inline __attribute__((always_inline))
-#  else
-#    define HZ_INLINE inline
-#  endif
 static HZ_INLINE void hz_eval(const gk_real *g, gk_real delta, hz_sums *out) {
     /* the exponentials first: only delta is kept across the calls */
     const gk_real e1 = gk_exp(-delta), e2 = gk_exp(-(delta * delta));
