@@ -86,7 +86,7 @@ static const unsigned char hz_t8[2][GK__SW_TERMS] = {
 /* Two roots closer than this (relative) are the same root. */
 #  define HZ_SAME_ROOT GK_LIT(1e-4)
 /* Newton steps on the virial series for the vapour-like start (hz_gas_start()). */
-#  define HZ_START_STEPS 2
+#  define HZ_START_STEPS 1
 
 /*
  * Coefficient rows. n_k: Span and Wagner 2003, Part II Tables (nonpolar fluids) and Part III
