@@ -32,8 +32,8 @@
  *   first order (quadratic convergence leaves an error below eps), or (rounding level) |f| no
  *   longer decreases within 1000 eps of the root; at most GK__HZ_ITER_MAX steps, else
  *   GK_ERR_NO_SOLUTION.
- * - Below 1.05 T_r both roots are sought (the equations' own critical temperature is within
- *   0.1 % of T_r); equal roots count once.
+ * - Below 1.01 T_r (a mixture: 1.05 T_r) both roots are sought (the equations' own critical
+ *   temperature is within 0.1 % of T_r); equal roots count once.
  * - At the root Z = Pi / delta (no cancellation for a liquid's small Z); ln phi = alpha_r + x - ln Z,
  *   x = Z - 1 (= S1 for a gas).
  *
@@ -66,9 +66,13 @@ static const unsigned char hz_t8[2][GK__SW_TERMS] = {
     { 2, 9, 12, 11, 2, 7, 5, 14, 29, 29, 116, 96 }, { 2, 10, 12, 2, 7, 19, 16, 17, 28, 52, 38, 100 }
 };
 
-/* Below HZ_TWO_ROOT_TR T_r both roots are sought (the equations' own critical temperatures lie
-   within 0.1 % of T_r; a mixture's pseudo-critical point within a few percent). */
-#  define HZ_TWO_ROOT_TR GK_LIT(1.05)
+/* Below HZ_TWO_ROOT_PURE T_r (a pure fluid) or HZ_TWO_ROOT_MIX T_r (a mixture) both roots are
+   sought: the equations' own critical temperatures lie within 0.2 % of T_r (every covered
+   fluid's isotherm at 1.002 T_r has dp/drho > 0 on a 1e-4 grid in delta up to its range, a check
+   made for this choice), a mixture's pseudo-critical point within a few percent; above, an
+   isotherm has one root. */
+#  define HZ_TWO_ROOT_PURE GK_LIT(1.01)
+#  define HZ_TWO_ROOT_MIX GK_LIT(1.05)
 /* Below HZ_SPLIT_TR T_r the vapour-like root is sought below delta = 1 and the liquid-like root
    above it: between the spinodals, which enclose delta = 1, multiparameter equations may have
    spurious loops with dp/drho > 0 (Span and Wagner 2003, Part I, on the unstable region),
@@ -640,6 +644,7 @@ gk_status gk__hz_prepare(const gk__hz_model *m, gk_real p, gk_real t, gk__hz_pre
     if (!gk_positive(out->pi)) { return GK_ERR_RANGE; }
     hz_tau_terms(m, m->t_r / t, out->g);
     out->tr = t / m->t_r;
+    out->tr_two_roots = (m->fluid != NULL) ? HZ_TWO_ROOT_PURE : HZ_TWO_ROOT_MIX;
     out->rho_r = m->rho_r;
     return GK_OK;
 }
@@ -651,7 +656,7 @@ gk_status gk__hz_solve_prepared(const gk__hz_prepared *pr, gk_root root, gk_eos_
     if (pr == NULL || out == NULL || !hz_root_valid(root)) { return GK_ERR_ARGUMENT; }
     split = (pr->tr < HZ_SPLIT_TR);
     gas = hz_root(pr, 1, split, hz_gas_start(pr, split ? GK_LIT(1.0) : GK__HZ_DELTA_MAX), &rr[1]);
-    if (pr->tr < HZ_TWO_ROOT_TR) {
+    if (pr->tr < pr->tr_two_roots) {
         liquid = hz_root(pr, -1, split, hz_liquid_start(pr->tr), &rr[0]);
     }
     if (liquid < 0 || gas < 0) { return GK_ERR_NO_SOLUTION; }

@@ -148,9 +148,10 @@ gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_
    gk__hz_prepare(); the model is not needed afterwards. */
 typedef struct gk__hz_prepared {
     gk_real g[GK__HZ_GROUPS];
-    gk_real pi;    /* p / (rho_r R T) */
-    gk_real tr;    /* T / T_r */
-    gk_real rho_r; /* reducing density, mol/m^3 */
+    gk_real pi;           /* p / (rho_r R T) */
+    gk_real tr;           /* T / T_r */
+    gk_real tr_two_roots; /* below this T / T_r both roots are sought */
+    gk_real rho_r;        /* reducing density, mol/m^3 */
 } gk__hz_prepared;
 
 /* Checks p (Pa) and T (K) against the model and fills *out (only on GK_OK). Statuses as
