@@ -576,9 +576,10 @@ static gk_real hz_liquid_start(gk_real tr) {
    d = 1 groups (1,0) (1,1) (1,2); C = 2 ((2,0) + (2,1) + (2,3) - (1,1)); D = 3 ((3,0) + (3,3) +
    (1,1)/2 - (2,1) - (1,2)). delta0 = 2 Pi / (1 + sqrt(1 + 4 B Pi)) solves the second-order
    series; HZ_START_STEPS Newton steps on delta (1 + B delta + C delta^2 + D delta^3) = Pi add the
-   higher terms (kept only while they stay positive and the series rises). Without a virial root
-   the ideal-gas density, below the vapour root when there is one. Out of line: its temporaries
-   stay out of the frame under the Newton loop (firmware stack). */
+   higher terms (kept only while they stay positive and the series rises). Where the
+   second-order series has no root (Pi above its peak -1/(4 B), B < 0), the density of that peak,
+   -1/(2 B): near the end of the vapour branch, where a search without a root ends soonest. Out
+   of line: its temporaries stay out of the frame under the Newton loop (firmware stack). */
 static HZ_NOINLINE gk_real hz_gas_start(const gk__hz_prepared *pr, gk_real limit) {
     const gk_real *g = pr->g;
     const gk_real b = g[0] + g[4] + g[7];
@@ -596,6 +597,8 @@ static HZ_NOINLINE gk_real hz_gas_start(const gk__hz_prepared *pr, gk_real limit
             if (!(fd > GK_LIT(0.0)) || !(dn > GK_LIT(0.0))) { break; }
             d = dn;
         }
+    } else {
+        d = GK_LIT(-0.5) / b; /* where the second-order series peaks (b < 0 here) */
     }
     return (d < GK_LIT(0.5) * limit) ? d : GK_LIT(0.5) * limit;
 }
