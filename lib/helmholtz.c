@@ -26,14 +26,15 @@
  *   1 + (3/4)(1 - Tr) + (7/4)(1 - Tr)^(1/3) (E. A. Guggenheim, J. Chem. Phys. 13 (1945) 253,
  *   from memory; below 0.9 T_r and 3 MPa the estimate is 0.94 to 1.15 times the liquid roots
  *   of the covered fluids, measured with these equations, and the factor 1.05 starts near the
- *   middle of that spread; a start below the root is corrected by the bracket). From the second point on, each Newton step gets Chebyshev's curvature
- *   correction with f'' from the last two points (hz_step()).
+ *   middle of that spread; a start below the root is corrected by the bracket). From the
+ *   second point on, each Newton step gets Chebyshev's curvature correction with f'' from the
+ *   last two points (hz_step()).
  * - Stop: once |Newton step| <= sqrt(eps)/8 delta the step is taken and the sums are moved to
  *   first order (quadratic convergence leaves an error below eps), or (rounding level) |f| no
  *   longer decreases within 1000 eps of the root; at most GK__HZ_ITER_MAX steps, else
  *   GK_ERR_NO_SOLUTION.
  * - Below 1.01 T_r (a mixture: 1.05 T_r) both roots are sought (the equations' own critical
- *   temperature is within 0.1 % of T_r); equal roots count once.
+ *   temperature is within 0.2 % of T_r); equal roots count once.
  * - At the root Z = Pi / delta (no cancellation for a liquid's small Z); ln phi = alpha_r + x - ln Z,
  *   x = Z - 1 (= S1 for a gas).
  *
