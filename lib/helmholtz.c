@@ -586,7 +586,8 @@ static HZ_NOINLINE gk_real hz_gas_start(const gk__hz_prepared *pr, gk_real limit
     const gk_real b = g[0] + g[4] + g[7];
     const gk_real c = GK_LIT(2.0) * (((g[1] + g[5]) + g[9]) - g[4]);
     const gk_real e = GK_LIT(3.0) * (((g[2] + g[10]) + GK_LIT(0.5) * g[4]) - (g[5] + g[7]));
-    gk_real q = GK_LIT(1.0) + GK_LIT(4.0) * b * pr->pi, d = pr->pi;
+    const gk_real q = GK_LIT(1.0) + GK_LIT(4.0) * b * pr->pi;
+    gk_real d;
     int i;
     if (q > GK_LIT(0.0)) {
         d = GK_LIT(2.0) * pr->pi / (GK_LIT(1.0) + gk_sqrt(q));
