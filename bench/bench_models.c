@@ -11,11 +11,15 @@
  * log-uniform over 10 kPa ... 30 MPa (gas, supercritical and, below Tc, liquid states); hydrogen
  * 200 ... 1000 K, 0.1 ... 100 MPa. Timing: best of REPEAT passes, ns per call; a volatile sink
  * keeps every result alive. Figures vary by about 20 % on a shared machine.
+ *
+ * `bench_models --ir GAS` runs one untimed pass of each path over that gas's states (or, with
+ * GAS = H2, of the hydrogen equation), for instruction counts under valgrind (bench/ir_models.sh).
  */
 #define _POSIX_C_SOURCE 199309L
 #include <math.h>
 #include <stdint.h>
 #include <stdio.h>
+#include <string.h>
 #include <time.h>
 #include "gaskit/gaskit.h"
 #include "../lib/helmholtz.h"
@@ -85,13 +89,36 @@ static double pass_h2(void) {
     return s;
 }
 
+/* The states of a gas (see the top of the file); its lowest temperature in *t_lo. */
+static int gas_states(const char *key, const gk_gas **gas, gk__hz_model *m, double *t_lo) {
+    if (gk_gas_find(key, gas) != GK_OK || gk__sw_model_gas(*gas, m) != GK_OK) { return 1; }
+    *t_lo = fmax((double)m->t_min * 1.001, 0.5 * (double)m->t_r);
+    make_states(*t_lo, 600.0, 1e4, 3e7);
+    return 0;
+}
+
+/* One untimed pass of each path, for instruction counts (functions named pass_sw, pass_pr,
+   pass_h2 in the profile). */
+static int run_ir(const char *key) {
+    const gk_gas *gas = NULL;
+    gk__hz_model m;
+    double t_lo;
+    if (strcmp(key, "H2") == 0) {
+        make_states(200.0, 1000.0, 1e5, 1e8);
+        sink = pass_h2();
+        return 0;
+    }
+    if (gas_states(key, &gas, &m, &t_lo) != 0) { return 1; }
+    sink = pass_sw(&m);
+    sink = pass_pr(gas);
+    return 0;
+}
+
 static int run_gas(const char *key) {
     const gk_gas *gas = NULL;
     gk__hz_model m;
-    double best_sw = 1e300, best_pr = 1e300;
-    if (gk_gas_find(key, &gas) != GK_OK || gk__sw_model_gas(gas, &m) != GK_OK) { return 1; }
-    double t_lo = fmax((double)m.t_min * 1.001, 0.5 * (double)m.t_r);
-    make_states(t_lo, 600.0, 1e4, 3e7);
+    double best_sw = 1e300, best_pr = 1e300, t_lo;
+    if (gas_states(key, &gas, &m, &t_lo) != 0) { return 1; }
     for (int rep = 0; rep < REPEAT; ++rep) {
         double t0 = now_ns();
         sink = pass_sw(&m);
@@ -106,11 +133,12 @@ static int run_gas(const char *key) {
     return 0;
 }
 
-int main(void) {
+int main(int argc, char **argv) {
     static const char *const gases[] = {
         "N2", "O2", "Ar", "CH4", "C2H6", "C3H8", "n-C4H10", "CO2"
     };
     double best_h2 = 1e300;
+    if (argc == 3 && strcmp(argv[1], "--ir") == 0) { return run_ir(argv[2]); }
     printf("gaskit %s (%s build): reference-grade models against Peng-Robinson, same states\n",
            gk_version(), (gk_build_flags() & GK_BUILD_FLOAT) ? "float" : "double");
     printf("%d states per gas, p 10 kPa ... 30 MPa log-uniform, best of %d passes\n", NSTATES,

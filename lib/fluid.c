@@ -156,17 +156,26 @@ static GK__FLUID_NOINLINE gk_status fluid_h2_state(const gk__fluid *f, gk_real p
     return GK_OK;
 }
 
+/* The per-temperature part of a Span-Wagner state (gk__hz_prepare()) of the fluid. Out of line:
+   the model it builds is not in the frame under the density solve (firmware stack). */
+static GK__FLUID_NOINLINE gk_status fluid_sw_prepare(const gk__fluid *f, gk_real p, gk_real t,
+                                                     gk__hz_prepared *out) {
+    gk__hz_model m;
+    gk_status st = fluid_sw_model(f, &m);
+    return (st == GK_OK) ? gk__hz_prepare(&m, p, t, out) : st;
+}
+
 /* A state of a reference-grade model (helmholtz.h, hydrogen.h). Out of line: the cubic path
    does not carry its frame. */
 static GK__FLUID_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk_real p, gk_real t,
                                                           gk_root root, gk_eos_result *out) {
-    gk__hz_model m;
+    gk__hz_prepared pr;
     gk_status st;
     if (f->eos == GK_EOS_HYDROGEN) {
         st = fluid_h2_state(f, p, t, out);
     } else {
-        st = fluid_sw_model(f, &m);
-        if (st == GK_OK) { st = gk__hz_solve(&m, p, t, root, out); }
+        st = fluid_sw_prepare(f, p, t, &pr);
+        if (st == GK_OK) { st = gk__hz_solve_prepared(&pr, root, out); }
     }
     if (st == GK_OK) { out->model = f->eos; }
     return st;
@@ -174,27 +183,38 @@ static GK__FLUID_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk
 
 #endif
 
+/* A state of a cubic model: its a and b (pure or mixed), then the cubic. Out of line: a and b
+   are not in the frame above the other models' solves (firmware stack). */
+static GK__FLUID_NOINLINE gk_status fluid_cubic_state(const gk__fluid *f, gk_real p, gk_real t,
+                                                      gk_root root, gk_eos_result *out) {
+    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0);
+    gk_status st = (f->mix != NULL) ? gk__eos_mix_ab(f->eos, f->mix, f->kij, p, t, &a, &b)
+                                    : gk__eos_ab(f->eos, f->gas, p, t, &a, &b);
+    if (st == GK_OK) { st = gk__eos_cubic_state(f->eos, a, b, p, t, f->tc, root, out); }
+    if (st == GK_OK) { out->model = f->eos; }
+    return st;
+}
+
+/* The ideal-gas state. */
+static gk_status fluid_ideal_state(gk_real p, gk_real t, gk_eos_result *out) {
+    gk_status st = gk__eos_ideal_state(p, t, out);
+    if (st == GK_OK) { out->model = GK_EOS_IDEAL; }
+    return st;
+}
+
 /* The one dispatch on the model: a new family of models adds its case here. */
 gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_root root,
                           gk_eos_result *out) {
-    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0);
-    gk_status st;
     if (!gk__root_valid(root)) { return GK_ERR_ARGUMENT; }
     if (!gk_positive(p.pa) || !gk_positive(t.k)) { return GK_ERR_DOMAIN; }
     switch (f->eos) {
         case GK_EOS_IDEAL:
-            st = gk__eos_ideal_state(p.pa, t.k, out);
-            break;
+            return fluid_ideal_state(p.pa, t.k, out);
         case GK_EOS_VAN_DER_WAALS:
         case GK_EOS_REDLICH_KWONG:
         case GK_EOS_SOAVE_REDLICH_KWONG:
         case GK_EOS_PENG_ROBINSON:
-            st = (f->mix != NULL) ? gk__eos_mix_ab(f->eos, f->mix, f->kij, p.pa, t.k, &a, &b)
-                                  : gk__eos_ab(f->eos, f->gas, p.pa, t.k, &a, &b);
-            if (st == GK_OK) {
-                st = gk__eos_cubic_state(f->eos, a, b, p.pa, t.k, f->tc, root, out);
-            }
-            break;
+            return fluid_cubic_state(f, p.pa, t.k, root, out);
 #if GK_REFERENCE_MODELS
         case GK_EOS_SPAN_WAGNER:
         case GK_EOS_HYDROGEN:
@@ -204,8 +224,6 @@ gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, g
         default:
             return GK_ERR_ARGUMENT;
     }
-    if (st == GK_OK) { out->model = f->eos; }
-    return st;
 }
 
 gk_status gk__fluid_gas_z(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_real *z) {

@@ -21,16 +21,20 @@
  *   seen; a step leaving the bracket is replaced by bisection. On the near side f' <= 0 after a
  *   Newton step means the branch's spinodal was passed with no root: that branch has none.
  *   A root is accepted only with f' > 0 (no spurious or unstable roots). Starts: the
- *   vapour-like root from the virial series to the third coefficient (hz_gas_start()); the
- *   liquid-like root from above, from 1.1 times Guggenheim's saturated-liquid estimate
+ *   vapour-like root from the virial series to the fourth coefficient (hz_gas_start()); the
+ *   liquid-like root from 1.05 times Guggenheim's saturated-liquid estimate
  *   1 + (3/4)(1 - Tr) + (7/4)(1 - Tr)^(1/3) (E. A. Guggenheim, J. Chem. Phys. 13 (1945) 253,
- *   from memory; a start below the root is corrected by the bracket).
+ *   from memory; below 0.9 T_r and 3 MPa the estimate is 0.94 to 1.15 times the liquid roots
+ *   of the covered fluids, measured with these equations, and the factor 1.05 starts near the
+ *   middle of that spread; a start below the root is corrected by the bracket). From the
+ *   second point on, each Newton step gets Chebyshev's curvature correction with f'' from the
+ *   last two points (hz_step()).
  * - Stop: once |Newton step| <= sqrt(eps)/8 delta the step is taken and the sums are moved to
  *   first order (quadratic convergence leaves an error below eps), or (rounding level) |f| no
  *   longer decreases within 1000 eps of the root; at most GK__HZ_ITER_MAX steps, else
  *   GK_ERR_NO_SOLUTION.
- * - Below 1.05 T_r both roots are sought (the equations' own critical temperature is within
- *   0.1 % of T_r); equal roots count once.
+ * - Below 1.01 T_r (a mixture: 1.05 T_r) both roots are sought (the equations' own critical
+ *   temperature is within 0.2 % of T_r); equal roots count once.
  * - At the root Z = Pi / delta (no cancellation for a liquid's small Z); ln phi = alpha_r + x - ln Z,
  *   x = Z - 1 (= S1 for a gas).
  *
@@ -49,6 +53,13 @@
 #  else
 #    define HZ_NOINLINE
 #  endif
+/* Always inlines a helper into its caller, whose frame then holds its locals once (firmware
+   stack); only a hint without GCC or Clang. */
+#  if defined(__GNUC__)
+#    define HZ_INLINE inline __attribute__((always_inline))
+#  else
+#    define HZ_INLINE inline
+#  endif
 
 /* t_k in eighths: nonpolar 0.25 1.125 1.5 1.375 0.25 0.875 0.625 1.75 3.625 3.625 14.5 12;
    polar 0.25 1.25 1.5 0.25 0.875 2.375 2 2.125 3.5 6.5 4.75 12.5 */
@@ -56,9 +67,13 @@ static const unsigned char hz_t8[2][GK__SW_TERMS] = {
     { 2, 9, 12, 11, 2, 7, 5, 14, 29, 29, 116, 96 }, { 2, 10, 12, 2, 7, 19, 16, 17, 28, 52, 38, 100 }
 };
 
-/* Below HZ_TWO_ROOT_TR T_r both roots are sought (the equations' own critical temperatures lie
-   within 0.1 % of T_r; a mixture's pseudo-critical point within a few percent). */
-#  define HZ_TWO_ROOT_TR GK_LIT(1.05)
+/* Below HZ_TWO_ROOT_PURE T_r (a pure fluid) or HZ_TWO_ROOT_MIX T_r (a mixture) both roots are
+   sought: the equations' own critical temperatures lie within 0.2 % of T_r (every covered
+   fluid's isotherm at 1.002 T_r has dp/drho > 0 on a 1e-4 grid in delta up to its range, a check
+   made for this choice), a mixture's pseudo-critical point within a few percent; above, an
+   isotherm has one root. */
+#  define HZ_TWO_ROOT_PURE GK_LIT(1.01)
+#  define HZ_TWO_ROOT_MIX GK_LIT(1.05)
 /* Below HZ_SPLIT_TR T_r the vapour-like root is sought below delta = 1 and the liquid-like root
    above it: between the spinodals, which enclose delta = 1, multiparameter equations may have
    spurious loops with dp/drho > 0 (Span and Wagner 2003, Part I, on the unstable region),
@@ -75,6 +90,8 @@ static const unsigned char hz_t8[2][GK__SW_TERMS] = {
 #  define HZ_STALL_TOL GK_LIT(1000.0)
 /* Two roots closer than this (relative) are the same root. */
 #  define HZ_SAME_ROOT GK_LIT(1e-4)
+/* Newton steps on the virial series for the vapour-like start (hz_gas_start()). */
+#  define HZ_START_STEPS 1
 
 /*
  * Coefficient rows. n_k: Span and Wagner 2003, Part II Tables (nonpolar fluids) and Part III
@@ -228,15 +245,22 @@ gk_status gk__sw_model_gas(const gk_gas *gas, gk__hz_model *out) {
     return GK_ERR_NOT_FOUND;
 }
 
-/* Adds x times the row to the mixture's range and reducing sums s[0..4]:
-   s[0] = sum x sqrt(Tc), s[1..4] = S0..S3, S_k = sum x v^(k/3), v = 1/rho_c. */
-static void hz_mix_add(gk__hz_model *m, const gk__sw_fluid *fl, gk_real x, gk_real s[5]) {
+/* What a mixture's model is built from: the reducing sums s[0] = sum x sqrt(Tc),
+   s[1..4] = S0..S3 with S_k = sum x v^(k/3), v = 1/rho_c, and the narrowest validity range. */
+typedef struct hz_mix_sums {
+    gk_real s[5];
+    gk_real t_min, t_max, p_max;
+} hz_mix_sums;
+
+/* Adds x times the row to the mixture's sums and range. Out of line: the sums stay in the
+   caller's frame, not in registers saved across the row lookups (firmware stack). */
+static HZ_NOINLINE void hz_mix_add(hz_mix_sums *m, const gk__sw_fluid *fl, gk_real x) {
     gk_real c = gk_cbrt(GK_LIT(1.0) / fl->rho_c);
-    s[0] += x * gk_sqrt(fl->t_c);
-    s[1] += x;
-    s[2] += x * c;
-    s[3] += x * c * c;
-    s[4] += x * c * c * c;
+    m->s[0] += x * gk_sqrt(fl->t_c);
+    m->s[1] += x;
+    m->s[2] += x * c;
+    m->s[3] += x * c * c;
+    m->s[4] += x * c * c * c;
     m->t_min = (fl->t_min > m->t_min) ? fl->t_min : m->t_min;
     m->t_max = (fl->t_max < m->t_max) ? fl->t_max : m->t_max;
     m->p_max = (fl->p_max < m->p_max) ? fl->p_max : m->p_max;
@@ -246,27 +270,31 @@ static void hz_mix_add(gk__hz_model *m, const gk__sw_fluid *fl, gk_real x, gk_re
    gk__sw_find(gas[i]); every component with x_i > 0 has a row (checked by the callers). */
 static gk_status hz_model_mix(const gk_gas *const *gas, const gk__sw_fluid *const *rows,
                               const gk_real *x, size_t count, gk__hz_model *out) {
-    gk__hz_model m;
-    gk_real s[5] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
+    hz_mix_sums m = { { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) },
+                      GK_LIT(0.0),
+                      GK_REAL_MAX,
+                      GK_REAL_MAX };
+    gk_real t_r, rho_r;
     size_t i;
-    m.t_min = GK_LIT(0.0);
-    m.t_max = GK_REAL_MAX;
-    m.p_max = GK_REAL_MAX;
-    m.fluid = NULL;
-    m.gas = gas;
-    m.rows = rows;
-    m.x = x;
-    m.count = count;
     for (i = 0; i < count; ++i) {
         if (x[i] > GK_LIT(0.0)) {
-            hz_mix_add(&m, (rows != NULL) ? rows[i] : gk__sw_find(gas[i]), x[i], s);
+            hz_mix_add(&m, (rows != NULL) ? rows[i] : gk__sw_find(gas[i]), x[i]);
         }
     }
-    if (!(s[1] > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
-    m.t_r = s[0] * s[0];
-    m.rho_r = GK_LIT(4.0) / (s[1] * s[4] + GK_LIT(3.0) * s[2] * s[3]);
-    if (!gk_positive(m.t_r) || !gk_positive(m.rho_r)) { return GK_ERR_DOMAIN; }
-    *out = m;
+    if (!(m.s[1] > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
+    t_r = m.s[0] * m.s[0];
+    rho_r = GK_LIT(4.0) / (m.s[1] * m.s[4] + GK_LIT(3.0) * m.s[2] * m.s[3]);
+    if (!gk_positive(t_r) || !gk_positive(rho_r)) { return GK_ERR_DOMAIN; }
+    out->t_r = t_r;
+    out->rho_r = rho_r;
+    out->t_min = m.t_min;
+    out->t_max = m.t_max;
+    out->p_max = m.p_max;
+    out->fluid = NULL;
+    out->gas = gas;
+    out->rows = rows;
+    out->x = x;
+    out->count = count;
     return GK_OK;
 }
 
@@ -275,17 +303,26 @@ static gk_status hz_model_rows(const gk__sw_fluid *const *rows, const gk_real *x
     return hz_model_mix(NULL, rows, x, count, out);
 }
 
-gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_t count,
-                               gk__hz_model *out) {
+/* The checks of gk__sw_model_mixture() on its components; GK_OK or the status. Out of line:
+   its loop's registers are not saved under the model's construction (firmware stack). */
+static HZ_NOINLINE gk_status hz_mixture_check(const gk_gas *const *gas, const gk_real *x,
+                                              size_t count) {
     size_t i;
-    if (gas == NULL || x == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     if (count == 0 || count > GK_MIXTURE_MAX) { return GK_ERR_DOMAIN; }
     for (i = 0; i < count; ++i) {
         if (gas[i] == NULL) { return GK_ERR_ARGUMENT; }
         if (!gk_finite(x[i]) || x[i] < GK_LIT(0.0) || x[i] > GK_LIT(1.0)) { return GK_ERR_DOMAIN; }
         if (x[i] > GK_LIT(0.0) && gk__sw_find(gas[i]) == NULL) { return GK_ERR_NOT_FOUND; }
     }
-    return hz_model_mix(gas, NULL, x, count, out);
+    return GK_OK;
+}
+
+gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_t count,
+                               gk__hz_model *out) {
+    gk_status st;
+    if (gas == NULL || x == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
+    st = hz_mixture_check(gas, x, count);
+    return (st == GK_OK) ? hz_model_mix(gas, NULL, x, count, out) : st;
 }
 
 /* ---------------------------------------------------------------- evaluation */
@@ -295,19 +332,10 @@ gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_
    temperature the terms of a group add into one coefficient G = sum n_k tau^t_k (over the
    forms present and, for a mixture, x_i over the components), so every density evaluation,
    pure or mixed, nonpolar or polar, is 12 terms at most. */
-enum {
-    HZ_GROUPS = 12
-};
 static const unsigned char hz_group[2][GK__SW_TERMS] = {
     { 0, 0, 0, 1, 2, 3, 5, 6, 7, 8, 10, 11 }, /* nonpolar */
     { 0, 0, 0, 2, 3, 4, 5, 6, 7, 7, 8, 9 }    /* polar */
 };
-
-/* Per-temperature state of one solve: the group coefficients G, and Pi. */
-typedef struct hz_ctx {
-    gk_real g[HZ_GROUPS];
-    gk_real pi; /* p / (rho_r R T) */
-} hz_ctx;
 
 /* alpha_r, S1 = delta alpha_r_delta (= Z - 1), S2 = delta^2 alpha_r_delta_delta. */
 typedef struct hz_sums {
@@ -332,17 +360,19 @@ static const unsigned char hz_tslot[2][GK__SW_TERMS] = {
 /* Adds x n_k tau^t_k of a row into its groups; t_k in eighths = an integer power tp[slot] times
    fr[j] = tau^(j/8). A row that is NULL adds nothing (cannot happen for a model built by
    gk__sw_model_*()). */
-static void hz_add_row(hz_ctx *ctx, const gk__sw_fluid *fl, gk_real x, const gk_real *tp,
+static void hz_add_row(gk_real *g, const gk__sw_fluid *fl, gk_real x, const gk_real *tp,
                        const gk_real *fr) {
     int k;
     if (fl == NULL) { return; }
     for (k = 0; k < GK__SW_TERMS; ++k) {
         unsigned f = (unsigned)fl->form;
-        ctx->g[hz_group[f][k]] += (x * fl->n[k]) * (tp[hz_tslot[f][k]] * fr[hz_t8[f][k] & 7u]);
+        g[hz_group[f][k]] += (x * fl->n[k]) * (tp[hz_tslot[f][k]] * fr[hz_t8[f][k] & 7u]);
     }
 }
 
-static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
+/* The group coefficients at tau (see hz_group). Inlined: one frame less under the state solve
+   (firmware stack). */
+static HZ_INLINE void hz_tau_terms(const gk__hz_model *m, gk_real tau, gk_real *g) {
     gk_real fr[8], tp[HZ_TAU_POWERS];
     size_t i;
     int k;
@@ -362,14 +392,14 @@ static void hz_tau_terms(const gk__hz_model *m, gk_real tau, hz_ctx *ctx) {
     tp[5] = tp[3] * tp[3];
     tp[6] = tp[5] * tp[5];
     tp[7] = tp[6] * tp[2];
-    for (k = 0; k < HZ_GROUPS; ++k) { ctx->g[k] = GK_LIT(0.0); }
+    for (k = 0; k < GK__HZ_GROUPS; ++k) { g[k] = GK_LIT(0.0); }
     if (m->fluid != NULL) {
-        hz_add_row(ctx, m->fluid, GK_LIT(1.0), tp, fr);
+        hz_add_row(g, m->fluid, GK_LIT(1.0), tp, fr);
     } else {
         for (i = 0; i < m->count; ++i) {
             if (m->x[i] > GK_LIT(0.0)) {
-                hz_add_row(ctx, (m->rows != NULL) ? m->rows[i] : gk__sw_find(m->gas[i]), m->x[i],
-                           tp, fr);
+                hz_add_row(g, (m->rows != NULL) ? m->rows[i] : gk__sw_find(m->gas[i]), m->x[i], tp,
+                           fr);
             }
         }
     }
@@ -392,17 +422,13 @@ static inline void hz_expo(hz_sums *s, gk_real term, gk_real d, gk_real l, gk_re
 }
 
 /* The 12 groups (see hz_group). Always inlined: inside hz_root() its registers are saved once
-   (firmware stack: 40 B less on the deepest call, for about 360 B of code). */
-#  if defined(__GNUC__)
-#    define HZ_INLINE inline __attribute__((always_inline))
-#  else
-#    define HZ_INLINE inline
-#  endif
-static HZ_INLINE void hz_eval(const hz_ctx *ctx, gk_real delta, hz_sums *out) {
+   (firmware stack). */
+static HZ_INLINE void hz_eval(const gk_real *g, gk_real delta, hz_sums *out) {
+    /* the exponentials first: only delta is kept across the calls */
+    const gk_real e1 = gk_exp(-delta), e2 = gk_exp(-(delta * delta));
+    const gk_real e3 = gk_exp(-(delta * delta * delta));
     const gk_real d2 = delta * delta, d3 = d2 * delta, d4 = d2 * d2, d5 = d4 * delta;
     const gk_real d7 = d4 * d3;
-    const gk_real e1 = gk_exp(-delta), e2 = gk_exp(-d2), e3 = gk_exp(-d3);
-    const gk_real *g = ctx->g;
     hz_sums s = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
     hz_poly(&s, g[0] * delta, GK_LIT(1.0));
     hz_poly(&s, g[1] * d2, GK_LIT(2.0));
@@ -423,35 +449,52 @@ static HZ_INLINE void hz_eval(const hz_ctx *ctx, gk_real delta, hz_sums *out) {
    small Z keeps its relative precision, where 1 + S1 would cancel); ln phi = alpha_r + x - ln Z
    with x = S1 = Z - 1 where |x| < 1/2 (a gas), else Pi/delta - 1: an absolute error of a few
    eps, so phi is good to a few eps relative. */
-static void hz_z_lnphi(const hz_ctx *ctx, gk_real delta, const hz_sums *s, gk_real *z,
-                       gk_real *lnphi) {
-    gk_real zz = ctx->pi / delta;
+static void hz_z_lnphi(gk_real pi, gk_real delta, const hz_sums *s, hz_rootrec *out) {
+    gk_real zz = pi / delta;
     gk_real x = (gk_fabs(s->s1) < GK_LIT(0.5)) ? s->s1 : zz - GK_LIT(1.0);
-    *z = zz;
-    *lnphi = (s->a + x) - gk_log(zz);
+    out->delta = delta;
+    out->z = zz;
+    out->ln_phi = (s->a + x) - gk_log(zz);
 }
 
 /* ---------------------------------------------------------------- density root */
 
+/* Does a come before b on the way the root is approached (upwards for dir > 0, downwards for
+   dir < 0)? False for a NaN. */
+static inline bool hz_before(int dir, gk_real a, gk_real b) { return (dir > 0) ? a < b : a > b; }
+
+/* The step from x with f' > 0 and the Newton step dn = -f/f': dn (1 - c), c = dn f''/(2 f'),
+   with f'' estimated from the previous point (x0, f'0) as (f' - f'0)/(x - x0) (Chebyshev's
+   correction with a secant second derivative: order about 2.4 instead of Newton's 2, at no
+   extra evaluation); dn itself without a previous point, or where |c| > 1/2 (far from the
+   root, where the estimate means little). */
+static gk_real hz_step(gk_real x, gk_real fp, gk_real dn, gk_real x0, gk_real fp0) {
+    gk_real c;
+    if (!(fp > GK_LIT(0.0)) || !(x0 > GK_LIT(0.0)) || !(gk_fabs(x - x0) > GK_LIT(0.0))) {
+        return dn;
+    }
+    c = dn * (fp - fp0) / (GK_LIT(2.0) * fp * (x - x0));
+    return (gk_fabs(c) <= GK_LIT(0.5)) ? dn * (GK_LIT(1.0) - c) : dn;
+}
+
 /* One density root by safeguarded Newton (see the top of the file). dir = +1: the vapour-like
    root, approached from below; dir = -1: the liquid-like root, approached from above.
    Returns 1 with the root, 0 when the branch has no root, -1 when the iteration cap is reached. */
-static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, hz_rootrec *out) {
-    const gk_real limit = split ? GK_LIT(1.0) : (dir > 0) ? GK__HZ_DELTA_MAX : GK_LIT(0.0);
-    const gk_real sgn = (dir > 0) ? GK_LIT(1.0) : GK_LIT(-1.0);
+static int hz_root(const gk__hz_prepared *pr, int dir, bool split, gk_real start, hz_rootrec *out) {
     gk_real near_end = (dir > 0) ? GK_LIT(0.0) : GK__HZ_DELTA_MAX;
-    gk_real far_end = limit;
+    gk_real far_end = split ? GK_LIT(1.0) : (dir > 0) ? GK__HZ_DELTA_MAX : GK_LIT(0.0);
     gk_real x = start, best_x = start, best_f = GK_REAL_MAX, slope_near = GK_LIT(1.0);
+    gk_real prev_x = GK_LIT(0.0), prev_fp = GK_LIT(0.0); /* none yet */
     hz_sums s;
     bool stepped = false, far_seen = (dir < 0 && !split), settle = false;
     int it;
     for (it = 0; it < GK__HZ_ITER_MAX; ++it) {
         gk_real f, fp, dx, xn;
-        hz_eval(ctx, x, &s);
+        hz_eval(pr->g, x, &s);
         if (settle) { break; } /* the sums at the best point, after a stall */
-        f = x * (GK_LIT(1.0) + s.s1) - ctx->pi;
+        f = x * (GK_LIT(1.0) + s.s1) - pr->pi;
         fp = GK_LIT(1.0) + GK_LIT(2.0) * s.s1 + s.s2;
-        if (sgn * f < GK_LIT(0.0)) {
+        if (hz_before(dir, f, GK_LIT(0.0))) {
             /* on the approach side the branch rises (f' > 0) and, for the vapour below
                HZ_SPLIT_TR, bends down (f' falls as delta grows: f' <= 1 = f'(0)) */
             if (!(fp > GK_LIT(0.0)) || (split && dir > 0 && fp > slope_near)) {
@@ -484,15 +527,17 @@ static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, hz_roo
             s.s1 += (s.s1 + s.s2) * r;
             break;
         }
-        xn = x + dx;
-        if (!far_seen && fp > GK_LIT(0.0) && !((far_end - xn) * sgn > GK_LIT(0.0))) {
+        xn = x + hz_step(x, fp, dx, prev_x, prev_fp);
+        prev_x = x;
+        prev_fp = fp;
+        if (!far_seen && fp > GK_LIT(0.0) && !hz_before(dir, xn, far_end)) {
             /* a Newton step from the approach side beyond the limit: the branch bends away
                before any root (no root below delta = 1 for the vapour, above it for the
                liquid), or, without the split, a step beyond the densest state: halve it */
             if (split) { return 0; }
             xn = GK_LIT(0.5) * (x + far_end);
-        } else if (!(fp > GK_LIT(0.0)) || !((xn - near_end) * sgn > GK_LIT(0.0)) ||
-                   !((far_end - xn) * sgn > GK_LIT(0.0))) {
+        } else if (!(fp > GK_LIT(0.0)) || !hz_before(dir, near_end, xn) ||
+                   !hz_before(dir, xn, far_end)) {
             xn = GK_LIT(0.5) * (near_end + far_end); /* bisection of the bracket */
         }
         x = xn;
@@ -503,8 +548,7 @@ static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, hz_roo
     if (!(GK_LIT(1.0) + GK_LIT(2.0) * s.s1 + s.s2 > GK_LIT(0.0)) || !(x > GK_LIT(0.0))) {
         return 0;
     }
-    out->delta = x;
-    hz_z_lnphi(ctx, x, &s, &out->z, &out->ln_phi);
+    hz_z_lnphi(pr->pi, x, &s, out);
     return 1;
 }
 
@@ -521,39 +565,52 @@ static gk_status hz_check(const gk__hz_model *m, gk_real p, gk_real t) {
     return GK_OK;
 }
 
-/* Guggenheim's saturated-liquid reduced density, times 1.1: the start of the liquid-like root. */
+/* Guggenheim's saturated-liquid reduced density, times 1.05: the start of the liquid-like root. */
 static gk_real hz_liquid_start(gk_real tr) {
     gk_real w = (tr < GK_LIT(1.0)) ? GK_LIT(1.0) - tr : GK_LIT(0.0);
-    gk_real d = GK_LIT(1.1) * (GK_LIT(1.0) + GK_LIT(0.75) * w + GK_LIT(1.75) * gk_cbrt(w));
+    gk_real d = GK_LIT(1.05) * (GK_LIT(1.0) + GK_LIT(0.75) * w + GK_LIT(1.75) * gk_cbrt(w));
     return (d < GK__HZ_DELTA_MAX) ? d : GK_LIT(0.5) * (GK_LIT(1.0) + GK__HZ_DELTA_MAX);
 }
 
-/* Vapour-like start from the virial series Z = 1 + B delta + C delta^2 (reduced coefficients at
-   delta -> 0: B = the sum of the d = 1 groups, C = 2 (sum of the d = 2 groups) - 2 (the (1,1)
-   group)): delta0 = 2 Pi / (1 + sqrt(1 + 4 B Pi)) solves the second-order series, one
-   fixed-point step delta = Pi / (1 + B delta0 + C delta0^2) adds the third. Out of line: its
-   temporaries stay out of gk__hz_solve's frame, which lies under the Newton loop (firmware
-   stack). */
-static HZ_NOINLINE gk_real hz_gas_start(const hz_ctx *ctx, gk_real limit) {
-    /* the d = 1 groups (1,0) (1,1) (1,2); the d = 2 groups (2,0) (2,1) (2,3), and (1,1) again */
-    const gk_real b = ctx->g[0] + ctx->g[4] + ctx->g[7];
-    const gk_real c = GK_LIT(2.0) * ((ctx->g[1] + ctx->g[5] + ctx->g[9]) - ctx->g[4]);
-    gk_real q = GK_LIT(1.0) + GK_LIT(4.0) * b * ctx->pi, d = ctx->pi;
-    /* without a virial root the ideal-gas density: below the vapour root when there is one */
+/* Vapour-like start from the virial series Z = 1 + B delta + C delta^2 + D delta^3, whose reduced
+   coefficients at delta -> 0 follow from the groups by expanding exp(-delta^l): B = the sum of the
+   d = 1 groups (1,0) (1,1) (1,2); C = 2 ((2,0) + (2,1) + (2,3) - (1,1)); D = 3 ((3,0) + (3,3) +
+   (1,1)/2 - (2,1) - (1,2)). delta0 = 2 Pi / (1 + sqrt(1 + 4 B Pi)) solves the second-order
+   series; HZ_START_STEPS Newton steps on delta (1 + B delta + C delta^2 + D delta^3) = Pi add the
+   higher terms (kept only while they stay positive and the series rises). Where the
+   second-order series has no root (Pi above its peak -1/(4 B), B < 0), the density of that peak,
+   -1/(2 B): near the end of the vapour branch, where a search without a root ends soonest. Out
+   of line: its temporaries stay out of the frame under the Newton loop (firmware stack). */
+static HZ_NOINLINE gk_real hz_gas_start(const gk__hz_prepared *pr, gk_real limit) {
+    const gk_real *g = pr->g;
+    const gk_real b = g[0] + g[4] + g[7];
+    const gk_real c = GK_LIT(2.0) * (((g[1] + g[5]) + g[9]) - g[4]);
+    const gk_real e = GK_LIT(3.0) * (((g[2] + g[10]) + GK_LIT(0.5) * g[4]) - (g[5] + g[7]));
+    const gk_real q = GK_LIT(1.0) + GK_LIT(4.0) * b * pr->pi;
+    gk_real d;
+    int i;
     if (q > GK_LIT(0.0)) {
-        d = GK_LIT(2.0) * ctx->pi / (GK_LIT(1.0) + gk_sqrt(q));
-        q = GK_LIT(1.0) + (b + c * d) * d;
-        d = (q > GK_LIT(0.0)) ? ctx->pi / q : d;
+        d = GK_LIT(2.0) * pr->pi / (GK_LIT(1.0) + gk_sqrt(q));
+        for (i = 0; i < HZ_START_STEPS; ++i) {
+            const gk_real fz = d * (GK_LIT(1.0) + d * (b + d * (c + d * e))) - pr->pi;
+            const gk_real fd =
+                GK_LIT(1.0) + d * (GK_LIT(2.0) * b + d * (GK_LIT(3.0) * c + GK_LIT(4.0) * d * e));
+            const gk_real dn = d - fz / fd;
+            if (!(fd > GK_LIT(0.0)) || !(dn > GK_LIT(0.0))) { break; }
+            d = dn;
+        }
+    } else {
+        d = GK_LIT(-0.5) / b; /* where the second-order series peaks (b < 0 here) */
     }
     return (d < GK_LIT(0.5) * limit) ? d : GK_LIT(0.5) * limit;
 }
 
-/* Writes the chosen root (index 0 = liquid-like, 1 = vapour-like) into *out. Out of line: its
-   locals are not in the frame that lies under the root searches (firmware stack budget). */
-static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, gk_real t, const hz_rootrec rr[2],
-                                     const int found[2], gk_root root, gk_eos_result *out) {
-    int n = found[0] + found[1];
-    int i = (found[1] != 0) ? 1 : 0; /* the vapour-like root, or the only one */
+/* Writes the chosen root (index 0 = liquid-like, 1 = vapour-like) into *out; has_gas: rr[1]
+   holds a root, n: the number of roots in rr. Out of line: its locals are not in the frame that
+   lies under the root searches (firmware stack budget). */
+static HZ_NOINLINE gk_status hz_pick(const gk__hz_prepared *pr, const hz_rootrec rr[2],
+                                     bool has_gas, int n, gk_root root, gk_eos_result *out) {
+    int i = has_gas ? 1 : 0; /* the vapour-like root, or the only one */
     gk_real phi, vm;
     gk_root branch;
     if (n == 2 && root == GK_ROOT_LIQUID) {
@@ -563,13 +620,13 @@ static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, gk_real t, const hz_
     }
     if (n == 2) {
         branch = (i == 0) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
-    } else if (t > m->t_r) {
+    } else if (pr->tr > GK_LIT(1.0)) {
         branch = GK_ROOT_SUPERCRITICAL; /* a lone root above T_r, as the cubics label it */
     } else {
         branch = (rr[i].delta > GK_LIT(1.0)) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
     }
     phi = gk_exp(rr[i].ln_phi);
-    vm = GK_LIT(1.0) / (rr[i].delta * m->rho_r);
+    vm = GK_LIT(1.0) / (rr[i].delta * pr->rho_r);
     if (!gk_positive(rr[i].z) || !gk_positive(vm) || !gk_positive(phi)) { return GK_ERR_RANGE; }
     out->z = rr[i].z;
     out->molar_volume.m3_per_mol = vm;
@@ -582,38 +639,53 @@ static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, gk_real t, const hz_
     return GK_OK;
 }
 
-gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
-                       gk_eos_result *out) {
-    hz_ctx ctx;
-    hz_rootrec rr[2];
-    int found[2] = { 0, 0 };
-    bool split;
+gk_status gk__hz_prepare(const gk__hz_model *m, gk_real p, gk_real t, gk__hz_prepared *out) {
     gk_status st;
-    if (m == NULL || out == NULL || !hz_root_valid(root)) { return GK_ERR_ARGUMENT; }
+    if (m == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     if (!gk_positive(p)) { return GK_ERR_DOMAIN; }
     st = hz_check(m, p, t);
     if (st != GK_OK) { return st; }
-    hz_tau_terms(m, m->t_r / t, &ctx);
-    ctx.pi = p / (m->rho_r * GK_R * t);
-    if (!gk_positive(ctx.pi)) { return GK_ERR_RANGE; }
-    split = (t < HZ_SPLIT_TR * m->t_r);
-    found[1] =
-        hz_root(&ctx, 1, split, hz_gas_start(&ctx, split ? GK_LIT(1.0) : GK__HZ_DELTA_MAX), &rr[1]);
-    if (t < HZ_TWO_ROOT_TR * m->t_r) {
-        found[0] = hz_root(&ctx, -1, split, hz_liquid_start(t / m->t_r), &rr[0]);
+    out->pi = p / (m->rho_r * GK_R * t);
+    if (!gk_positive(out->pi)) { return GK_ERR_RANGE; }
+    hz_tau_terms(m, m->t_r / t, out->g);
+    out->tr = t / m->t_r;
+    out->tr_two_roots = (m->fluid != NULL) ? HZ_TWO_ROOT_PURE : HZ_TWO_ROOT_MIX;
+    out->rho_r = m->rho_r;
+    return GK_OK;
+}
+
+gk_status gk__hz_solve_prepared(const gk__hz_prepared *pr, gk_root root, gk_eos_result *out) {
+    hz_rootrec rr[2];
+    int liquid = 0, gas;
+    bool split;
+    if (pr == NULL || out == NULL || !hz_root_valid(root)) { return GK_ERR_ARGUMENT; }
+    split = (pr->tr < HZ_SPLIT_TR);
+    gas = hz_root(pr, 1, split, hz_gas_start(pr, split ? GK_LIT(1.0) : GK__HZ_DELTA_MAX), &rr[1]);
+    if (pr->tr < pr->tr_two_roots) {
+        liquid = hz_root(pr, -1, split, hz_liquid_start(pr->tr), &rr[0]);
     }
-    if (found[0] < 0 || found[1] < 0) { return GK_ERR_NO_SOLUTION; }
-    if (found[0] == 1 && found[1] == 1 &&
+    if (liquid < 0 || gas < 0) { return GK_ERR_NO_SOLUTION; }
+    if (liquid == 1 && gas == 1 &&
         gk_fabs(rr[0].delta - rr[1].delta) <= HZ_SAME_ROOT * rr[1].delta) {
-        found[0] = 0; /* one root, reached from both sides */
+        liquid = 0; /* one root, reached from both sides */
     }
-    if (found[0] == 1 && found[1] == 1 && rr[0].delta < rr[1].delta) { return GK_ERR_NO_SOLUTION; }
-    if (found[0] + found[1] == 0) { return GK_ERR_NO_SOLUTION; }
-    return hz_pick(m, t, rr, found, root, out);
+    if (liquid == 1 && gas == 1 && rr[0].delta < rr[1].delta) { return GK_ERR_NO_SOLUTION; }
+    if (liquid + gas == 0) { return GK_ERR_NO_SOLUTION; }
+    return hz_pick(pr, rr, gas == 1, liquid + gas, root, out);
+}
+
+gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
+                       gk_eos_result *out) {
+    gk__hz_prepared pr;
+    gk_status st;
+    if (m == NULL || out == NULL || !hz_root_valid(root)) { return GK_ERR_ARGUMENT; }
+    st = gk__hz_prepare(m, p, t, &pr);
+    if (st != GK_OK) { return st; }
+    return gk__hz_solve_prepared(&pr, root, out);
 }
 
 gk_status gk__hz_pressure(const gk__hz_model *m, gk_real rho, gk_real t, gk_real *out) {
-    hz_ctx ctx;
+    gk_real g[GK__HZ_GROUPS];
     hz_sums s;
     gk_real delta, p;
     gk_status st;
@@ -623,8 +695,8 @@ gk_status gk__hz_pressure(const gk__hz_model *m, gk_real rho, gk_real t, gk_real
     if (st != GK_OK) { return st; }
     delta = rho / m->rho_r;
     if (!(delta <= GK__HZ_DELTA_MAX)) { return GK_ERR_RANGE; }
-    hz_tau_terms(m, m->t_r / t, &ctx);
-    hz_eval(&ctx, delta, &s);
+    hz_tau_terms(m, m->t_r / t, g);
+    hz_eval(g, delta, &s);
     p = rho * GK_R * t * (GK_LIT(1.0) + s.s1);
     if (!(p > GK_LIT(0.0))) { return GK_ERR_NO_SOLUTION; }
     if (!gk_finite(p) || p > m->p_max) { return GK_ERR_RANGE; }

@@ -139,9 +139,31 @@ gk_status gk__sw_model_gas(const gk_gas *gas, gk__hz_model *out);
 gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_t count,
                                gk__hz_model *out);
 
-/* The state at p (Pa), T (K) with the root choice above, in the result form of the cubics:
+/* Groups of terms with equal density exponents (d, l) over both functional forms (helmholtz.c). */
+#define GK__HZ_GROUPS 12
+
+/* The part of a state (p, T) that does not depend on density: per group, the coefficient
+   G = sum n_k tau^t_k (summed x_i-weighted over a mixture's components) at tau = T_r / T, the
+   reduced pressure Pi = p / (rho_r R T), and the values the root choice needs. Built by
+   gk__hz_prepare(); the model is not needed afterwards. */
+typedef struct gk__hz_prepared {
+    gk_real g[GK__HZ_GROUPS];
+    gk_real pi;           /* p / (rho_r R T) */
+    gk_real tr;           /* T / T_r */
+    gk_real tr_two_roots; /* below this T / T_r both roots are sought */
+    gk_real rho_r;        /* reducing density, mol/m^3 */
+} gk__hz_prepared;
+
+/* Checks p (Pa) and T (K) against the model and fills *out (only on GK_OK). Statuses as
+   gk__hz_solve() (the root is not an input here). */
+gk_status gk__hz_prepare(const gk__hz_model *m, gk_real p, gk_real t, gk__hz_prepared *out);
+
+/* The state of a prepared (p, T) with the root choice above, in the result form of the cubics:
    every field of *out but model (left to the caller) is written, on GK_OK only. A lone root
    above T_r is labelled GK_ROOT_SUPERCRITICAL. */
+gk_status gk__hz_solve_prepared(const gk__hz_prepared *pr, gk_root root, gk_eos_result *out);
+
+/* gk__hz_prepare() then gk__hz_solve_prepared(): the state at p (Pa), T (K). */
 gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
                        gk_eos_result *out);
 

@@ -37,7 +37,7 @@ static gk__hz_model model_of(const char *key) {
 }
 
 static gk_eos_result solve(const gk__hz_model *m, double p, double t, gk_root root) {
-    gk_eos_result r;
+    gk_eos_result r = { 0 };
     assert_status(gk__hz_solve(m, (gk_real)p, (gk_real)t, root, &r), GK_OK);
     return r;
 }

@@ -3,7 +3,7 @@
 # firmware bindings-examples/firmware. Fails if malloc, free, printf or strtod is linked into
 # the image, if the library calls soft-double helpers (__aeabi_d*), or if a stack frame is
 # dynamic / the library recurses. Reports the library's code+data size (goal <= 16 KiB) and
-# the largest stack use of the public functions (goal <= 256 bytes).
+# the largest stack use of the public functions (budget <= 512 bytes: the stage fails above it).
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 cmake -S bindings-examples/firmware -B build-m4 ${GASKIT_FIRMWARE_CMAKE_ARGS:-} \
@@ -38,4 +38,4 @@ read -r etext edata ebss < <(arm-none-eabi-size "$elf" | awk 'NR == 2 {print $1,
 echo "summary: M4F library (every function, -Os): code+rodata $text B, data $data B, bss $bss B: $total B = $(awk "BEGIN {printf \"%.1f\", $total / 1024}") KiB, $verdict the 16 KiB goal"
 echo "summary: sample firmware image (--gc-sections, newlib-nano): text $etext B, data $edata B, bss $ebss B; no malloc/free/printf/strtod, no __aeabi_d*"
 # 4. Stack.
-python3 bindings-examples/firmware/stack_report.py build-m4/gaskit 256
+python3 bindings-examples/firmware/stack_report.py build-m4/gaskit 512

@@ -7,7 +7,8 @@ Usage: stack_report.py <dir with the library's .su/.ci files> [goal_bytes]
 Prints the largest own frame of any public (gk_) function and the worst-case stack of any
 public function including the library functions it calls (longest call chain inside the
 library; calls into libm/libc are listed but their frames are not known here). Exits 1 if a
-frame is dynamic (a VLA or alloca) or the call graph has a cycle (recursion).
+frame is dynamic (a VLA or alloca), the call graph has a cycle (recursion) or the worst case is
+above goal_bytes.
 """
 import glob
 import os
@@ -90,4 +91,6 @@ print("stack: libm/libc callees (frames not included):", ", ".join(sorted(extern
 print("stack: per public function (own frame / worst case):")
 for f in public:
     print("  %-36s %5d %5d" % (f, frames[f], worst[f][0]))
+if worst[deep][0] > goal:
+    status = 1
 sys.exit(status)
