@@ -274,6 +274,30 @@ gk_status gk__fluid_pressure(const gk__fluid *f, gk_molar_volume vm, gk_temperat
 
 /* ------------------------------------------------------------------ public functions */
 
+/* The critical pressure of the fluid: the gas's, or for a mixture the pseudo-critical
+   sum x_i Pc_i (Kay's rule, common practice). */
+static gk_real fluid_pc(const gk__fluid *f) {
+    gk_real pc = GK_LIT(0.0);
+    size_t i;
+    if (f->mix == NULL) { return f->gas->critical_pressure.pa; }
+    for (i = 0; i < f->mix->count; ++i) {
+        pc += f->mix->mole_fraction[i] * f->mix->gas[i]->critical_pressure.pa;
+    }
+    return pc;
+}
+
+/* A state as the public solvers report it. The models label a lone root above the critical
+   temperature supercritical; that is the supercritical-fluid region only above the critical
+   pressure too, below it the root is a gas (a vapour that compression cannot condense). */
+static gk_status fluid_public_state(const gk__fluid *f, gk_pressure p, gk_temperature t,
+                                    gk_root root, gk_eos_result *out) {
+    const gk_status st = gk__fluid_state(f, p, t, root, out);
+    if (st == GK_OK && out->branch == GK_ROOT_SUPERCRITICAL && !(p.pa > fluid_pc(f))) {
+        out->branch = GK_ROOT_GAS;
+    }
+    return st;
+}
+
 gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t, gk_root root,
                        gk_eos_result *out) {
     gk__fluid f;
@@ -281,7 +305,7 @@ gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperat
     if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__fluid_init(&f, eos, gas, NULL, NULL);
     if (st != GK_OK) { return st; }
-    return gk__fluid_state(&f, p, t, root, out);
+    return fluid_public_state(&f, p, t, root, out);
 }
 
 gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij, gk_pressure p,
@@ -291,7 +315,7 @@ gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real 
     if (mix == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__fluid_init(&f, eos, NULL, mix, kij);
     if (st != GK_OK) { return st; }
-    return gk__fluid_state(&f, p, t, root, out);
+    return fluid_public_state(&f, p, t, root, out);
 }
 
 gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_temperature t,

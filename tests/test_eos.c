@@ -436,7 +436,8 @@ static void batch_matches_scalar(void **state) {
 }
 
 /* The branch label of a lone root (eos.h): GK_ROOT_SUPERCRITICAL above the model's critical
-   temperature, else gas or liquid by the side of the model's critical volume. Table gases
+   temperature and the critical pressure, a gas above that temperature at lower pressure, else
+   gas or liquid by the side of the model's critical volume. Table gases
    (Tc: N2 126.2 K, CO2 304.13 K; Poling, Prausnitz and O'Connell, 5th ed., Appendix A, from
    memory). Measured states for the values (from memory): N2 at 30 MPa, 293.15 K, Z about 1.10
    (Span et al., J. Phys. Chem. Ref. Data 29 (2000) 1361); CO2 at 293.15 K: Z about 0.945 at
@@ -457,6 +458,13 @@ static void branch_labels_supercritical(void **state) {
     assert_int_equal(r.root_count, 1);
     assert_int_equal(r.branch, GK_ROOT_SUPERCRITICAL);
     assert_rel(r.z, 1.10, 0.05);
+    /* above Tc but below Pc (3.3958 MPa, Span et al. 2000, from memory): a gas, not a
+       supercritical fluid; Z about 0.9998 at 0.1 MPa (same source, from memory) */
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, n2, (gk_pressure){(gk_real)1.0e5}, t20,
+                               GK_ROOT_STABLE, &r), GK_OK);
+    assert_int_equal(r.root_count, 1);
+    assert_int_equal(r.branch, GK_ROOT_GAS);
+    assert_rel(r.z, 0.9998, 0.002);
     /* every root choice returns the lone root with the same label */
     assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, n2, (gk_pressure){(gk_real)3.0e7}, t20,
                                GK_ROOT_LIQUID, &r), GK_OK);
@@ -479,6 +487,11 @@ static void branch_labels_supercritical(void **state) {
                                        (gk_pressure){(gk_real)3.0e7}, t20, GK_ROOT_STABLE, &r),
                   GK_OK);
     assert_int_equal(r.branch, GK_ROOT_SUPERCRITICAL);
+    /* and below its pseudo-critical pressure (sum x_i Pc_i, about 3.7 MPa): a gas */
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &air, NULL,
+                                       (gk_pressure){(gk_real)1.0e6}, t20, GK_ROOT_STABLE, &r),
+                  GK_OK);
+    assert_int_equal(r.branch, GK_ROOT_GAS);
     assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &air, NULL,
                                        (gk_pressure){(gk_real)3.0e7}, (gk_temperature){(gk_real)120.0},
                                        GK_ROOT_STABLE, &r),

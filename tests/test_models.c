@@ -34,6 +34,11 @@ static void best_picks_and_reports(void **state) {
     assert_rel(r.z, 1.051, 2e-3);
     assert_int_equal(r.model, GK_EOS_SPAN_WAGNER);
     assert_int_equal(r.branch, GK_ROOT_SUPERCRITICAL);
+    /* at 1 bar, below N2's critical pressure 3.3958 MPa (same paper): a gas */
+    assert_status(
+        gk_eos_solve(GK_EOS_SPAN_WAGNER, gas("N2"), PA(1e5), KEL(293.15), GK_ROOT_STABLE, &s),
+        GK_OK);
+    assert_int_equal(s.branch, GK_ROOT_GAS);
     assert_status(gk_eos_solve(GK_EOS_BEST, gas("N2"), PA(2e7), KEL(293.15), GK_ROOT_STABLE, &s),
                   GK_OK);
     assert_int_equal(s.model, GK_EOS_SPAN_WAGNER);

@@ -53,8 +53,8 @@ gk_status use_model(const settings *set, const fluid_in *f, gk_pressure p, gk_te
 void rec_reference(record *r, const settings *set) { rec_text(r, "reference", set->ref_what); }
 
 /* The branch of a solved state, as the library labels it: a lone root above the model's
-   critical temperature (of a mixture, the pseudo-critical one) is GK_ROOT_SUPERCRITICAL, neither
-   gas nor liquid. */
+   critical temperature and pressure (of a mixture, the pseudo-critical ones) is
+   GK_ROOT_SUPERCRITICAL, neither gas nor liquid; above that temperature at lower pressure, gas. */
 typedef enum branch_kind {
     BRANCH_GAS,
     BRANCH_LIQUID,

@@ -47,8 +47,9 @@ typedef enum gk_root {
     GK_ROOT_STABLE, /**< the root with the lower fugacity (lower Gibbs energy) */
     GK_ROOT_GAS,    /**< the largest real root above the covolume */
     GK_ROOT_LIQUID, /**< the smallest real root above the covolume */
-    /** Output only: a lone root above the model's critical temperature (for a mixture, its
-     *  pseudo-critical temperature sum x_i Tc_i), neither gas nor liquid. As an input it is
+    /** Output only: a lone root above both the model's critical temperature and the gas's
+     *  critical pressure (for a mixture, the pseudo-critical sum x_i Tc_i and sum x_i Pc_i):
+     *  the supercritical-fluid region, neither gas nor liquid. As an input it is
      *  GK_ERR_ARGUMENT. */
     GK_ROOT_SUPERCRITICAL
 } gk_root;
@@ -157,8 +158,10 @@ typedef struct gk_eos_result {
     /** The branch returned: GK_ROOT_GAS or GK_ROOT_LIQUID for the root chosen among two or
      * three. A lone root is GK_ROOT_SUPERCRITICAL at T above the model's critical temperature
      * (for a mixture the pseudo-critical sum x_i Tc_i; Tc = 8 a / (27 R b) for van der Waals
-     * with the gas's handbook a, b), else GK_ROOT_LIQUID when it is denser than the model's
-     * critical density (Z/B < Zc/Omega_b), else GK_ROOT_GAS. The ideal gas: GK_ROOT_GAS.
+     * with the gas's handbook a, b) and p above the gas's critical pressure (for a mixture
+     * sum x_i Pc_i); GK_ROOT_GAS above that temperature at lower pressure; below it
+     * GK_ROOT_LIQUID when it is denser than the model's critical density (Z/B < Zc/Omega_b),
+     * else GK_ROOT_GAS. The ideal gas: GK_ROOT_GAS.
      */
     gk_root branch;
     /** The model that served: the one asked for, or with GK_EOS_BEST the one it chose. */

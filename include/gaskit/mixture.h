@@ -113,8 +113,8 @@ GK_API gk_status gk_mixture_molar_mass(const gk_mixture *mix, gk_molar_mass *out
  * @param t   Temperature, > 0 K.
  * @param root Which root where there are three (see gk_root).
  * @param[out] out Z, molar volume and fugacity coefficient of the chosen root, and all roots.
- * A lone root above the pseudo-critical temperature sum x_i Tc_i is labelled
- * GK_ROOT_SUPERCRITICAL. The mixture (composition, each component's data, k_ij) is checked
+ * A lone root above the pseudo-critical temperature sum x_i Tc_i and pressure sum x_i Pc_i
+ * is labelled GK_ROOT_SUPERCRITICAL (above that temperature at lower pressure: GK_ROOT_GAS). The mixture (composition, each component's data, k_ij) is checked
  * before the state (p, T, root).
  * @retval GK_ERR_DOMAIN Also for a component with non-physical data (molar mass, Tc, Pc,
  *         acentric factor) or a k_ij that is not finite, not symmetric, outside [-1, 1] or on
