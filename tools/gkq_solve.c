@@ -32,20 +32,6 @@ static void output_reference(const settings *set, int ref, gk_reference *out, ch
     copy_text(what, cap, set->ref_what);
 }
 
-static gk_status fluid_of(const settings *set, const args *a, gk_pressure p, gk_temperature t,
-                          fluid_in *f, record *r, detail *why) {
-    gk_status st = parse_fluid(a->w[0], a->wwhere[0], f, why);
-    if (st == GK_OK && set->has_rh) {
-        st = wet_fluid(f, set->rh, p, t, why);
-        if (st == GK_OK) {
-            rec_real(r, "rh", 100.0 * set->rh);
-            rec_real(r, "x_water", f->x_water);
-        }
-    }
-    if (st == GK_OK) { st = check_water(f, p, t, why); }
-    return st;
-}
-
 /* ------------------------------------------------------------------ flow */
 
 /* clang-format off */
@@ -94,7 +80,7 @@ gk_status word_flow(const settings *set, args *a, record *r, detail *why) {
     if ((st = all_used(a, 1, "flow", why)) != GK_OK) { return st; }
     if ((st = word_pressure(set, qp, 0, r, "barometer", &p, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
-    if ((st = fluid_of(set, a, p, t, &f, r, why)) != GK_OK) { return st; }
+    if ((st = word_fluid(set, a, p, t, &f, r, why)) != GK_OK) { return st; }
     if ((st = check_gas_phase(&f, p, t, NULL, why)) != GK_OK) { return st; }
     if ((st = use_model(set, &f, p, t, &mset, r)) != GK_OK) { return st; }
     set = &mset; /* from here on the concrete model (with best: the one chosen) */
