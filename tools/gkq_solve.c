@@ -138,7 +138,7 @@ static gk_status pressure_for_amount(const settings *set, const fluid_in *f, gk_
                                      gk_contents *c_out, detail *why) {
     double p0 = n_target * (double)GK_R * (double)t.k / (double)v.m3;
     double lo = p0 / 20.0, hi = p0 * 20.0, err;
-    int i, refused = 0;
+    int i, refused = 0, beyond;
     gk_pressure p;
     gk_contents c;
     gk_status st;
@@ -159,14 +159,16 @@ static gk_status pressure_for_amount(const settings *set, const fluid_in *f, gk_
     }
     p.pa = (gk_real)sqrt(lo * hi);
     st = gk_vessel_contents(set->model, as_fluid(f), v, p, t, set->ref, &c);
-    if ((st == GK_ERR_RANGE ||
-         (st == GK_OK && refused && (double)c.amount.mol < n_target * 0.999)) &&
-        (double)t.k >= f->tc_k) {
+    /* the amount lies where the model refuses the contents: above the critical temperature
+       outside its range, below it in the liquid */
+    beyond =
+        st == GK_ERR_RANGE || (st == GK_OK && refused && (double)c.amount.mol < n_target * 0.999);
+    if (beyond && (double)t.k >= f->tc_k) {
         say(why, "'%.80s': no pressure within the model's range holds that much at %.4g degC",
             f->text, (double)t.k - 273.15);
         return GK_ERR_RANGE;
     }
-    if (st == GK_ERR_RANGE || (st == GK_OK && refused && (double)c.amount.mol < n_target * 0.999)) {
+    if (beyond) {
         say(why,
             "'%.80s' cannot hold that much as a gas at %.4g degC: it liquefies first (a "
             "liquefied gas is filled and checked by weight)",
