@@ -99,4 +99,18 @@ static inline void gk_check_contract(const gk_contract_case *cases, size_t count
     }
 }
 
+/* ------------------------------------------------------------------ reference models off */
+/* The main of a suite of the reference-grade models when they are not built
+   (GASKIT_REFERENCE_MODELS=OFF): they must be refused. 0 when Span-Wagner gives
+   GK_ERR_NOT_FOUND, 1 otherwise. */
+static inline int gk_reference_models_refused(void) {
+    const gk_gas *n2 = NULL;
+    gk_eos_result r;
+    if (gk_gas_find("N2", &n2) != GK_OK) { return 1; }
+    return gk_eos_solve(GK_EOS_SPAN_WAGNER, n2, (gk_pressure){ (gk_real)1e5 },
+                        (gk_temperature){ (gk_real)300.0 }, GK_ROOT_STABLE, &r) == GK_ERR_NOT_FOUND
+               ? 0
+               : 1;
+}
+
 #endif /* GASKIT_TEST_H */

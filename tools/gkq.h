@@ -325,6 +325,8 @@ gk_status word_pressure(const settings *set, const quantity *q, int at_end, reco
                         const char *key, gk_pressure *out, detail *why);
 gk_status use_model(const settings *set, const fluid_in *f, gk_pressure p, gk_temperature t,
                     settings *out, record *r);
+gk_status word_fluid(const settings *set, const args *a, gk_pressure p, gk_temperature t,
+                     fluid_in *f, record *r, detail *why);
 void rec_reference(record *r, const settings *set);
 const char *branch_text(const gk_eos_result *res);
 

@@ -32,20 +32,6 @@ static void output_reference(const settings *set, int ref, gk_reference *out, ch
     copy_text(what, cap, set->ref_what);
 }
 
-static gk_status fluid_of(const settings *set, const args *a, gk_pressure p, gk_temperature t,
-                          fluid_in *f, record *r, detail *why) {
-    gk_status st = parse_fluid(a->w[0], a->wwhere[0], f, why);
-    if (st == GK_OK && set->has_rh) {
-        st = wet_fluid(f, set->rh, p, t, why);
-        if (st == GK_OK) {
-            rec_real(r, "rh", 100.0 * set->rh);
-            rec_real(r, "x_water", f->x_water);
-        }
-    }
-    if (st == GK_OK) { st = check_water(f, p, t, why); }
-    return st;
-}
-
 /* ------------------------------------------------------------------ flow */
 
 /* clang-format off */
@@ -94,7 +80,7 @@ gk_status word_flow(const settings *set, args *a, record *r, detail *why) {
     if ((st = all_used(a, 1, "flow", why)) != GK_OK) { return st; }
     if ((st = word_pressure(set, qp, 0, r, "barometer", &p, why)) != GK_OK) { return st; }
     if ((st = to_temperature(qt, &t, why)) != GK_OK) { return st; }
-    if ((st = fluid_of(set, a, p, t, &f, r, why)) != GK_OK) { return st; }
+    if ((st = word_fluid(set, a, p, t, &f, r, why)) != GK_OK) { return st; }
     if ((st = check_gas_phase(&f, p, t, NULL, why)) != GK_OK) { return st; }
     if ((st = use_model(set, &f, p, t, &mset, r)) != GK_OK) { return st; }
     set = &mset; /* from here on the concrete model (with best: the one chosen) */
@@ -152,7 +138,7 @@ static gk_status pressure_for_amount(const settings *set, const fluid_in *f, gk_
                                      gk_contents *c_out, detail *why) {
     double p0 = n_target * (double)GK_R * (double)t.k / (double)v.m3;
     double lo = p0 / 20.0, hi = p0 * 20.0, err;
-    int i, refused = 0;
+    int i, refused = 0, beyond;
     gk_pressure p;
     gk_contents c;
     gk_status st;
@@ -173,14 +159,16 @@ static gk_status pressure_for_amount(const settings *set, const fluid_in *f, gk_
     }
     p.pa = (gk_real)sqrt(lo * hi);
     st = gk_vessel_contents(set->model, as_fluid(f), v, p, t, set->ref, &c);
-    if ((st == GK_ERR_RANGE ||
-         (st == GK_OK && refused && (double)c.amount.mol < n_target * 0.999)) &&
-        (double)t.k >= f->tc_k) {
+    /* the amount lies where the model refuses the contents: above the critical temperature
+       outside its range, below it in the liquid */
+    beyond =
+        st == GK_ERR_RANGE || (st == GK_OK && refused && (double)c.amount.mol < n_target * 0.999);
+    if (beyond && (double)t.k >= f->tc_k) {
         say(why, "'%.80s': no pressure within the model's range holds that much at %.4g degC",
             f->text, (double)t.k - 273.15);
         return GK_ERR_RANGE;
     }
-    if (st == GK_ERR_RANGE || (st == GK_OK && refused && (double)c.amount.mol < n_target * 0.999)) {
+    if (beyond) {
         say(why,
             "'%.80s' cannot hold that much as a gas at %.4g degC: it liquefies first (a "
             "liquefied gas is filled and checked by weight)",

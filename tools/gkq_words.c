@@ -21,6 +21,13 @@ gk_status word_pressure(const settings *set, const quantity *q, int at_end, reco
     return st;
 }
 
+/* The state of a gas or a mixture under a model, on the root asked. */
+static gk_status solve_fluid(gk_eos model, const fluid_in *f, gk_pressure p, gk_temperature t,
+                             gk_root root, gk_eos_result *res) {
+    if (f->is_mix) { return gk_mixture_eos_solve(model, &f->mix, NULL, p, t, root, res); }
+    return gk_eos_solve(model, f->gas, p, t, root, res);
+}
+
 /* The concrete model for a fluid at a state, in *out (a copy of set): -m, or with best the one
    the library picks there (Span-Wagner or the hydrogen equation where they cover the fluid,
    else Peng-Robinson); where the pick does not cover the state (outside its temperature or
@@ -32,11 +39,7 @@ gk_status use_model(const settings *set, const fluid_in *f, gk_pressure p, gk_te
     gk_status st = GK_OK;
     *out = *set;
     if (set->model == GK_EOS_BEST) {
-        if (f->is_mix) {
-            st = gk_mixture_eos_solve(GK_EOS_BEST, &f->mix, NULL, p, t, GK_ROOT_STABLE, &res);
-        } else {
-            st = gk_eos_solve(GK_EOS_BEST, f->gas, p, t, GK_ROOT_STABLE, &res);
-        }
+        st = solve_fluid(GK_EOS_BEST, f, p, t, GK_ROOT_STABLE, &res);
         if (st == GK_OK) {
             out->model = res.model;
         } else if (st == GK_ERR_RANGE) {
@@ -95,8 +98,8 @@ static gk_status check_branch(const settings *set, const gk_eos_result *res, con
 
 /* The fluid of a word, made wet when --rh (or an rh column) was given, and checked: no
    supersaturated water at the state. */
-static gk_status word_fluid(const settings *set, const args *a, gk_pressure p, gk_temperature t,
-                            fluid_in *f, record *r, detail *why) {
+gk_status word_fluid(const settings *set, const args *a, gk_pressure p, gk_temperature t,
+                     fluid_in *f, record *r, detail *why) {
     gk_status st = parse_fluid(a->w[0], a->wwhere[0], f, why);
     if (st == GK_OK && set->has_rh) {
         st = wet_fluid(f, set->rh, p, t, why);
@@ -165,11 +168,7 @@ gk_status word_state(const settings *set, args *a, record *r, detail *why) {
         st = check_gas_phase(&f, p, t, "the ideal gas has no liquid", why);
         if (st != GK_OK) { return st; }
     }
-    if (f.is_mix) {
-        st = gk_mixture_eos_solve(set->model, &f.mix, NULL, p, t, set->root, &res);
-    } else {
-        st = gk_eos_solve(set->model, f.gas, p, t, set->root, &res);
-    }
+    st = solve_fluid(set->model, &f, p, t, set->root, &res);
     if (st != GK_OK) { return explain(st, "state of", &f, why); }
     if ((st = check_branch(set, &res, &f, why)) != GK_OK) { return st; }
     if ((st = gk_ideal_density(p, t, f.m, &rho_i)) != GK_OK) {

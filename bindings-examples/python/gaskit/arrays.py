@@ -34,29 +34,35 @@ __all__ = ["ArrayResult", "ContentsArrays", "density", "z", "contents", "amount"
            "flow_to_reference", "mass_flow", "dry_gas_pressure", "ideal_density"]
 
 
+# The per-element status helpers of the result tuples (NamedTuple takes no base class).
+def _ok(self):
+    """Boolean mask of the elements computed (status GK_OK)."""
+    return self.status == 0
+
+
+def _failed(self):
+    """Number of failed elements."""
+    return int(np.count_nonzero(self.status))
+
+
+def _raise_for_status(self):
+    """Raises the exception of the first failed element, if any; returns self otherwise."""
+    _raise_first(self.status, None)
+    return self
+
+
 class ArrayResult(NamedTuple):
     """``value``: the results (NaN where an element failed); ``status``: per-element status."""
     value: np.ndarray
     status: np.ndarray
 
-    @property
-    def ok(self):
-        """Boolean mask of the elements computed (status GK_OK)."""
-        return self.status == 0
-
-    @property
-    def failed(self):
-        """Number of failed elements."""
-        return int(np.count_nonzero(self.status))
+    ok = property(_ok)
+    failed = property(_failed)
+    raise_for_status = _raise_for_status
 
     def status_names(self):
         """The C names of the statuses, as an array of str."""
         return np.asarray(STATUS_NAMES, dtype=object)[np.clip(self.status, 0, 7)]
-
-    def raise_for_status(self):
-        """Raises the exception of the first failed element, if any; returns self otherwise."""
-        _raise_first(self.status, None)
-        return self
 
 
 class ContentsArrays(NamedTuple):
@@ -67,20 +73,9 @@ class ContentsArrays(NamedTuple):
     reference_volume: np.ndarray
     status: np.ndarray
 
-    @property
-    def ok(self):
-        """Boolean mask of the elements computed (status GK_OK)."""
-        return self.status == 0
-
-    @property
-    def failed(self):
-        """Number of failed elements."""
-        return int(np.count_nonzero(self.status))
-
-    def raise_for_status(self):
-        """Raises the exception of the first failed element, if any; returns self otherwise."""
-        _raise_first(self.status, None)
-        return self
+    ok = property(_ok)
+    failed = property(_failed)
+    raise_for_status = _raise_for_status
 
 
 def _dtype():
