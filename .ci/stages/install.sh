@@ -49,7 +49,7 @@ export PKG_CONFIG_PATH="$prefix/lib/pkgconfig"
 # shellcheck disable=SC2046
 gcc -std=c99 tests/install/consumer.c $(pkg-config --cflags --libs gaskit) -o build-install/consumer_pc
 LD_LIBRARY_PATH="$prefix/lib" build-install/consumer_pc
-echo "summary: install: headers, libgaskit.a, libgaskit.so.0, gaskit.pc and the CMake package work from a scratch prefix: find_package (shared, static) and pkg-config consumers pass; libm exported by name"
+echo "summary: install: headers, libgaskit.a, libgaskit.so (SONAME libgaskit.so.0.2), gaskit.pc and the CMake package work from a scratch prefix: find_package (shared, static) and pkg-config consumers pass; libm exported by name"
 
 # 2b. A static-only package (GASKIT_SHARED=OFF): gaskit::gaskit and gaskit::gaskit_static both exist.
 cmake -B build-install-lib-static -DGASKIT_SHARED=OFF -DGASKIT_TESTS=OFF -DGASKIT_EXAMPLES=OFF \

@@ -101,9 +101,17 @@ GK_API size_t gk_fluid_z_batch(gk_eos eos, gk_fluid fluid, size_t count, const g
  *
  * A liquid stable state in the vessel (a liquefied-gas cylinder) is GK_ERR_RANGE: such
  * containers are weighed, their contents do not follow from pressure.
- * @param out_mol Amounts in mol (required).
- * @param out_kg Masses in kg, or NULL when not wanted.
- * @param out_reference_m3 Volumes at @p ref in m3, or NULL when not wanted.
+ * @param eos Model.
+ * @param fluid The gas or mixture (k_ij optional).
+ * @param ref Reference condition of the reference volumes.
+ * @param count Number of elements.
+ * @param v_m3 Internal volumes of the vessels in m3.
+ * @param p_pa Absolute pressures in Pa.
+ * @param t_k Temperatures in K.
+ * @param[out] out_mol Amounts in mol (required).
+ * @param[out] out_kg Masses in kg, or NULL when not wanted.
+ * @param[out] out_reference_m3 Volumes at @p ref in m3, or NULL when not wanted.
+ * @param[out] status_out Status per element, or NULL.
  * @return Number of elements with status GK_OK.
  */
 GK_API size_t gk_vessel_contents_batch(gk_eos eos, gk_fluid fluid, gk_reference ref, size_t count,
@@ -137,7 +145,12 @@ GK_API size_t gk_flow_to_mass_batch(gk_eos eos, gk_fluid fluid, size_t count,
  *
  * p_ws is the vapour pressure of water (IAPWS-IF97) at and above 273.16 K, of ice (IAPWS 2011)
  * below; the enhancement factor of moist gas (about 1.004 near ambient) is neglected.
+ * @param count Number of elements.
+ * @param p_pa Absolute pressures of the wet gas in Pa.
+ * @param t_k Temperatures in K.
  * @param relative_humidity Relative humidities as fractions in [0, 1].
+ * @param[out] out_pa Partial pressures of the dry gas in Pa.
+ * @param[out] status_out Status per element, or NULL.
  * @return Number of elements with status GK_OK.
  */
 GK_API size_t gk_dry_gas_pressure_batch(size_t count, const gk_real *p_pa, const gk_real *t_k,
