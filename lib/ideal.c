@@ -1,7 +1,7 @@
 /*
  * ideal.c - the ideal gas law p V = n R T, changes of state and Dalton's law.
  *
- * R = GK_R = 8.314462618 J/(mol K), the 10 digits CODATA 2018 prints (fixed by API.md); the
+ * R = GK_R = 8.314462618 J/(mol K), the 10 digits CODATA 2018 prints (GK_R in base.h); the
  * exact N_A k = 8.31446261815324 J/(mol K) (SI 2019 defining constants) is 1.8e-11 relative
  * larger. Every formula is a product of ratios evaluated by gk_scaled_product()
  * (gk_scaled.h): no intermediate over/underflow, a GK_OK result is finite and of normal
