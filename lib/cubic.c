@@ -79,7 +79,8 @@ static cubic_iter cubic_halley(const cubic_poly *p, gk_real x0, gk_real lo, gk_r
                                gk_real *root) {
     gk_real x = x0;
     gk_real fx = cubic_f(p, x);
-    gk_real d1, d2, den, dx, xn, fn;
+    gk_real xn = x0;
+    gk_real d1, d2, den, dx, fn;
     int i;
     bool done = false;
     bool finite = cubic_isfinite(fx);
@@ -358,7 +359,9 @@ static int cubic_isolate_monotonic(const cubic_poly *p, const cubic_ctx *c, gk_r
     const gk_real fs = cubic_f(p, s);
     gk_real x0, ds, dist;
     cubic_iter it = CUBIC_CONVERGED;
-    if (!cubic_nonzero(fs)) {
+    if (!cubic_isfinite(fs)) {
+        it = CUBIC_FAILED;
+    } else if (!cubic_nonzero(fs)) {
         r[0] = s;
     } else if ((fs < GK_LIT(0.0)) && c->have_known) {
         r[0] = c->rknown; /* the convex iteration converged above s, where f is increasing */
@@ -497,10 +500,12 @@ static int cubic_output(const gk_real r_in[3], int n, gk_real lo, int e, gk_real
             out += 1;
         }
     }
-    for (i = 0; i < 3; ++i) {
-        v = (i < out) ? r[i] : GK_LIT(0.0);
-        z[i] = ((e != 0) && (i < out)) ? gk_ldexp(v, e) : v;
+    for (i = 0; i < out; ++i) {
+        /* unscaled, a root beyond the largest gk_real (coefficients near it) is not finite */
+        if (e != 0) { r[i] = gk_ldexp(r[i], e); }
+        if (!cubic_isfinite(r[i])) { return -1; /* before z[] is written */ }
     }
+    for (i = 0; i < 3; ++i) { z[i] = r[i]; }
     return out;
 }
 

@@ -426,7 +426,8 @@ static gk_status gk_add_finite(gk_real a, gk_real b, gk_real *sum) {
 gk_status gk_pressure_from_gauge(gk_real value, gk_unit unit, gk_pressure ambient,
                                  gk_pressure *out) {
     const gk_unit_row *u = gk_unit_row_of(unit);
-    gk_real delta = GK_LIT(0.0), p;
+    gk_real delta = GK_LIT(0.0);
+    gk_real p = GK_LIT(0.0);
     gk_status s;
     if (out == NULL || u == NULL || u->dim != GK_DIM_PRESSURE) { return GK_ERR_ARGUMENT; }
     if (!gk_finite(value) || !gk_positive(ambient.pa)) { return GK_ERR_DOMAIN; }
