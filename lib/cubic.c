@@ -63,7 +63,9 @@ static gk_real cubic_df(const cubic_poly *p, gk_real z) {
 
 static bool cubic_nonzero(gk_real x) { return (x < GK_LIT(0.0)) || (x > GK_LIT(0.0)); }
 
-static bool cubic_isfinite(gk_real x) { return gk_finite(x) != 0; }
+/* x is finite (NaN and both infinities fail), written as two comparisons in the caller's
+   condition so that an analyser sees the bound on the branch that uses x. */
+#define CUBIC_ISFINITE(x) (((x) >= -GK_REAL_MAX) && ((x) <= GK_REAL_MAX))
 
 /*
  * Halley's iteration (cubically convergent: x - f f' / (f'^2 - f f''/2)) from x0 inside (lo, hi),
@@ -83,7 +85,7 @@ static cubic_iter cubic_halley(const cubic_poly *p, gk_real x0, gk_real lo, gk_r
     gk_real d1, d2, den, dx, fn;
     int i;
     bool done = false;
-    bool finite = cubic_isfinite(fx);
+    bool finite = CUBIC_ISFINITE(fx);
     for (i = 0; (i < GK_CUBIC_ITER_MAX) && !done && finite; ++i) {
         d1 = cubic_df(p, x);
         d2 = (GK_LIT(6.0) * x) + (GK_LIT(2.0) * p->c2);
@@ -112,12 +114,12 @@ static cubic_iter cubic_halley(const cubic_poly *p, gk_real x0, gk_real lo, gk_r
             } else {
                 x = xn;
                 fx = fn;
-                finite = cubic_isfinite(fn);
+                finite = CUBIC_ISFINITE(fn);
             }
         }
     }
     *root = x;
-    return (done && finite && cubic_isfinite(x)) ? CUBIC_CONVERGED : CUBIC_FAILED;
+    return (done && finite && CUBIC_ISFINITE(x)) ? CUBIC_CONVERGED : CUBIC_FAILED;
 }
 
 /* One step of cubic_descend() from x (f(x) = fx != 0): *xn, and whether the error left after it
@@ -178,7 +180,7 @@ static cubic_iter cubic_descend(const cubic_poly *p, gk_real x0, gk_real s, gk_r
     bool done = false;
     bool left = false;
     bool last = false;
-    bool finite = cubic_isfinite(fx);
+    bool finite = CUBIC_ISFINITE(fx);
     for (i = 0; (i < GK_CUBIC_ITER_MAX) && !done && finite; ++i) {
         if (!cubic_nonzero(fx)) {
             done = true;
@@ -195,12 +197,12 @@ static cubic_iter cubic_descend(const cubic_poly *p, gk_real x0, gk_real s, gk_r
             } else {
                 x = xn;
                 fx = fn;
-                finite = cubic_isfinite(fn);
+                finite = CUBIC_ISFINITE(fn);
             }
         }
     }
     if (left) { return CUBIC_LEFT; }
-    if (!done || !finite || !cubic_isfinite(x)) { return CUBIC_FAILED; }
+    if (!done || !finite || !CUBIC_ISFINITE(x)) { return CUBIC_FAILED; }
     *root = x;
     return CUBIC_CONVERGED;
 }
@@ -322,14 +324,14 @@ static int cubic_isolate_critical(const cubic_poly *p, const cubic_ctx *c, gk_re
                                   gk_real r[3]) {
     gk_real z1, z2, sd, f1, f2, x0;
     int n;
-    cubic_iter it;
+    cubic_iter it = CUBIC_CONVERGED;
     cubic_critical(p, dd, &z1, &z2, &sd);
     f2 = cubic_f(p, z2); /* local minimum */
     if (f2 <= GK_LIT(0.0)) {
         it = cubic_largest(p, c, z2, f2, sd, &r[2]);
         f1 = cubic_f(p, z1); /* local maximum */
         if (it != CUBIC_CONVERGED) {
-            n = -1;
+            n = 0; /* made -1 below */
         } else if ((f1 < GK_LIT(0.0)) || ((c->lo > z1) && (cubic_f(p, c->lo) < GK_LIT(0.0)))) {
             /* one real root; or three, but f(lo) < 0 right of z1 puts lo between the middle and
                the largest root: only the largest is above lo (for an equation of state, B) */
@@ -337,7 +339,7 @@ static int cubic_isolate_critical(const cubic_poly *p, const cubic_ctx *c, gk_re
             n = 1;
         } else {
             it = cubic_smaller_roots(p, z1, z2, f1, f2, sd, r);
-            n = (it == CUBIC_CONVERGED) ? 3 : -1;
+            n = 3;
         }
     } else if (z1 <= c->lo) {
         n = 0; /* one real root, below z1 <= lo */
@@ -346,8 +348,9 @@ static int cubic_isolate_critical(const cubic_poly *p, const cubic_ctx *c, gk_re
         f1 = cubic_f(p, z1);
         x0 = z1 - gk_sqrt(f1 / sd);
         it = cubic_halley(p, x0, x0 - (z1 - x0) - GK_LIT(1.0), z1, &r[0]);
-        n = (it == CUBIC_CONVERGED) ? 1 : -1;
+        n = 1;
     }
+    if (it != CUBIC_CONVERGED) { n = -1; }
     return n;
 }
 
@@ -359,7 +362,7 @@ static int cubic_isolate_monotonic(const cubic_poly *p, const cubic_ctx *c, gk_r
     const gk_real fs = cubic_f(p, s);
     gk_real x0, ds, dist;
     cubic_iter it = CUBIC_CONVERGED;
-    if (!cubic_isfinite(fs)) {
+    if (!CUBIC_ISFINITE(fs)) {
         it = CUBIC_FAILED;
     } else if (!cubic_nonzero(fs)) {
         r[0] = s;
@@ -385,7 +388,7 @@ static int cubic_isolate_monotonic(const cubic_poly *p, const cubic_ctx *c, gk_r
             it = cubic_halley(p, x0, x0 - dist - GK_LIT(1.0), s, &r[0]);
         }
     }
-    return (it == CUBIC_CONVERGED) ? 1 : -1;
+    return (it == CUBIC_CONVERGED) ? 1 : (-1);
 }
 
 /*
@@ -399,7 +402,7 @@ static int cubic_isolate_monotonic(const cubic_poly *p, const cubic_ctx *c, gk_r
 static int cubic_isolate(const cubic_poly *p, const cubic_ctx *c, gk_real r[3]) {
     const gk_real dd = (p->c2 * p->c2) - (GK_LIT(3.0) * p->c1);
     int n;
-    if (!cubic_isfinite(dd)) {
+    if (!CUBIC_ISFINITE(dd)) {
         n = -1;
     } else if (dd > GK_LIT(0.0)) {
         n = cubic_isolate_critical(p, c, dd, r);
@@ -491,7 +494,7 @@ static int cubic_output(const gk_real r_in[3], int n, gk_real lo, int e, gk_real
     int out = 0;
     int i;
     for (i = 0; i < n; ++i) {
-        if (!cubic_isfinite(r_in[i])) { return -1; /* before z[] is written */ }
+        if (!CUBIC_ISFINITE(r_in[i])) { return -1; /* before z[] is written */ }
     }
     for (i = 0; i < n; ++i) {
         v = r_in[i];
@@ -500,12 +503,15 @@ static int cubic_output(const gk_real r_in[3], int n, gk_real lo, int e, gk_real
             out += 1;
         }
     }
-    for (i = 0; i < out; ++i) {
+    for (i = 0; i < 3; ++i) {
         /* unscaled, a root beyond the largest gk_real (coefficients near it) is not finite */
-        if (e != 0) { r[i] = gk_ldexp(r[i], e); }
-        if (!cubic_isfinite(r[i])) { return -1; /* before z[] is written */ }
+        v = ((e != 0) && (i < out)) ? gk_ldexp(r[i], e) : r[i];
+        if (!CUBIC_ISFINITE(v)) { return -1; /* before z[] is written */ }
+        r[i] = v;
     }
-    for (i = 0; i < 3; ++i) { z[i] = r[i]; }
+    z[0] = r[0];
+    z[1] = r[1];
+    z[2] = r[2];
     return out;
 }
 
@@ -518,7 +524,7 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
     int n = 0;
     int e;
 
-    if (!cubic_isfinite(c2) || !cubic_isfinite(c1) || !cubic_isfinite(c0) || isnan(lo) ||
+    if (!CUBIC_ISFINITE(c2) || !CUBIC_ISFINITE(c1) || !CUBIC_ISFINITE(c0) || isnan(lo) ||
         isnan(hi)) {
         return -1;
     }
@@ -548,7 +554,7 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
     /* 3. the largest root first where f(s) < 0; where f(s) > 0 a root lies left of s, and the
        isolation sorts out the rest */
     if (c.have_hi && (fs < GK_LIT(0.0))) { n = cubic_convex_first(&p, &c, s, dd, r); }
-    if ((n == 1) && (e == 0) && (c.rknown > c.lo) && cubic_isfinite(c.rknown)) {
+    if ((n == 1) && (e == 0) && (c.rknown > c.lo) && CUBIC_ISFINITE(c.rknown)) {
         /* the common case of an equation of state: one root above lo, no scaling */
         z[0] = c.rknown;
         z[1] = GK_LIT(0.0);

@@ -44,9 +44,11 @@ static const gk_real gk__pow10[GK__POW10_MAX + 1] = {
 
 static bool gk__is_digit(char c) { return (c >= '0') && (c <= '9'); }
 
-/* The value of a digit character (the caller has checked gk__is_digit). */
+/* The value of a digit character, 0 for any other character (the caller has checked). */
 static uint32_t gk__digit_value(char c) {
-    return (uint32_t)((unsigned char)c - (unsigned char)'0');
+    uint32_t v = 0u;
+    if ((c >= '0') && (c <= '9')) { v = (uint32_t)(unsigned char)c - 48u; /* '0' is 48 */ }
+    return v;
 }
 
 typedef struct gk__digits {
@@ -83,18 +85,25 @@ static void gk__take_digit(gk__digits *s, uint32_t d, bool in_fraction) {
 }
 
 /* Reads the digits of text[*i .. limit) into s; at most GK__DECIMAL_MAX_DIGITS digits in all
-   (false when there are more: a malformed number). The loop reads at most
+   (false when there are more: a malformed number). The loop looks at no more than
    GK__DECIMAL_MAX_DIGITS + 1 characters. */
 static bool gk__scan_digits(const char *text, size_t limit, size_t *i, gk__digits *s,
                             bool in_fraction) {
     size_t k = *i;
     bool ok = true;
-    while ((k < limit) && gk__is_digit(text[k]) && ok) {
-        if (s->count >= GK__DECIMAL_MAX_DIGITS) {
-            ok = false;
+    bool more = true;
+    int32_t n;
+    for (n = 0; (n <= GK__DECIMAL_MAX_DIGITS) && more; ++n) {
+        if ((k < limit) && gk__is_digit(text[k])) {
+            if (s->count >= GK__DECIMAL_MAX_DIGITS) {
+                ok = false;
+                more = false;
+            } else {
+                gk__take_digit(s, gk__digit_value(text[k]), in_fraction);
+                k += 1u;
+            }
         } else {
-            gk__take_digit(s, gk__digit_value(text[k]), in_fraction);
-            k += 1u;
+            more = false;
         }
     }
     *i = k;

@@ -21,20 +21,19 @@
 
 #include "gk_scaled.h"
 
-/* Dimensions; the typed functions check that a unit belongs to theirs. */
-enum gk_dim {
-    GK_DIM_PRESSURE,
-    GK_DIM_TEMPERATURE,
-    GK_DIM_VOLUME,
-    GK_DIM_AMOUNT,
-    GK_DIM_MOLAR_MASS,
-    GK_DIM_MOLAR_VOLUME,
-    GK_DIM_DENSITY,
-    GK_DIM_SPEED,
-    GK_DIM_MASS,
-    GK_DIM_VOLUME_FLOW,
-    GK_DIM_MASS_FLOW
-};
+/* Dimensions (unsigned constants, the type of a row's dim field); the typed functions check
+ * that a unit belongs to theirs. */
+#define GK_DIM_PRESSURE 0u
+#define GK_DIM_TEMPERATURE 1u
+#define GK_DIM_VOLUME 2u
+#define GK_DIM_AMOUNT 3u
+#define GK_DIM_MOLAR_MASS 4u
+#define GK_DIM_MOLAR_VOLUME 5u
+#define GK_DIM_DENSITY 6u
+#define GK_DIM_SPEED 7u
+#define GK_DIM_MASS 8u
+#define GK_DIM_VOLUME_FLOW 9u
+#define GK_DIM_MASS_FLOW 10u
 
 /* The symbol is held in the row (the longest, "cm3/mol" and "ft3/min", has 7 characters), so
  * a row needs no pointer and the table no separate strings (firmware size). In the float build
@@ -50,7 +49,7 @@ typedef struct gk_unit_row {
     gk_real num; /* one unit (after the offset) is num / den SI units */
     gk_real den;
 #endif
-    unsigned char dim; /* enum gk_dim */
+    unsigned char dim; /* GK_DIM_... */
 } gk_unit_row;
 
 /* clang-format off */
@@ -169,11 +168,11 @@ static const gk_unit_alias gk_unit_aliases[] = {
     { "kgf/cm2", GK_UNIT_AT },
     { "psia", GK_UNIT_PSI },            /* absolute psi: gaskit pressures are absolute */
     { "lbf/in2", GK_UNIT_PSI },
-    { "\xC2\xB0" "C", GK_UNIT_DEGC },   /* U+00B0 DEGREE SIGN, C */
+    { "\xC2\xB0\x43", GK_UNIT_DEGC },   /* U+00B0 DEGREE SIGN, C (0x43) */
     { "\xE2\x84\x83", GK_UNIT_DEGC },   /* U+2103 DEGREE CELSIUS */
-    { "\xC2\xB0" "F", GK_UNIT_DEGF },   /* U+00B0 DEGREE SIGN, F */
+    { "\xC2\xB0\x46", GK_UNIT_DEGF },   /* U+00B0 DEGREE SIGN, F (0x46) */
     { "\xE2\x84\x89", GK_UNIT_DEGF },   /* U+2109 DEGREE FAHRENHEIT */
-    { "\xC2\xB0" "R", GK_UNIT_DEGR },   /* U+00B0 DEGREE SIGN, R */
+    { "\xC2\xB0\x52", GK_UNIT_DEGR },   /* U+00B0 DEGREE SIGN, R (0x52) */
     { "m^3", GK_UNIT_M3 },
     { "l", GK_UNIT_L },
     { "dm3", GK_UNIT_L },
@@ -200,7 +199,7 @@ static const gk_unit_alias gk_unit_aliases[] = {
 
 /* Dimensions whose values must be > 0 in the typed functions (absolute quantities); speed and
  * the flows may take any finite value (direction of flow or motion). */
-static bool gk_dim_positive(enum gk_dim dim) {
+static bool gk_dim_positive(unsigned int dim) {
     return (dim != GK_DIM_SPEED) && (dim != GK_DIM_VOLUME_FLOW) && (dim != GK_DIM_MASS_FLOW);
 }
 
@@ -300,7 +299,7 @@ static gk_status gk_to_si(const gk_unit_row *u, gk_real value, gk_real *si) {
     gk_real x;
     if (!gk_finite(value)) { return GK_ERR_DOMAIN; }
     x = value + gk_unit_offset(u); /* offset <= 459.67: cannot overflow a finite value */
-    if (u->dim == GK_DIM_TEMPERATURE && x < GK_LIT(0.0)) { return GK_ERR_DOMAIN; }
+    if ((unsigned int)u->dim == GK_DIM_TEMPERATURE && x < GK_LIT(0.0)) { return GK_ERR_DOMAIN; }
     return gk_scale(x, ROW_TO_SI(u), si);
 }
 
@@ -309,7 +308,7 @@ static gk_status gk_from_si(const gk_unit_row *u, gk_real si, gk_real *value) {
     gk_real x = GK_LIT(0.0);
     gk_status s;
     if (!gk_finite(si)) { return GK_ERR_DOMAIN; }
-    if (u->dim == GK_DIM_TEMPERATURE && si < GK_LIT(0.0)) { return GK_ERR_DOMAIN; }
+    if ((unsigned int)u->dim == GK_DIM_TEMPERATURE && si < GK_LIT(0.0)) { return GK_ERR_DOMAIN; }
     s = gk_scale(si, ROW_FROM_SI(u), &x);
     if (s != GK_OK) { return s; }
     *value = x - gk_unit_offset(u);
@@ -329,11 +328,11 @@ gk_status gk_convert(gk_real value, gk_unit from, gk_unit to, gk_real *out) {
 }
 
 /* Typed constructor: value in unit (of dimension dim) -> SI value in *out. */
-static gk_status quantity_from(gk_real value, gk_unit unit, enum gk_dim dim, gk_real *out) {
+static gk_status quantity_from(gk_real value, gk_unit unit, unsigned int dim, gk_real *out) {
     const gk_unit_row *u = gk_unit_row_of(unit);
     gk_real si = GK_LIT(0.0);
     gk_status s;
-    if (out == NULL || u == NULL || u->dim != dim) { return GK_ERR_ARGUMENT; }
+    if (out == NULL || u == NULL || (unsigned int)u->dim != dim) { return GK_ERR_ARGUMENT; }
     if (!gk_finite(value)) { return GK_ERR_DOMAIN; }
     /* sign first, so a tiny negative value is a domain error rather than an underflow */
     if (gk_dim_positive(dim) && dim != GK_DIM_TEMPERATURE && !(value > GK_LIT(0.0))) {
@@ -347,11 +346,11 @@ static gk_status quantity_from(gk_real value, gk_unit unit, enum gk_dim dim, gk_
 }
 
 /* Typed accessor: SI value si (of dimension dim) -> value in unit, in *out. */
-static gk_status quantity_to(gk_real si, gk_unit unit, enum gk_dim dim, gk_real *out) {
+static gk_status quantity_to(gk_real si, gk_unit unit, unsigned int dim, gk_real *out) {
     const gk_unit_row *u = gk_unit_row_of(unit);
     gk_real r = GK_LIT(0.0);
     gk_status s;
-    if (out == NULL || u == NULL || u->dim != dim) { return GK_ERR_ARGUMENT; }
+    if (out == NULL || u == NULL || (unsigned int)u->dim != dim) { return GK_ERR_ARGUMENT; }
     if (!gk_finite(si)) { return GK_ERR_DOMAIN; }
     if (gk_dim_positive(dim) && !(si > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
     s = gk_from_si(u, si, &r);
@@ -429,7 +428,9 @@ gk_status gk_pressure_from_gauge(gk_real value, gk_unit unit, gk_pressure ambien
     gk_real delta = GK_LIT(0.0);
     gk_real p = GK_LIT(0.0);
     gk_status s;
-    if (out == NULL || u == NULL || u->dim != GK_DIM_PRESSURE) { return GK_ERR_ARGUMENT; }
+    if (out == NULL || u == NULL || (unsigned int)u->dim != GK_DIM_PRESSURE) {
+        return GK_ERR_ARGUMENT;
+    }
     if (!gk_finite(value) || !gk_positive(ambient.pa)) { return GK_ERR_DOMAIN; }
     s = gk_scale(value, ROW_TO_SI(u), &delta); /* a pressure difference: no offset */
     if (s != GK_OK) { return s; }
