@@ -68,7 +68,7 @@ typedef struct gk_unit_row {
 /* SP 811 = NIST Special Publication 811 (2008 edition), Appendix B.8 / B.9 (factors in
  * alphabetical order / by kind of quantity). Where SP 811 prints a rounded factor the exact
  * definition it rests on is used and the printed figure given for comparison. */
-static const gk_unit_row gk_units[] = {
+static const gk_unit_row gk_units[GK_UNIT_COUNT] = {
     /* ---- pressure, SI unit Pa */
     [GK_UNIT_PA]   = ROW(PRESSURE, "Pa",   1.0, 1.0),
     [GK_UNIT_HPA]  = ROW(PRESSURE, "hPa",  100.0, 1.0),          /* SI prefix hecto */
@@ -153,9 +153,9 @@ static const gk_unit_row gk_units[] = {
     [GK_UNIT_LB_PER_H]  = ROW(MASS_FLOW, "lb/h",  0.45359237, 3600.0),
 };
 
-/* Compile-time check (C99 has no _Static_assert): one row per gk_unit. */
-typedef char gk_units_table_has_one_row_per_unit
-    [(sizeof gk_units / sizeof gk_units[0] == (size_t)GK_UNIT_COUNT) ? 1 : -1];
+/* The table is sized by GK_UNIT_COUNT and filled by designated initialisers in enum order; a row
+   left out would have an empty symbol, which tests/test_units.c (table_covers_every_unit)
+   rejects. */
 
 /* Extra spellings accepted by gk_unit_parse() besides the symbols of the table. */
 /* The text is held in the entry (the longest, "cm^3/mol" and "ft^3/min", has 8 bytes): no
