@@ -515,33 +515,48 @@ static int cubic_output(const gk_real r_in[3], int n, gk_real lo, int e, gk_real
     return out;
 }
 
+/* Finite coefficients; bounds that are not NaN (infinite bounds mean "none"). */
+static bool cubic_inputs_ok(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi) {
+    return CUBIC_ISFINITE(c2) && CUBIC_ISFINITE(c1) && CUBIC_ISFINITE(c0) && !isnan(lo) &&
+           !isnan(hi);
+}
+
+/* Every root has |z| <= 1 + |c2| + |c1| + |c0| (a Cauchy-type bound, common practice): bounds
+   farther out are moved to it, so that no iteration starts at an absurd distance (which would
+   cost one step per halving of it). The roots above lo and below hi stay the same. */
+static void cubic_clamp_bounds(const cubic_poly *p, cubic_ctx *c) {
+    const gk_real bound = GK_LIT(1.0) + gk_fabs(p->c2) + gk_fabs(p->c1) + gk_fabs(p->c0);
+    if (c->hi > bound) { c->hi = bound; }
+    if (c->lo < -bound) { c->lo = -bound; }
+}
+
 int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, gk_real guess,
                     gk_real z[3]) {
     cubic_poly p;
     cubic_ctx c;
     gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
-    gk_real s, fs, dd, g, bound;
+    gk_real s, fs, dd, g;
     int n = 0;
     int e;
 
-    if (!CUBIC_ISFINITE(c2) || !CUBIC_ISFINITE(c1) || !CUBIC_ISFINITE(c0) || isnan(lo) ||
-        isnan(hi)) {
-        return -1;
-    }
+    if (!cubic_inputs_ok(c2, c1, c0, lo, hi)) { return -1; }
     /* 1. scaling by a power of two (exact) when z^3 could over- or underflow */
     e = cubic_scaling(c2, c1, c0);
-    p.c2 = (e != 0) ? gk_ldexp(c2, -e) : c2;
-    p.c1 = (e != 0) ? gk_ldexp(c1, -2 * e) : c1;
-    p.c0 = (e != 0) ? gk_ldexp(c0, -3 * e) : c0;
-    c.lo = (e != 0) ? gk_ldexp(lo, -e) : lo;
-    c.hi = (e != 0) ? gk_ldexp(hi, -e) : hi;
-    /* Every root has |z| <= 1 + |c2| + |c1| + |c0| (a Cauchy-type bound, common practice): bounds
-       farther out are moved to it, so that no iteration starts at an absurd distance (which
-       would cost one step per halving of it). The roots above lo and below hi stay the same. */
-    bound = GK_LIT(1.0) + gk_fabs(p.c2) + gk_fabs(p.c1) + gk_fabs(p.c0);
-    if (c.hi > bound) { c.hi = bound; }
-    if (c.lo < -bound) { c.lo = -bound; }
-    g = (e != 0) ? gk_ldexp(guess, -e) : guess;
+    p.c2 = c2;
+    p.c1 = c1;
+    p.c0 = c0;
+    c.lo = lo;
+    c.hi = hi;
+    g = guess;
+    if (e != 0) {
+        p.c2 = gk_ldexp(c2, -e);
+        p.c1 = gk_ldexp(c1, -2 * e);
+        p.c0 = gk_ldexp(c0, -3 * e);
+        c.lo = gk_ldexp(lo, -e);
+        c.hi = gk_ldexp(hi, -e);
+        g = gk_ldexp(guess, -e);
+    }
+    cubic_clamp_bounds(&p, &c);
     c.have_hi = hi > lo;
     c.have_known = false;
     c.rknown = GK_LIT(0.0);

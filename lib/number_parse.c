@@ -130,38 +130,47 @@ static bool gk__scan_exponent_digits(const char *text, size_t limit, size_t *i, 
     return any;
 }
 
+/* An optional sign at text[*i]: true for '-' (the position moves past a sign). */
+static bool gk__scan_sign(const char *text, size_t limit, size_t *i) {
+    bool negative = false;
+    if ((*i < limit) && ((text[*i] == '+') || (text[*i] == '-'))) {
+        negative = text[*i] == '-';
+        *i += 1u;
+    }
+    return negative;
+}
+
+/* The exponent part at text[*i], if any: (e|E) [+|-] digits, added to *exp10. False for an
+   exponent marker without digits ("1e", "1e+"). |*exp10| <= GK__DECIMAL_MAX_DIGITS on entry and
+   the digits saturate at GK__EXP_SATURATE, so the sum cannot overflow. */
+static bool gk__scan_exponent(const char *text, size_t limit, size_t *i, int32_t *exp10) {
+    int32_t e = 0;
+    bool e_negative;
+    bool ok = true;
+    if ((*i < limit) && ((text[*i] == 'e') || (text[*i] == 'E'))) {
+        *i += 1u;
+        e_negative = gk__scan_sign(text, limit, i);
+        ok = gk__scan_exponent_digits(text, limit, i, &e);
+        if (ok) { *exp10 += e_negative ? -e : e; }
+    }
+    return ok;
+}
+
 gk_status gk__decimal_scan(const char *text, size_t limit, gk__decimal *out, size_t *used) {
     gk__digits s = { 0u, 0, 0, 0, 0u, false, 0 };
     size_t i = 0;
-    bool negative = false;
+    bool negative;
 
     if ((text == NULL) || (out == NULL) || (used == NULL)) { return GK_ERR_ARGUMENT; }
 
-    if ((i < limit) && ((text[i] == '+') || (text[i] == '-'))) {
-        negative = (text[i] == '-');
-        i += 1u;
-    }
+    negative = gk__scan_sign(text, limit, &i);
     if (!gk__scan_digits(text, limit, &i, &s, false)) { return GK_ERR_PARSE; }
     if ((i < limit) && (text[i] == '.')) {
         i += 1u;
         if (!gk__scan_digits(text, limit, &i, &s, true)) { return GK_ERR_PARSE; }
     }
     if (s.count == 0) { return GK_ERR_PARSE; /* "", "+", ".", "e5" */ }
-
-    if ((i < limit) && ((text[i] == 'e') || (text[i] == 'E'))) {
-        int32_t e = 0;
-        bool e_negative = false;
-        i += 1u;
-        if ((i < limit) && ((text[i] == '+') || (text[i] == '-'))) {
-            e_negative = (text[i] == '-');
-            i += 1u;
-        }
-        if (!gk__scan_exponent_digits(text, limit, &i, &e)) {
-            return GK_ERR_PARSE; /* "1e", "1e+" */
-        }
-        /* |exp10| <= GK__DECIMAL_MAX_DIGITS and e <= GK__EXP_SATURATE: no overflow */
-        s.exp10 += e_negative ? -e : e;
-    }
+    if (!gk__scan_exponent(text, limit, &i, &s.exp10)) { return GK_ERR_PARSE; /* "1e", "1e+" */ }
 
     /* Round half to even on the dropped digits (only matters below 1e-18 relative). */
     if ((s.dropped > 0) && ((s.round_digit > 5u) ||
