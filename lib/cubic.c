@@ -533,7 +533,7 @@ static void cubic_clamp_bounds(const cubic_poly *p, cubic_ctx *c) {
 int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, gk_real guess,
                     gk_real z[3]) {
     cubic_poly p;
-    cubic_ctx c;
+    cubic_ctx c = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0), false, false };
     gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
     gk_real s, fs, dd, g;
     int n = 0;
@@ -558,8 +558,6 @@ int gk__cubic_roots(gk_real c2, gk_real c1, gk_real c0, gk_real lo, gk_real hi, 
     }
     cubic_clamp_bounds(&p, &c);
     c.have_hi = hi > lo;
-    c.have_known = false;
-    c.rknown = GK_LIT(0.0);
     s = -p.c2 * CUBIC_THIRD; /* inflection point: f is convex right of it */
     fs = cubic_f(&p, s);
     dd = (p.c2 * p.c2) - (GK_LIT(3.0) * p.c1); /* > 0: two critical points z1 < s < z2 */
