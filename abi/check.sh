@@ -23,7 +23,9 @@ grep -q 'GK_REAL_IS_FLOAT 0' "$build/include/gaskit/config.h" || {
 headers=$(mktemp -d)
 trap 'rm -rf "$headers"' EXIT
 mkdir -p "$headers/gaskit"
-cp include/gaskit/*.h "$build/include/gaskit/config.h" "$headers/gaskit/"
+# the generated config.h of the build replaces the committed default configuration
+cp include/gaskit/*.h "$headers/gaskit/"
+cp "$build/include/gaskit/config.h" "$headers/gaskit/"
 abidw --no-corpus-path --no-comp-dir-path --short-locs --drop-private-types \
       --headers-dir "$headers/gaskit" --out-file "$current" "$so"
 

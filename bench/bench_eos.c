@@ -39,7 +39,8 @@ static volatile double sink;
 static const double TC = 250.0, PC = 4.0e6, OMEGA = 0.152;
 
 typedef struct model { gk_eos eos; const char *name; double oa, ob, u, w; } model;
-/* constants as in lib/eos.c (check-values.md) */
+/* constants as in lib/eos.c (van der Waals; Redlich and Kwong 1949; Soave 1972; Peng and Robinson
+   1976) */
 static const model MODELS[] = {
     {GK_EOS_VAN_DER_WAALS, "van der Waals", 27.0 / 64.0, 0.125, 0, 0},
     {GK_EOS_REDLICH_KWONG, "Redlich-Kwong", 0.42748, 0.08664, 1, 0},

@@ -5,7 +5,7 @@
 # (double and float names), and strlen, memcpy and memset, which compilers emit on their own
 # for a hand-written length loop, a struct copy or a struct initialisation (every C runtime,
 # newlib included, provides them).
-cmake_minimum_required(VERSION 3.25)
+cmake_minimum_required(VERSION 3.16)
 execute_process(COMMAND ${NM} -u ${LIB} OUTPUT_VARIABLE _out RESULT_VARIABLE _rc)
 if(NOT _rc EQUAL 0)
   message(FATAL_ERROR "${NM} -u failed on ${LIB}")

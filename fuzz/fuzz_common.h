@@ -2,8 +2,9 @@
  * fuzz_common.h - helpers of the libFuzzer targets.
  *
  * A finding is reported with abort(): libFuzzer (with ASan/UBSan) then saves the input as a
- * crash-* file. The checks are the error contract of API.md: a GK_OK result is finite and
- * physical, a failed call leaves its outputs untouched, a status is one of the enum's values.
+ * crash-* file. The checks are the error contract of gk_status (include/gaskit/base.h): a GK_OK
+ * result is finite and physical, a failed call leaves its outputs untouched, a status is one of
+ * the enum's values.
  */
 #ifndef GASKIT_FUZZ_COMMON_H
 #define GASKIT_FUZZ_COMMON_H

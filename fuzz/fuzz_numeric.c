@@ -47,7 +47,8 @@ static void check_eos_result(gk_status s, const gk_eos_result *res, const gk_eos
     FZ_POSITIVE(res->molar_volume.m3_per_mol);
     FZ_POSITIVE(res->fugacity_coefficient);
     FZ_REQUIRE(res->root_count >= 1 && res->root_count <= 3);
-    FZ_REQUIRE(res->branch == GK_ROOT_GAS || res->branch == GK_ROOT_LIQUID);
+    FZ_REQUIRE(res->branch == GK_ROOT_GAS || res->branch == GK_ROOT_LIQUID ||
+               res->branch == GK_ROOT_SUPERCRITICAL);
     for (int i = 0; i < res->root_count; ++i) FZ_POSITIVE(res->z_roots[i]);
 }
 

@@ -9,15 +9,11 @@
 #include <stdbool.h>
 
 #if GK_REAL_IS_FLOAT
-#  define gk_frexp frexpf
-#  define gk_ldexp ldexpf
 /* Scale when |z| could pass 2^16: then z^3 stays inside 2^+-48, far from FLT_MAX (2^128) and
    from the subnormals (2^-126) (common practice: keep a margin for products of two terms). */
 #  define CUBIC_SCALE_EXP 16
 #  define CUBIC_BIG GK_LIT(65536.0) /* 2^16 */
 #else
-#  define gk_frexp frexp
-#  define gk_ldexp ldexp
 /* Scale when |z| could pass 2^64 (z^3 inside 2^+-192, far from 2^+-1022). */
 #  define CUBIC_SCALE_EXP 64
 #  define CUBIC_BIG GK_LIT(18446744073709551616.0) /* 2^64 */

@@ -1,6 +1,8 @@
 /*
- * eos_internal.h - private interface shared by the equation-of-state modules (eos.c, eos_vdw.c,
- * eos_mixture.c, eos_batch.c). Never installed.
+ * eos_internal.h - the model layer (eos.c): the arithmetic of each equation of state for a pure
+ * gas or a mixture, the solve of the cubic in Z and the choice of its root. Private, never
+ * installed. It knows gases, mixtures and states, nothing of instruments or of gk_fluid; the
+ * fluid layer (fluid.h) checks a fluid once and calls down into it.
  *
  * Every cubic model is written in the generic two-parameter form
  *     p = R T / (Vm - b) - a(T) / (Vm^2 + u b Vm + w b^2)
@@ -16,59 +18,54 @@
 
 #include "gk_internal.h"
 
-/* The cubic families: the (u, w) of the denominator and the form of ln(phi). */
-typedef enum gk__cubic_family {
-    GK__FAMILY_VDW, /* u = 0, w = 0 */
-    GK__FAMILY_RK,  /* u = 1, w = 0 (Redlich-Kwong, Soave-Redlich-Kwong) */
-    GK__FAMILY_PR   /* u = 2, w = -1 (Peng-Robinson) */
-} gk__cubic_family;
-
 /* Is eos one of gk_eos? Compared as unsigned: a negative value wraps above the last model, and
    the test stays meaningful where the enum is one unsigned byte (-fshort-enums, the
-   arm-none-eabi default). The one check of every module (eos, mixture, instrument). */
-static inline int gk__eos_valid(gk_eos eos) {
-    return ((unsigned)eos <= (unsigned)GK_EOS_PENG_ROBINSON) ? 1 : 0;
+   arm-none-eabi default). */
+static inline bool gk__eos_valid(gk_eos eos) {
+    return (unsigned)eos <= (unsigned)GK_EOS_PENG_ROBINSON;
 }
 
-/* Checks the gas data a model uses: GK_ERR_ARGUMENT for NULL, GK_ERR_DOMAIN for non-physical
-   data (Tc, Pc not finite or not > 0, acentric factor not finite, vdw_a / vdw_b negative or not
-   finite). The ideal gas uses no gas data (only the molar mass, checked by the density paths). */
+/* Is root a choice a caller may ask for? GK_ROOT_SUPERCRITICAL is a label of results only. */
+static inline bool gk__root_valid(gk_root root) {
+    return (unsigned)root <= (unsigned)GK_ROOT_LIQUID;
+}
+
+/* The gas data the model uses: GK_ERR_ARGUMENT for NULL, GK_ERR_DOMAIN for non-physical data
+   (Tc, Pc not finite or not > 0, acentric factor not finite, vdw_a / vdw_b negative or not
+   finite). The ideal gas uses none. eos is valid (gk__eos_valid). */
 gk_status gk__eos_check_gas(gk_eos eos, const gk_gas *gas);
 
-/* Dimensionless A = a(T) p / (R T)^2 and B = b p / (R T) of a pure gas at (p, T). The caller has
-   checked eos (not ideal), gas (gk__eos_check_gas) and p, T (finite, > 0).
-   GK_ERR_RANGE when A or B overflows. */
+/* The interaction parameters of a mixture of n components: NULL (all 0), or n*n values, each
+   finite and in [-1, 1], symmetric, with a zero diagonal; else GK_ERR_DOMAIN. */
+gk_status gk__eos_check_kij(size_t n, const gk_real *kij);
+
+/* Critical temperature of the model for a checked gas, K: the table's Tc, or for van der Waals
+   with both handbook constants the model's own Tc = 8 a / (27 R b). */
+gk_real gk__eos_tc(gk_eos eos, const gk_gas *gas);
+
+/* Dimensionless A = a(T) p / (R T)^2 and B = b p / (R T) of a cubic model (not the ideal gas)
+   at (p, T) > 0: of a checked pure gas, or of a checked mixture by the van der Waals one-fluid
+   rules. GK_ERR_RANGE when A or B overflows or B underflows to 0. */
 gk_status gk__eos_ab(gk_eos eos, const gk_gas *gas, gk_real p, gk_real t, gk_real *a_out,
                      gk_real *b_out);
+gk_status gk__eos_mix_ab(gk_eos eos, const gk_mixture *mix, const gk_real *kij, gk_real p,
+                         gk_real t, gk_real *a_out, gk_real *b_out);
 
-/* Solves the cubic of a family with the given A >= 0, B > 0 at (p, T) and fills a complete
-   result (into *out only on GK_OK). GK_ERR_RANGE when a result overflows or underflows, or when
-   no root is found above B (one always exists; it then lies within rounding of B). */
-gk_status gk__eos_solve_ab(gk__cubic_family family, gk_real vc_over_b, gk_real a, gk_real b,
-                           gk_real p, gk_real t, gk_root root, gk_eos_result *out);
+/* The state of the ideal gas at (p, T) > 0: Z = 1, phi = 1, one root, branch GK_ROOT_GAS.
+   GK_ERR_RANGE when R T / p overflows or underflows. */
+gk_status gk__eos_ideal_state(gk_real p, gk_real t, gk_eos_result *out);
 
-/* Ideal-gas result at (p, T): Z = 1, phi = 1, one root. GK_ERR_RANGE on overflow. */
-gk_status gk__eos_ideal(gk_real p, gk_real t, gk_eos_result *out);
+/* The state of a cubic model with the given A >= 0, B > 0 at (p, T) > 0: every root above B,
+   the one asked for (root: GK_ROOT_STABLE, GAS or LIQUID), its phi and molar volume. A lone root
+   is labelled GK_ROOT_SUPERCRITICAL when t > tc, else GK_ROOT_LIQUID when it is denser than the
+   model's critical point, else GK_ROOT_GAS. Writes *out only on GK_OK; GK_ERR_RANGE when a
+   result overflows or underflows, or when no root is found above B (one always exists; it then
+   lies within rounding of B). */
+gk_status gk__eos_cubic_state(gk_eos eos, gk_real a, gk_real b, gk_real p, gk_real t, gk_real tc,
+                              gk_root root, gk_eos_result *out);
 
-/* Validity of p, T and root (shared by the solve paths). */
-gk_status gk__eos_check_state(gk_pressure p, gk_temperature t, gk_root root);
-
-/* The two halves of gk_eos_solve() and gk_mixture_eos_solve(), so that a caller that solves a
-   state for its own use (the instrument functions) calls the cubic-EOS solve directly, without
-   the public solver's frame on the stack (firmware stack budget):
-   - gk__eos_prepare(): every check of gk_eos_solve() but the one of out, in the same order,
-     and A, B into ab[0], ab[1] (ab untouched for the ideal gas);
-   - gk__mixture_eos_prepare() (eos_mixture.c): the same for gk_mixture_eos_solve(), with the
-     mixture and k_ij of fluid (fluid->gas is not read; four register arguments, so a caller
-     passes none on the stack);
-   - gk__eos_finish(): the ideal-gas result or the solve with those A, B; writes *out only on
-     GK_OK. ab may point into *out (the instrument functions stage A, B in out->z_roots): both
-     are read before *out is written. */
-gk_status gk__eos_prepare(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
-                          gk_root root, gk_real ab[2]);
-gk_status gk__mixture_eos_prepare(gk_eos eos, const gk_fluid *fluid, gk_pressure p,
-                                  gk_temperature t, gk_root root, gk_real ab[2]);
-gk_status gk__eos_finish(gk_eos eos, const gk_real ab[2], gk_pressure p, gk_temperature t,
-                         gk_root root, gk_eos_result *out);
+/* Pressure of a cubic model (not the ideal gas) for a checked pure gas at molar volume v > 0 and
+   temperature t > 0 (statuses of gk_eos_pressure()). */
+gk_status gk__eos_pressure(gk_eos eos, const gk_gas *gas, gk_real v, gk_real t, gk_real *out);
 
 #endif /* GASKIT_EOS_INTERNAL_H */

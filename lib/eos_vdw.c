@@ -6,12 +6,13 @@
  */
 #include "eos_internal.h"
 
-/* Van der Waals (1873) critical conditions: a = 27 R^2 Tc^2 / (64 Pc), b = R Tc / (8 Pc)
-   (check-values.md, "Cubic equations of state"). */
+/* Van der Waals critical conditions dp/dV = d2p/dV2 = 0: a = 27 R^2 Tc^2 / (64 Pc),
+   b = R Tc / (8 Pc) (J. D. van der Waals, thesis, Leiden 1873; the derivation is common
+   practice). */
 #define VDW_A_FACTOR GK_LIT(0.421875) /* 27/64, exact */
 #define VDW_B_FACTOR GK_LIT(0.125)    /* 1/8, exact */
 
-static int vdw_valid(gk_vdw c) {
+static bool vdw_valid(gk_vdw c) {
     return gk_finite(c.a) && gk_finite(c.b) && c.a >= GK_LIT(0.0) && c.b >= GK_LIT(0.0);
 }
 
@@ -71,9 +72,8 @@ gk_status gk_vdw_volume(gk_vdw c, gk_amount n, gk_pressure p, gk_temperature t, 
     gk_eos_result r;
     gk_real rt, prt, a, b, v;
     gk_status st;
-    if (out == NULL) { return GK_ERR_ARGUMENT; }
-    st = gk__eos_check_state(p, t, root);
-    if (st != GK_OK) { return st; }
+    if (out == NULL || !gk__root_valid(root)) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(p.pa) || !gk_positive(t.k)) { return GK_ERR_DOMAIN; }
     if (!vdw_valid(c) || !gk_positive(n.mol)) { return GK_ERR_DOMAIN; }
     rt = GK_R * t.k;
     prt = p.pa / rt;
@@ -101,9 +101,10 @@ gk_status gk_vdw_volume(gk_vdw c, gk_amount n, gk_pressure p, gk_temperature t, 
         }
         v = n.mol * z / prt;
     } else {
-        /* Vc / b = Zc / Omega_b = (3/8) / (1/8) = 3, exact (van der Waals critical point; the
-           same label as VDW_ZC / VDW_OMEGA_B in eos.c) */
-        st = gk__eos_solve_ab(GK__FAMILY_VDW, GK_LIT(3.0), a, b, p.pa, t.k, root, &r);
+        /* the model's critical temperature Tc = 8 a / (27 R b) labels a lone root (the label is
+           not reported here) */
+        gk_real tc = GK_LIT(8.0) * c.a / (GK_LIT(27.0) * GK_R * c.b);
+        st = gk__eos_cubic_state(GK_EOS_VAN_DER_WAALS, a, b, p.pa, t.k, tc, root, &r);
         if (st != GK_OK) { return st; }
         v = n.mol * r.molar_volume.m3_per_mol;
     }

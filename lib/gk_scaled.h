@@ -24,12 +24,8 @@
 #include "gk_internal.h"
 
 #if GK_REAL_IS_FLOAT
-#  define gk_frexp frexpf
-#  define gk_ldexp ldexpf
 #  define GK_REAL_MIN_NORMAL 1.17549435e-38f /* FLT_MIN = 2^-126, IEEE 754 binary32 */
 #else
-#  define gk_frexp frexp
-#  define gk_ldexp ldexp
 #  define GK_REAL_MIN_NORMAL 2.2250738585072014e-308 /* DBL_MIN = 2^-1022, IEEE 754 binary64 */
 #endif
 

@@ -4,156 +4,58 @@
  * mixtures.
  *
  * Every quantity here is the amount form of the equation of state, n = p V / (Z R T), with Z
- * the stable root of the chosen model (gk_eos_solve(), gk_mixture_eos_solve()). Where the stable
- * state is liquid the amount does not follow from pressure, and the functions that need a gas
- * return GK_ERR_RANGE (see fluid_is_liquid()).
+ * the stable root of the chosen model. Each function opens its fluid once (open_fluid(): the
+ * fluid, the readings, the reference condition, the molar mass) and asks the fluid layer for
+ * the Z of each state it needs (gk__fluid_gas_z(), which returns GK_ERR_RANGE where the stable
+ * state is liquid: the amount does not follow from pressure there).
  */
-#include "gk_internal.h"
+#include "fluid.h"
 #include "mixture_internal.h"
-#include "eos_internal.h"
 
-/* The fluid names exactly one of a gas and a mixture, and the model is one of gk_eos. */
-static gk_status fluid_check(gk_eos eos, const gk_fluid *fluid) {
-    if (!gk__eos_valid(eos)) { return GK_ERR_ARGUMENT; }
-    if ((fluid->gas == NULL) == (fluid->mixture == NULL)) { return GK_ERR_ARGUMENT; }
-    return GK_OK;
-}
-
-/* Stable root of the model at p, T. */
-static GK_ALWAYS_INLINE gk_status fluid_solve(gk_eos eos, const gk_fluid *fluid, gk_pressure p,
-                                              gk_temperature t, gk_eos_result *r) {
-    /* A, B are staged in the result's z_roots[0], z_roots[1]: gk__eos_finish() reads both
-       before it writes *r, and no separate array sits in the caller's frame (stack budget) */
-    gk_real *ab;
-    gk_status s;
-    r->z_roots[0] = GK_LIT(0.0);
-    r->z_roots[1] = GK_LIT(0.0);
-    ab = r->z_roots;
-    /* as gk_eos_solve() / gk_mixture_eos_solve(), in two halves: the checks and A, B return
-       before the cubic is solved, so no public solver frame lies under it (stack budget) */
-    if (fluid->gas != NULL) {
-        s = gk__eos_prepare(eos, fluid->gas, p, t, GK_ROOT_STABLE, ab);
-    } else {
-        s = gk__mixture_eos_prepare(eos, fluid, p, t, GK_ROOT_STABLE, ab);
-    }
-    if (s == GK_OK) { s = gk__eos_finish(eos, ab, p, t, GK_ROOT_STABLE, r); }
+/* The opening of every instrument function, in this order: the fluid (gk__fluid_init()), the
+   readings (readings_ok false: GK_ERR_DOMAIN), the reference condition when ref is not NULL
+   (p, T finite and > 0, else GK_ERR_DOMAIN), the molar mass when m is not NULL. */
+static gk_status open_fluid(gk__fluid *f, gk_eos eos, const gk_fluid *fluid, bool readings_ok,
+                            const gk_reference *ref, gk_real *m) {
+    gk_status s = gk__fluid_init(f, eos, fluid->gas, fluid->mixture, fluid->kij);
     if (s != GK_OK) { return s; }
-    /* Defensive: every later formula divides by Z. */
-    if (!gk_positive(r->z) || !gk_positive(r->molar_volume.m3_per_mol)) { return GK_ERR_RANGE; }
-    return GK_OK;
-}
-
-static gk_status fluid_molar_mass(const gk_fluid *fluid, gk_real *m) {
-    if (fluid->gas != NULL) {
-        if (!gk_positive(fluid->gas->molar_mass.kg_per_mol)) { return GK_ERR_DOMAIN; }
-        *m = fluid->gas->molar_mass.kg_per_mol;
-        return GK_OK;
-    } else {
-        gk_molar_mass mm;
-        const gk_status s = gk_mixture_molar_mass(fluid->mixture, &mm);
-        if (s != GK_OK) { return s; }
-        *m = mm.kg_per_mol;
-        return GK_OK;
+    if (!readings_ok) { return GK_ERR_DOMAIN; }
+    if (ref != NULL && (!gk_positive(ref->p.pa) || !gk_positive(ref->t.k))) {
+        return GK_ERR_DOMAIN;
     }
-}
-
-/* Critical temperature of one component as the model sees it: the table's Tc, or for van der
-   Waals with handbook a, b the model's own Tc = 8 a / (27 R b) (from dp/dV = d2p/dV2 = 0). */
-static gk_real component_tc(gk_eos eos, const gk_gas *g) {
-    if (eos == GK_EOS_VAN_DER_WAALS && g->vdw_a > GK_LIT(0.0) && g->vdw_b > GK_LIT(0.0)) {
-        return GK_LIT(8.0) * g->vdw_a / (GK_LIT(27.0) * GK_R * g->vdw_b);
-    }
-    return g->critical_temperature.k;
-}
-
-/*
- * Is the stable state at (p, T), already solved into r, liquid?
- *  - Ideal gas: never.
- *  - Two or three real roots: the stable root (lower fugacity) is on the liquid branch, i.e.
- *    p is above the model's vapour pressure at T.
- *  - One real root below the (pseudo-)critical temperature: a lone root lies either on the gas
- *    side (p below the lower spinodal pressure, so below the vapour pressure) or on the liquid
- *    side (p above the upper spinodal, so above the vapour pressure). The two spinodal volumes
- *    of a cubic bracket its critical volume Vc for every T < Tc, so gk_eos_solve()'s label of
- *    a lone root (GK_ROOT_LIQUID when Vm < Vc of the model) tells the side.
- *  - One real root at or above Tc: a gas (compressed or supercritical), dense or not; the
- *    solver's label is not used there (nitrogen at 1000 bar and 20 degC is no liquid).
- * For a mixture Tc is the pseudo-critical temperature sum x_i Tc_i (Kay's rule).
- * Limitation (documented): a mixture between its dew and bubble points (two phases) is not
- * detected by a single-phase root; no flash calculation is made.
- */
-static int fluid_is_liquid(gk_eos eos, const gk_fluid *fluid, gk_temperature t,
-                           const gk_eos_result *r) {
-    gk_real tc = GK_LIT(0.0);
-    if (eos == GK_EOS_IDEAL || r->branch != GK_ROOT_LIQUID) { return 0; }
-    if (r->root_count >= 2) { return 1; }
-    if (fluid->gas != NULL) {
-        tc = component_tc(eos, fluid->gas);
-    } else {
-        size_t i;
-        for (i = 0; i < fluid->mixture->count; ++i) {
-            tc += fluid->mixture->mole_fraction[i] * component_tc(eos, fluid->mixture->gas[i]);
-        }
-    }
-    return (t.k < tc) ? 1 : 0;
-}
-
-/* Solve and require a gas (or supercritical) stable state. */
-static gk_status gas_state(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t,
-                           gk_real *z) {
-    gk_eos_result r;
-    const gk_status s = fluid_solve(eos, fluid, p, t, &r);
-    if (s != GK_OK) { return s; }
-    if (fluid_is_liquid(eos, fluid, t, &r)) { return GK_ERR_RANGE; }
-    *z = r.z;
-    return GK_OK;
-}
-
-static gk_status reference_check(gk_reference ref) {
-    return (gk_positive(ref.p.pa) && gk_positive(ref.t.k)) ? GK_OK : GK_ERR_DOMAIN;
+    return (m != NULL) ? gk__fluid_molar_mass(f, m) : GK_OK;
 }
 
 /* ------------------------------------------------------------------ public functions */
 
 gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t, gk_real *z) {
+    gk__fluid f;
     gk_eos_result r;
     gk_status s;
     if (z == NULL) { return GK_ERR_ARGUMENT; }
-    s = fluid_check(eos, &fluid);
-    if (s != GK_OK) { return s; }
-    s = fluid_solve(eos, &fluid, p, t, &r);
+    s = gk__fluid_init(&f, eos, fluid.gas, fluid.mixture, fluid.kij);
+    if (s == GK_OK) { s = gk__fluid_state(&f, p, t, GK_ROOT_STABLE, &r); }
     if (s != GK_OK) { return s; }
     *z = r.z;
     return GK_OK;
 }
 
-/* Factor from actual volume at (p, T) to volume at ref, both states gas. */
-static gk_status flow_factor(gk_eos eos, const gk_fluid *fluid, gk_pressure p, gk_temperature t,
-                             gk_reference ref, gk_real *factor) {
-    gk_real z = GK_LIT(1.0), z_ref = GK_LIT(1.0);
-    gk_status s = gas_state(eos, fluid, p, t, &z);
-    if (s != GK_OK) { return s; }
-    s = gas_state(eos, fluid, ref.p, ref.t, &z_ref);
-    if (s != GK_OK) { return s; }
-    return gk_reference_factor(p, t, z, ref, z_ref, factor);
-}
-
-/* The two directions of the reference-flow conversion: check the inputs, find the factor from
- * Z at both conditions, then multiply (to the reference) or divide (from it). */
+/* The two directions of the reference-flow conversion: the factor from Z at both conditions,
+   then a multiplication (to the reference) or a division (from it). */
 static gk_status flow_convert(gk_eos eos, const gk_fluid *fluid, gk_real q_in, gk_pressure p,
-                              gk_temperature t, gk_reference ref, int to_reference,
+                              gk_temperature t, gk_reference ref, bool to_reference,
                               gk_volume_flow *out) {
-    gk_real f = GK_LIT(1.0), q;
+    gk__fluid f;
+    gk_real z = GK_LIT(1.0), z_ref = GK_LIT(1.0), factor = GK_LIT(1.0), q;
     gk_status s;
     if (out == NULL) { return GK_ERR_ARGUMENT; }
-    s = fluid_check(eos, fluid);
+    s = open_fluid(&f, eos, fluid, gk_finite(q_in) && gk_positive(p.pa) && gk_positive(t.k), &ref,
+                   NULL);
+    if (s == GK_OK) { s = gk__fluid_gas_z(&f, p, t, &z); }
+    if (s == GK_OK) { s = gk__fluid_gas_z(&f, ref.p, ref.t, &z_ref); }
+    if (s == GK_OK) { s = gk_reference_factor(p, t, z, ref, z_ref, &factor); }
     if (s != GK_OK) { return s; }
-    if (!gk_finite(q_in) || !gk_positive(p.pa) || !gk_positive(t.k)) { return GK_ERR_DOMAIN; }
-    s = reference_check(ref);
-    if (s != GK_OK) { return s; }
-    s = flow_factor(eos, fluid, p, t, ref, &f);
-    if (s != GK_OK) { return s; }
-    q = to_reference ? q_in * f : q_in / f;
+    q = to_reference ? q_in * factor : q_in / factor;
     if (!gk_finite(q)) { return GK_ERR_RANGE; }
     out->m3_per_s = q;
     return GK_OK;
@@ -161,28 +63,24 @@ static gk_status flow_convert(gk_eos eos, const gk_fluid *fluid, gk_real q_in, g
 
 gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
                                gk_temperature t, gk_reference ref, gk_volume_flow *out) {
-    return flow_convert(eos, &fluid, actual.m3_per_s, p, t, ref, 1, out);
+    return flow_convert(eos, &fluid, actual.m3_per_s, p, t, ref, true, out);
 }
 
 gk_status gk_flow_from_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow at_reference,
                                  gk_reference ref, gk_pressure p, gk_temperature t,
                                  gk_volume_flow *out) {
-    return flow_convert(eos, &fluid, at_reference.m3_per_s, p, t, ref, 0, out);
+    return flow_convert(eos, &fluid, at_reference.m3_per_s, p, t, ref, false, out);
 }
 
 gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
                           gk_temperature t, gk_mass_flow *out) {
+    gk__fluid f;
     gk_real z = GK_LIT(1.0), m = GK_LIT(0.0), rho, w;
     gk_status s;
     if (out == NULL) { return GK_ERR_ARGUMENT; }
-    s = fluid_check(eos, &fluid);
-    if (s != GK_OK) { return s; }
-    if (!gk_finite(actual.m3_per_s) || !gk_positive(p.pa) || !gk_positive(t.k)) {
-        return GK_ERR_DOMAIN;
-    }
-    s = fluid_molar_mass(&fluid, &m);
-    if (s != GK_OK) { return s; }
-    s = gas_state(eos, &fluid, p, t, &z);
+    s = open_fluid(&f, eos, &fluid,
+                   gk_finite(actual.m3_per_s) && gk_positive(p.pa) && gk_positive(t.k), NULL, &m);
+    if (s == GK_OK) { s = gk__fluid_gas_z(&f, p, t, &z); }
     if (s != GK_OK) { return s; }
     /* rho = p M / (Z R T) */
     rho = (p.pa / (z * GK_R * t.k)) * m;
@@ -194,22 +92,15 @@ gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_
 
 gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel, gk_pressure p,
                              gk_temperature t, gk_reference ref, gk_contents *out) {
+    gk__fluid f;
     gk_real z = GK_LIT(1.0), z_ref = GK_LIT(1.0), m = GK_LIT(0.0);
     gk_real n, mass, v_ref;
     gk_status s;
     if (out == NULL) { return GK_ERR_ARGUMENT; }
-    s = fluid_check(eos, &fluid);
-    if (s != GK_OK) { return s; }
-    if (!gk_positive(vessel.m3) || !gk_positive(p.pa) || !gk_positive(t.k)) {
-        return GK_ERR_DOMAIN;
-    }
-    s = reference_check(ref);
-    if (s != GK_OK) { return s; }
-    s = fluid_molar_mass(&fluid, &m);
-    if (s != GK_OK) { return s; }
-    s = gas_state(eos, &fluid, p, t, &z);
-    if (s != GK_OK) { return s; }
-    s = gas_state(eos, &fluid, ref.p, ref.t, &z_ref);
+    s = open_fluid(&f, eos, &fluid, gk_positive(vessel.m3) && gk_positive(p.pa) && gk_positive(t.k),
+                   &ref, &m);
+    if (s == GK_OK) { s = gk__fluid_gas_z(&f, p, t, &z); }
+    if (s == GK_OK) { s = gk__fluid_gas_z(&f, ref.p, ref.t, &z_ref); }
     if (s != GK_OK) { return s; }
     /* n = p V / (Z R T); the reference volume n Z_ref R T_ref / p_ref */
     n = (p.pa / (z * GK_R * t.k)) * vessel.m3;
@@ -243,8 +134,8 @@ gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel, gk_pr
  * change, with the rounding of the two roots divided by k. If either stretched point is not a
  * gas state of the model (near the vapour pressure), the plain difference is kept.
  */
-static gk_status leak_dz(gk_eos eos, const gk_fluid *fluid, gk_pressure ps, gk_temperature ts,
-                         gk_pressure pe, gk_temperature te, gk_real zs, gk_real ze, gk_real *dz) {
+static gk_status leak_dz(const gk__fluid *f, gk_pressure ps, gk_temperature ts, gk_pressure pe,
+                         gk_temperature te, gk_real zs, gk_real ze, gk_real *dz) {
     const gk_real dp = pe.pa - ps.pa, dt = te.k - ts.k;
     const gk_real hp = gk_fabs(dp) / ps.pa, ht = gk_fabs(dt) / ts.k;
     const gk_real h = (hp > ht) ? hp : ht;
@@ -252,14 +143,14 @@ static gk_status leak_dz(gk_eos eos, const gk_fluid *fluid, gk_pressure ps, gk_t
     gk_pressure pm, pp;
     gk_temperature tm, tp;
     *dz = ze - zs;
-    if (eos == GK_EOS_IDEAL || !(h < LEAK_H) || !(h > GK_LIT(0.0))) { return GK_OK; }
+    if (f->eos == GK_EOS_IDEAL || !(h < LEAK_H) || !(h > GK_LIT(0.0))) { return GK_OK; }
     k = GK_LIT(0.5) * LEAK_H / h; /* half the stretched step, in units of (end - start) */
     pm.pa = GK_LIT(0.5) * (ps.pa + pe.pa) - k * dp;
     pp.pa = GK_LIT(0.5) * (ps.pa + pe.pa) + k * dp;
     tm.k = GK_LIT(0.5) * (ts.k + te.k) - k * dt;
     tp.k = GK_LIT(0.5) * (ts.k + te.k) + k * dt;
-    if (gas_state(eos, fluid, pm, tm, &z_minus) != GK_OK ||
-        gas_state(eos, fluid, pp, tp, &z_plus) != GK_OK) {
+    if (gk__fluid_gas_z(f, pm, tm, &z_minus) != GK_OK ||
+        gk__fluid_gas_z(f, pp, tp, &z_plus) != GK_OK) {
         return GK_OK; /* keep the plain difference */
     }
     *dz = (z_plus - z_minus) / (GK_LIT(2.0) * k);
@@ -270,25 +161,19 @@ gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test
                                       gk_pressure p_start, gk_temperature t_start,
                                       gk_pressure p_end, gk_temperature t_end, gk_real elapsed_s,
                                       gk_reference ref, gk_leak *out) {
+    gk__fluid f;
     gk_real zs = GK_LIT(1.0), ze = GK_LIT(1.0), z_ref = GK_LIT(1.0), m = GK_LIT(0.0);
     gk_real num, dn, rate, w, q, dz = GK_LIT(0.0);
     gk_status s;
     if (out == NULL) { return GK_ERR_ARGUMENT; }
-    s = fluid_check(eos, &fluid);
-    if (s != GK_OK) { return s; }
-    if (!gk_positive(elapsed_s) || !gk_positive(test_volume.m3) || !gk_positive(p_start.pa) ||
-        !gk_positive(t_start.k) || !gk_positive(p_end.pa) || !gk_positive(t_end.k)) {
-        return GK_ERR_DOMAIN;
-    }
-    s = reference_check(ref);
-    if (s != GK_OK) { return s; }
-    s = fluid_molar_mass(&fluid, &m);
-    if (s != GK_OK) { return s; }
-    s = gas_state(eos, &fluid, p_start, t_start, &zs);
-    if (s != GK_OK) { return s; }
-    s = gas_state(eos, &fluid, p_end, t_end, &ze);
-    if (s != GK_OK) { return s; }
-    s = gas_state(eos, &fluid, ref.p, ref.t, &z_ref);
+    s = open_fluid(&f, eos, &fluid,
+                   gk_positive(elapsed_s) && gk_positive(test_volume.m3) &&
+                       gk_positive(p_start.pa) && gk_positive(t_start.k) && gk_positive(p_end.pa) &&
+                       gk_positive(t_end.k),
+                   &ref, &m);
+    if (s == GK_OK) { s = gk__fluid_gas_z(&f, p_start, t_start, &zs); }
+    if (s == GK_OK) { s = gk__fluid_gas_z(&f, p_end, t_end, &ze); }
+    if (s == GK_OK) { s = gk__fluid_gas_z(&f, ref.p, ref.t, &z_ref); }
     if (s != GK_OK) { return s; }
     /*
      * dn = n_start - n_end = (V / R) (ps / (Zs Ts) - pe / (Ze Te))
@@ -301,7 +186,7 @@ gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test
      * decay smaller than LEAK_H (relative), Ze - Zs is taken instead as a central difference
      * of Z along the same straight line in (p, T), stretched to LEAK_H (see leak_dz()).
      */
-    s = leak_dz(eos, &fluid, p_start, t_start, p_end, t_end, zs, ze, &dz);
+    s = leak_dz(&f, p_start, t_start, p_end, t_end, zs, ze, &dz);
     if (s != GK_OK) { return s; }
     num = (p_start.pa - p_end.pa) * ze * t_end.k +
           p_end.pa * (ze * (t_end.k - t_start.k) + t_start.k * dz);
@@ -323,24 +208,15 @@ gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test
 gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t,
                               gk_real *out) {
     const gk_gas *air = NULL;
+    gk__fluid f, f_air;
     gk_real z = GK_LIT(1.0), z_air = GK_LIT(1.0), m = GK_LIT(0.0), d;
     gk_status s;
     if (out == NULL) { return GK_ERR_ARGUMENT; }
-    s = fluid_check(eos, &fluid);
-    if (s != GK_OK) { return s; }
-    if (!gk_positive(p.pa) || !gk_positive(t.k)) { return GK_ERR_DOMAIN; }
-    s = gk_gas_find("air", &air);
-    if (s != GK_OK) { return s; }
-    s = fluid_molar_mass(&fluid, &m);
-    if (s != GK_OK) { return s; }
-    s = gas_state(eos, &fluid, p, t, &z);
-    if (s != GK_OK) { return s; }
-    /* the fluid's own copy (a by-value parameter, not needed any more) now names air: no
-       second gk_fluid in the frame (firmware stack budget) */
-    fluid.gas = air;
-    fluid.mixture = NULL;
-    fluid.kij = NULL;
-    s = gas_state(eos, &fluid, p, t, &z_air);
+    s = open_fluid(&f, eos, &fluid, gk_positive(p.pa) && gk_positive(t.k), NULL, &m);
+    if (s == GK_OK) { s = gk_gas_find("air", &air); }
+    if (s == GK_OK) { s = gk__fluid_init(&f_air, eos, air, NULL, NULL); }
+    if (s == GK_OK) { s = gk__fluid_gas_z(&f, p, t, &z); }
+    if (s == GK_OK) { s = gk__fluid_gas_z(&f_air, p, t, &z_air); }
     if (s != GK_OK) { return s; }
     /* rho = p M / (Z R T) for both at the same p, T: d = (M / M_air) (Z_air / Z) */
     d = (m / air->molar_mass.kg_per_mol) * (z_air / z);
@@ -350,13 +226,11 @@ gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temp
 }
 
 /* Is this component water? The built-in entry, or a caller's entry with formula "H2O". */
-static int is_water(const gk_gas *g, const gk_gas *water) {
-    if (g == water) { return 1; }
+static bool is_water(const gk_gas *g, const gk_gas *water) {
+    if (g == water) { return true; }
     /* the formula compared by hand: the library uses no C library but <math.h> */
-    return (g != NULL && g->formula != NULL && g->formula[0] == 'H' && g->formula[1] == '2' &&
-            g->formula[2] == 'O' && g->formula[3] == '\0')
-               ? 1
-               : 0;
+    return g != NULL && g->formula != NULL && g->formula[0] == 'H' && g->formula[1] == '2' &&
+           g->formula[2] == 'O' && g->formula[3] == '\0';
 }
 
 gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature t,
@@ -389,7 +263,7 @@ gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature 
     }
     if (k == n && n >= GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; /* no room to append water */ }
     /* Every check has passed: write *wet entry by entry, each read from dry before it is
-       written, so wet may be the same object as dry (no copy of a gk_mixture on the stack). */
+       written, so wet may be the same object as dry. */
     scale = GK_LIT(1.0) - xw;
     for (i = 0; i < GK_MIXTURE_MAX; ++i) {
         const gk_gas *g = dry->gas[i];

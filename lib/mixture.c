@@ -1,8 +1,10 @@
 /*
  * mixture.c - composition text, normalization, mean molar mass, and the shared composition
- * check (mixture_internal.h). The mixture equation of state lives in its own module.
+ * check (mixture_internal.h). A mixture's equation of state goes through the fluid layer
+ * (fluid.c) and the mixing rules of the model layer (eos.c).
  */
 #include "mixture_internal.h"
+#include "gas_internal.h"
 #include "number_parse.h"
 
 /* Longest composition text accepted, in characters before the NUL (documented in mixture.h).
@@ -30,6 +32,16 @@ static gk_real gk__compensated_sum(const gk_real *x, size_t n) {
     return s + c;
 }
 
+gk_real gk__mixture_molar_mass(const gk_mixture *mix) {
+    gk_real s = GK_LIT(0.0);
+    gk_real c = GK_LIT(0.0);
+    size_t i;
+    for (i = 0; i < mix->count; ++i) {
+        gk__neumaier_add(&s, &c, mix->mole_fraction[i] * mix->gas[i]->molar_mass.kg_per_mol);
+    }
+    return s + c;
+}
+
 gk_status gk__mixture_check(const gk_mixture *mix) {
     size_t i;
     gk_real sum;
@@ -54,18 +66,18 @@ gk_status gk__mixture_check(const gk_mixture *mix) {
 
 /* ------------------------------------------------------------------ text */
 
-static int gk__is_space(char c) {
-    return (c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\v' || c == '\f') ? 1 : 0;
+static bool gk__is_space(char c) {
+    return c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\v' || c == '\f';
 }
 
 /* Does text[pos .. len) start with the lower-case word w, without regard to ASCII case? */
-static int gk__starts_with_ci(const char *text, size_t pos, size_t len, const char *w) {
+static bool gk__starts_with_ci(const char *text, size_t pos, size_t len, const char *w) {
     while (*w != '\0') {
-        if (pos >= len || gk__ascii_lower(text[pos]) != *w) { return 0; }
+        if (pos >= len || gk__ascii_lower(text[pos]) != *w) { return false; }
         ++pos;
         ++w;
     }
-    return 1;
+    return true;
 }
 
 static size_t gk__skip_spaces(const char *text, size_t pos, size_t len) {
@@ -92,7 +104,7 @@ typedef struct mix_item {
     const gk_gas *gas;
     gk__decimal number;  /* the value, unless is_balance */
     int32_t scale_exp10; /* -2 for '%', -6 for "ppm", else 0 */
-    int is_balance;
+    bool is_balance;
     size_t end; /* where the component ends: len or the index of its ',' */
 } mix_item;
 
@@ -104,7 +116,7 @@ static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *
     size_t name_end;
     size_t v;
     size_t i;
-    int is_balance = 0;
+    bool is_balance = false;
     gk__decimal number = { 0u, 0, 0 };
     int32_t scale_exp10 = 0;
     const gk_gas *gas = NULL;
@@ -122,7 +134,7 @@ static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *
     /* value */
     v = gk__skip_spaces(text, eq + 1, len);
     if (gk__starts_with_ci(text, v, len, "balance")) {
-        is_balance = 1;
+        is_balance = true;
         v += 7u;
     } else {
         size_t used = 0;
@@ -170,84 +182,86 @@ static gk_status item_fraction(const mix_item *it, gk_real *x) {
     return GK_OK;
 }
 
-/*
- * Two passes over the text, so that no gk_mixture is built on the stack (firmware stack
- * budget) while *out stays untouched on every error: the first pass makes every check and
- * forms the sum (and the balance); the second, which cannot fail, reads the same components
- * again and writes them into *out. A gas listed twice is found by reading the earlier
- * components again (at most GK_MIXTURE_MAX of them).
- */
-gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
-    mix_item it;
-    size_t len = 0;
-    size_t pos = 0;
-    size_t count = 0;
-    size_t i;
-    size_t balance_index = GK_MIXTURE_MAX; /* none yet */
-    gk_real sum = GK_LIT(0.0), comp = GK_LIT(0.0), rest = GK_LIT(0.0);
-    gk_status st;
+/* What the first pass knows after each component. */
+typedef struct mix_tally {
+    size_t count;         /* components read */
+    size_t balance_index; /* the "balance" component, or GK_MIXTURE_MAX for none yet */
+    gk_real sum, comp;    /* Neumaier sum of the given fractions and its compensation */
+} mix_tally;
 
-    if (text == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
-    /* Bounded length: reads at most GK__MIXTURE_TEXT_MAX + 1 characters, never past the NUL. */
-    while (len <= GK__MIXTURE_TEXT_MAX && text[len] != '\0') { ++len; }
-    if (len > GK__MIXTURE_TEXT_MAX) { return GK_ERR_PARSE; }
-
-    /* pass 1: every check; the first error found is reported. The value is converted before
-       the search for an earlier listing of the gas (no side effect) and its status reported
-       after it, so one mix_item serves both (firmware stack budget). */
-    for (;;) {
-        size_t q = 0;
-        const gk_gas *gas;
-        size_t end;
-        int is_balance;
-        gk_real x = GK_LIT(0.0);
-        gk_status value_st = GK_OK;
-        st = parse_item(text, len, pos, &it);
-        if (st != GK_OK) { return st; }
-        if (count == GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; }
-        gas = it.gas;
-        end = it.end;
-        is_balance = it.is_balance;
-        if (!is_balance) { value_st = item_fraction(&it, &x); }
-        for (i = 0; i < count; ++i) {
-            it.gas = NULL;
-            it.end = len;
-            (void)parse_item(text, len, q, &it); /* read before: cannot fail */
-            if (it.gas == gas) { return GK_ERR_COMPOSITION; /* listed twice */ }
-            q = it.end + 1u;
-        }
-        if (is_balance) {
-            if (balance_index != GK_MIXTURE_MAX) { return GK_ERR_PARSE; /* two balances */ }
-            balance_index = count;
-        } else {
-            if (value_st != GK_OK) { return value_st; }
-            gk__neumaier_add(&sum, &comp, x);
-        }
-        count += 1u;
-        if (end == len) { break; }
-        pos = end + 1u; /* past ',' */
+/* Is gas among the first count components of the text (already read without error)? */
+static bool listed_before(const char *text, size_t len, size_t count, const gk_gas *gas) {
+    mix_item it = { NULL, { 0u, 0, 0 }, 0, false, 0u };
+    size_t i, q = 0;
+    for (i = 0; i < count; ++i) {
+        it.gas = NULL;
+        it.end = len;
+        (void)parse_item(text, len, q, &it); /* read before: cannot fail */
+        if (it.gas == gas) { return true; }
+        q = it.end + 1u;
     }
+    return false;
+}
 
-    sum += comp;
-    if (balance_index != GK_MIXTURE_MAX) {
-        rest = GK_LIT(1.0) - sum;
-        if (rest < -GK__MIXTURE_SUM_TOL) { return GK_ERR_COMPOSITION; /* negative balance */ }
-        if (rest < GK_LIT(0.0)) { rest = GK_LIT(0.0); /* rounding within the 1e-6 budget */ }
+/* The checks of one component read by parse_item(), in the order of mixture.h: room, a gas
+   listed twice, two balances, then its value; adds the value to the tally. */
+static gk_status tally_item(const char *text, size_t len, const mix_item *it, mix_tally *tally) {
+    gk_real x = GK_LIT(0.0);
+    gk_status value_st = GK_OK;
+    if (tally->count == GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; }
+    if (!it->is_balance) { value_st = item_fraction(it, &x); }
+    if (listed_before(text, len, tally->count, it->gas)) { return GK_ERR_COMPOSITION; }
+    if (it->is_balance) {
+        if (tally->balance_index != GK_MIXTURE_MAX) { return GK_ERR_PARSE; /* two balances */ }
+        tally->balance_index = tally->count;
+    } else {
+        if (value_st != GK_OK) { return value_st; }
+        gk__neumaier_add(&tally->sum, &tally->comp, x);
+    }
+    tally->count += 1u;
+    return GK_OK;
+}
+
+/* Pass 1: every check of the text, the first error from left to right, then the sum; *rest is
+   the balance fraction (0 without a balance). */
+static gk_status check_text(const char *text, size_t len, mix_tally *tally, gk_real *rest) {
+    mix_item it = { NULL, { 0u, 0, 0 }, 0, false, 0u };
+    size_t pos = 0;
+    gk_real sum;
+    gk_status st;
+    for (;;) {
+        st = parse_item(text, len, pos, &it);
+        if (st == GK_OK) { st = tally_item(text, len, &it, tally); }
+        if (st != GK_OK) { return st; }
+        if (it.end == len) { break; }
+        pos = it.end + 1u; /* past ',' */
+    }
+    sum = tally->sum + tally->comp;
+    *rest = GK_LIT(0.0);
+    if (tally->balance_index != GK_MIXTURE_MAX) {
+        gk_real r = GK_LIT(1.0) - sum;
+        if (r < -GK__MIXTURE_SUM_TOL) { return GK_ERR_COMPOSITION; /* negative balance */ }
+        if (r > GK_LIT(0.0)) { *rest = r; /* a rounding below 0 within the 1e-6 budget is 0 */ }
     } else if (!(gk_fabs(sum - GK_LIT(1.0)) <= GK__MIXTURE_SUM_TOL)) {
         return GK_ERR_COMPOSITION;
     }
+    return GK_OK;
+}
 
-    /* pass 2: the same components again, into *out */
-    pos = 0;
+/* Pass 2 over a checked text: the same components again, into *out (cannot fail). */
+static void write_mixture(const char *text, size_t len, const mix_tally *tally, gk_real rest,
+                          gk_mixture *out) {
+    mix_item it = { NULL, { 0u, 0, 0 }, 0, false, 0u };
+    size_t i, pos = 0;
     for (i = 0; i < GK_MIXTURE_MAX; ++i) {
         gk_real x = GK_LIT(0.0);
         const gk_gas *gas = NULL;
-        if (i < count) {
+        if (i < tally->count) {
             it.gas = NULL;
             it.end = len;
             (void)parse_item(text, len, pos, &it);
             gas = it.gas;
-            if (i == balance_index) {
+            if (i == tally->balance_index) {
                 x = rest;
             } else {
                 (void)item_fraction(&it, &x);
@@ -257,7 +271,27 @@ gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
         out->gas[i] = gas;
         out->mole_fraction[i] = x;
     }
-    out->count = count;
+    out->count = tally->count;
+}
+
+/*
+ * Two passes over the text, so that *out stays untouched on every error without a second
+ * gk_mixture: the first makes every check and forms the sum (and the balance), the second reads
+ * the same components again and writes them.
+ */
+gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
+    mix_tally tally = { 0u, GK_MIXTURE_MAX, GK_LIT(0.0), GK_LIT(0.0) };
+    size_t len = 0;
+    gk_real rest = GK_LIT(0.0);
+    gk_status st;
+
+    if (text == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
+    /* Bounded length: reads at most GK__MIXTURE_TEXT_MAX + 1 characters, never past the NUL. */
+    while (len <= GK__MIXTURE_TEXT_MAX && text[len] != '\0') { ++len; }
+    if (len > GK__MIXTURE_TEXT_MAX) { return GK_ERR_PARSE; }
+    st = check_text(text, len, &tally, &rest);
+    if (st != GK_OK) { return st; }
+    write_mixture(text, len, &tally, rest, out);
     return GK_OK;
 }
 
@@ -299,18 +333,13 @@ gk_status gk_mixture_normalize(gk_mixture *mix) {
 }
 
 gk_status gk_mixture_molar_mass(const gk_mixture *mix, gk_molar_mass *out) {
-    gk_real terms[GK_MIXTURE_MAX];
     gk_real m;
-    size_t i;
     gk_status st;
 
     if (mix == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__mixture_check(mix);
     if (st != GK_OK) { return st; }
-    for (i = 0; i < mix->count; ++i) {
-        terms[i] = mix->mole_fraction[i] * mix->gas[i]->molar_mass.kg_per_mol;
-    }
-    m = gk__compensated_sum(terms, mix->count);
+    m = gk__mixture_molar_mass(mix);
     if (!gk_positive(m)) { return GK_ERR_RANGE; /* overflow of absurd molar masses */ }
     out->kg_per_mol = m;
     return GK_OK;

@@ -1,14 +1,16 @@
 /*
- * mixture_internal.h - private: the one composition check shared by every module that takes a
- * gk_mixture (mixture molar mass, mixture equation of state, instrument calculations). Never
- * installed; the symbol is hidden in the shared library (cmake/gaskit.map exports gk_[a-z]*).
+ * mixture_internal.h - private interface of mixture.c: the one composition check shared by every
+ * module that takes a gk_mixture (fluid layer, instrument calculations), and the mean molar
+ * mass. Never installed; the symbols are hidden in the shared library (cmake/gaskit.map exports
+ * gk_[a-z]*).
  */
 #ifndef GASKIT_MIXTURE_INTERNAL_H
 #define GASKIT_MIXTURE_INTERNAL_H
 
 #include "gk_internal.h"
 
-/* Largest |sum of mole fractions - 1| accepted as "sums to 1" (API.md: within 1e-6). */
+/* Largest |sum of mole fractions - 1| accepted as "sums to 1" (the 1e-6 that mixture.h
+   states; common practice for fractions given to six decimals). */
 #define GK__MIXTURE_SUM_TOL GK_LIT(1e-6)
 
 /**
@@ -27,14 +29,8 @@
  */
 gk_status gk__mixture_check(const gk_mixture *mix);
 
-/* ASCII lower case; no locale, no <ctype.h> (gas names and composition keywords). */
-static inline char gk__ascii_lower(char c) {
-    return (c >= 'A' && c <= 'Z') ? (char)(c - 'A' + 'a') : c;
-}
-
-/* gk_gas_find() on the n characters text[0 .. n) (no NUL needed; gases.c): the composition
-   parser looks names up in place, without a copy on the stack. GK_OK (and *out) or
-   GK_ERR_NOT_FOUND; the caller has checked text and out. */
-gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out);
+/* sum_i x_i M_i of a checked mixture (compensated summation), kg/mol; not checked (it may
+   underflow to 0 for absurd molar masses). */
+gk_real gk__mixture_molar_mass(const gk_mixture *mix);
 
 #endif /* GASKIT_MIXTURE_INTERNAL_H */

@@ -84,8 +84,8 @@ static void estimate_below_root(void **state) {
     assert_rel(z[2], 20.0, GK_TOL(4e-16, 2e-7));
 }
 
-/* Multiple roots. (z - 3/8)^3: the van der Waals critical point (Zc = 3/8, check-values.md);
-   coefficients 1.125, 0.421875, 0.052734375 are exact. */
+/* Multiple roots. (z - 3/8)^3: the van der Waals critical point (Zc = 3/8 from the critical
+   conditions, common practice); coefficients 1.125, 0.421875, 0.052734375 are exact. */
 static void triple_and_double_roots(void **state) {
     (void)state;
     gk_real z[3];
@@ -130,10 +130,10 @@ static void scaled_inputs(void **state) {
     assert_rel(z[2], 3 * t, GK_TOL(4e-16, 2e-6));
 }
 
-/* Peng-Robinson at Tr = 0.3, Pr = 0.001, omega = 0 (constants check-values.md): the small liquid
-   root that closed forms lose. Checked here by the backward error (each root is a root of the
-   given cubic to a few u, f evaluated in long double); the forward error against mpmath is in
-   test_eos (reference table). */
+/* Peng-Robinson at Tr = 0.3, Pr = 0.001, omega = 0 (constants of Peng and Robinson 1976): the
+   small liquid root that closed forms lose. Checked here by the backward error (each root is a
+   root of the given cubic to a few u, f evaluated in long double); the forward error against
+   mpmath is in test_eos (reference table). */
 static void small_liquid_root(void **state) {
     (void)state;
     /* A = 0.45724 alpha Pr / Tr^2, B = 0.0778 Pr / Tr with alpha = (1 + 0.37464 (1 - sqrt 0.3))^2 */

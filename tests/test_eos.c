@@ -28,7 +28,8 @@ static gk_gas ref_gas(double omega) {
     return g;
 }
 
-/* Model constants (same sources as lib/eos.c: check-values.md) for the long double check. */
+/* Model constants (same sources as lib/eos.c: van der Waals from Tc, Pc; Redlich and Kwong 1949;
+   Soave 1972; Peng and Robinson 1976) for the long double check. */
 static void ref_ab(gk_eos eos, long double tr, long double pr, long double omega,
                    long double *a, long double *b, long double *u, long double *w) {
     long double m, s;
@@ -170,8 +171,9 @@ static void published_example_n_butane(void **state) {
    pressure. Peng-Robinson CO2 at 280 K (Tc = 304.1282 K, Pc = 7.3773 MPa, omega = 0.22394: Span
    and Wagner 1996, from memory). The saturation pressure of the model is found here by bisection
    on equal fugacity of the gas and liquid roots; it must lie near the measured vapour pressure of
-   CO2 at 280 K, 4.160 MPa (NIST Chemistry WebBook / Span-Wagner, from memory; Peng-Robinson
-   reproduces vapour pressures of simple non-polar fluids to about 1-2 %, tolerance 3 %). */
+   CO2 at 280 K, 4.160 MPa (Span and Wagner, J. Phys. Chem. Ref. Data 25 (1996) 1509, from
+   memory; Peng-Robinson reproduces vapour pressures of simple non-polar fluids to about 1-2 %,
+   tolerance 3 %). */
 static void stable_root_switches_at_saturation(void **state) {
     (void)state;
     gk_gas co2 = {"carbon dioxide", "CO2", {(gk_real)0.0440095}, {(gk_real)304.1282},
@@ -296,7 +298,7 @@ static void contract_solve(void **state) {
 
 /* Extreme magnitudes: p and T over the whole floating-point range, every model and root choice.
    GK_OK must come with finite, positive Z, Vm and phi; any other status must leave the sentinel
-   in place (error contract, API.md). */
+   in place (the error contract of gk_status, include/gaskit/base.h). */
 static void extreme_magnitudes(void **state) {
     (void)state;
     gk_gas g = ref_gas(0.3);
@@ -433,6 +435,86 @@ static void batch_matches_scalar(void **state) {
     assert_true(isnan(out[0]));
 }
 
+/* The branch label of a lone root (eos.h): GK_ROOT_SUPERCRITICAL above the model's critical
+   temperature, else gas or liquid by the side of the model's critical volume. Table gases
+   (Tc: N2 126.2 K, CO2 304.13 K; Poling, Prausnitz and O'Connell, 5th ed., Appendix A, from
+   memory). Measured states for the values (from memory): N2 at 30 MPa, 293.15 K, Z about 1.10
+   (Span et al., J. Phys. Chem. Ref. Data 29 (2000) 1361); CO2 at 293.15 K: Z about 0.945 at
+   1 MPa (gas, below the vapour pressure 5.73 MPa), liquid density about 856 kg/m3 at 10 MPa
+   (Span and Wagner, J. Phys. Chem. Ref. Data 25 (1996) 1509). Peng-Robinson: gas Z within a
+   few percent, liquid densities 5-15 % off (tolerances 5 %, 2 %, 15 %). */
+static void branch_labels_supercritical(void **state) {
+    (void)state;
+    const gk_gas *n2 = NULL, *co2 = NULL;
+    gk_mixture air;
+    gk_eos_result r;
+    gk_density rho;
+    gk_temperature t20 = {(gk_real)293.15};
+    assert_status(gk_gas_find("N2", &n2), GK_OK);
+    assert_status(gk_gas_find("CO2", &co2), GK_OK);
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, n2, (gk_pressure){(gk_real)3.0e7}, t20,
+                               GK_ROOT_STABLE, &r), GK_OK);
+    assert_int_equal(r.root_count, 1);
+    assert_int_equal(r.branch, GK_ROOT_SUPERCRITICAL);
+    assert_rel(r.z, 1.10, 0.05);
+    /* every root choice returns the lone root with the same label */
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, n2, (gk_pressure){(gk_real)3.0e7}, t20,
+                               GK_ROOT_LIQUID, &r), GK_OK);
+    assert_int_equal(r.branch, GK_ROOT_SUPERCRITICAL);
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, co2, (gk_pressure){(gk_real)1.0e6}, t20,
+                               GK_ROOT_STABLE, &r), GK_OK);
+    assert_int_equal(r.root_count, 1);
+    assert_int_equal(r.branch, GK_ROOT_GAS);
+    assert_rel(r.z, 0.945, 0.02);
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, co2, (gk_pressure){(gk_real)1.0e7}, t20,
+                               GK_ROOT_STABLE, &r), GK_OK);
+    assert_int_equal(r.root_count, 1);
+    assert_int_equal(r.branch, GK_ROOT_LIQUID);
+    assert_status(gk_eos_density(GK_EOS_PENG_ROBINSON, co2, (gk_pressure){(gk_real)1.0e7}, t20,
+                                 &rho), GK_OK);
+    assert_rel(rho.kg_per_m3, 856.0, 0.15);
+    /* a mixture: above its pseudo-critical temperature (sum x_i Tc_i, about 132 K for air) */
+    assert_status(gk_mixture_parse("N2=0.79, O2=0.21", &air), GK_OK);
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &air, NULL,
+                                       (gk_pressure){(gk_real)3.0e7}, t20, GK_ROOT_STABLE, &r),
+                  GK_OK);
+    assert_int_equal(r.branch, GK_ROOT_SUPERCRITICAL);
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &air, NULL,
+                                       (gk_pressure){(gk_real)3.0e7}, (gk_temperature){(gk_real)120.0},
+                                       GK_ROOT_STABLE, &r),
+                  GK_OK);
+    assert_int_equal(r.branch, GK_ROOT_LIQUID);
+    /* the ideal gas has no critical point: always gas */
+    assert_status(gk_eos_solve(GK_EOS_IDEAL, n2, (gk_pressure){(gk_real)3.0e7}, t20,
+                               GK_ROOT_STABLE, &r), GK_OK);
+    assert_int_equal(r.branch, GK_ROOT_GAS);
+}
+
+/* GK_ROOT_SUPERCRITICAL is a label of results, not a choice: GK_ERR_ARGUMENT, output untouched. */
+static void supercritical_is_no_input(void **state) {
+    (void)state;
+    const gk_gas *n2 = NULL;
+    gk_mixture air;
+    gk_eos_result r, before;
+    gk_volume v = {GK_SENTINEL};
+    gk_vdw c = {(gk_real)0.137, (gk_real)3.87e-5};
+    memset(&r, 0x5a, sizeof r);
+    before = r;
+    assert_status(gk_gas_find("N2", &n2), GK_OK);
+    assert_status(gk_mixture_parse("N2=0.79, O2=0.21", &air), GK_OK);
+    assert_status(gk_eos_solve(GK_EOS_PENG_ROBINSON, n2, (gk_pressure){(gk_real)1e5},
+                               (gk_temperature){(gk_real)293.15}, GK_ROOT_SUPERCRITICAL, &r),
+                  GK_ERR_ARGUMENT);
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &air, NULL, (gk_pressure){(gk_real)1e5},
+                                       (gk_temperature){(gk_real)293.15}, GK_ROOT_SUPERCRITICAL, &r),
+                  GK_ERR_ARGUMENT);
+    assert_memory_equal(&r, &before, sizeof r);
+    assert_status(gk_vdw_volume(c, (gk_amount){(gk_real)1.0}, (gk_pressure){(gk_real)1e5},
+                                (gk_temperature){(gk_real)293.15}, GK_ROOT_SUPERCRITICAL, &v),
+                  GK_ERR_ARGUMENT);
+    assert_rel(v.m3, GK_SENTINEL, 0.0);
+}
+
 int main(void) {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(reference_table_all_models),
@@ -444,6 +526,8 @@ int main(void) {
         cmocka_unit_test(extreme_magnitudes),
         cmocka_unit_test(contract_pressure_density),
         cmocka_unit_test(batch_matches_scalar),
+        cmocka_unit_test(branch_labels_supercritical),
+        cmocka_unit_test(supercritical_is_no_input),
     };
     return cmocka_run_group_tests_name("eos", tests, NULL, NULL);
 }

@@ -5,7 +5,7 @@
  * against the same rules evaluated independently here in long double, and the error contract.
  *
  * Test gases (critical constants and acentric factors from memory, as published in Poling et al.
- * 5th ed. Appendix A and the NIST Chemistry WebBook): methane 190.56 K, 4.599 MPa, 0.011;
+ * 5th ed. Appendix A): methane 190.56 K, 4.599 MPa, 0.011;
  * ethane 305.32 K, 4.872 MPa, 0.099; carbon dioxide 304.13 K, 7.377 MPa, 0.224;
  * nitrogen 126.2 K, 3.398 MPa, 0.037.
  */
@@ -21,16 +21,18 @@ static const gk_gas CO2 = {"carbon dioxide", "CO2", {(gk_real)0.044009}, {(gk_re
 static const gk_gas N2 = {"nitrogen", "N2", {(gk_real)0.028013}, {(gk_real)126.2}, {(gk_real)3.398e6},
                           (gk_real)0.037, 0, 0, 0, 0};
 
-#define R_EXACT 8.314462618L /* CODATA 2018 (check-values.md) */
+/* CODATA 2018 printed value of R (10 digits; N_A k is 8.31446261815324, exact since SI 2019). */
+#define R_CODATA 8.314462618L
 
-/* Peng-Robinson a(T), b of a pure gas in SI, long double (constants: check-values.md). */
+/* Peng-Robinson a(T), b of a pure gas in SI, long double (constants: Peng and Robinson,
+   Ind. Eng. Chem. Fundam. 15 (1976) 59, from memory). */
 static void pr_ab(const gk_gas *g, long double t, long double *a, long double *b) {
     long double tc = (long double)g->critical_temperature.k, pc = (long double)g->critical_pressure.pa;
     long double w = (long double)g->acentric_factor;
     long double k = 0.37464L + 1.54226L * w - 0.26992L * w * w;
     long double s = 1.0L + k * (1.0L - sqrtl(t / tc));
-    *a = 0.45724L * R_EXACT * R_EXACT * tc * tc / pc * s * s;
-    *b = 0.07780L * R_EXACT * tc / pc;
+    *a = 0.45724L * R_CODATA * R_CODATA * tc * tc / pc * s * s;
+    *b = 0.07780L * R_CODATA * tc / pc;
 }
 
 /* Pressure of a Peng-Robinson mixture at Vm, T from the mixing rules, long double. */
@@ -44,7 +46,7 @@ static long double pr_mix_pressure(const gk_mixture *m, const double *kij, long 
             a += (long double)m->mole_fraction[i] * (long double)m->mole_fraction[j] * sqrtl(ai[i] * ai[j]) *
                  (1.0L - (kij ? (long double)kij[i * n + j] : 0.0L));
     }
-    return R_EXACT * t / (vm - b) - a / (vm * vm + 2.0L * b * vm - b * b);
+    return R_CODATA * t / (vm - b) - a / (vm * vm + 2.0L * b * vm - b * b);
 }
 
 static gk_mixture natural_gas(void) {
@@ -179,11 +181,34 @@ static void error_contract(void **state) {
     assert_memory_equal(&r, &keep, sizeof r);
 }
 
+/* Order of the statuses (mixture.h): the mixture is checked before the state, so an input with
+   a fault in each reports the mixture's; one fault reports its own. */
+static void fluid_checked_before_state(void **state) {
+    (void)state;
+    gk_mixture m = natural_gas();
+    gk_eos_result r;
+    const double bad_kij[16] = {0, 2, 0, 0, 2, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0}; /* |k| > 1 */
+    gk_real kij[16];
+    gk_pressure p = {(gk_real)5e6}, p_bad = {(gk_real)-1.0};
+    gk_temperature t = {(gk_real)300.0};
+    for (int i = 0; i < 16; ++i) kij[i] = (gk_real)bad_kij[i];
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &m, kij, p, t, GK_ROOT_STABLE, &r),
+                  GK_ERR_DOMAIN);
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &m, kij, p, t, (gk_root)7, &r),
+                  GK_ERR_DOMAIN);
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &m, NULL, p, t, (gk_root)7, &r),
+                  GK_ERR_ARGUMENT);
+    m.mole_fraction[0] = (gk_real)0.5; /* sum 0.6 */
+    assert_status(gk_mixture_eos_solve(GK_EOS_PENG_ROBINSON, &m, NULL, p_bad, t, (gk_root)7, &r),
+                  GK_ERR_COMPOSITION);
+}
+
 int main(void) {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(pure_limits),
         cmocka_unit_test(mixing_rules_independent_check),
         cmocka_unit_test(error_contract),
+        cmocka_unit_test(fluid_checked_before_state),
     };
     return cmocka_run_group_tests_name("eos_mixture", tests, NULL, NULL);
 }

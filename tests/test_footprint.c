@@ -1,7 +1,7 @@
-/* test_footprint.c - the paths rewritten for the firmware size and stack budget (issue 5):
- * gas names and aliases looked up in place, unit symbols and alias texts held in the tables,
- * the two-pass composition parser, the mixing rule without per-component arrays, and the wet
- * mixture written entry by entry.
+/* test_footprint.c - the paths rewritten for the firmware size and stack budget
+ * (docs/embedding.md): gas names and aliases looked up in place, unit symbols and alias texts
+ * held in the tables, the two-pass composition parser, the mixing rule without per-component
+ * arrays, and the wet mixture written entry by entry.
  *
  * Outside references: molar masses from the IUPAC/CIAAW standard atomic weights 2021 (as in
  * lib/gases.c: N2 2 x 14.007 g/mol, O2 2 x 15.999 g/mol, Ar 39.95 g/mol). The mixing-rule

@@ -213,7 +213,7 @@ static void air_is_the_iso_2533_pseudo_pure_gas(void **state) {
     /* ISO 2533:1975 / U.S. Standard Atmosphere 1976: M = 28.9644 g/mol, gamma 1.40. */
     assert_rel(air->molar_mass.kg_per_mol, 28.9644e-3, GK_TOL(1e-12, 1e-6));
     assert_rel(air->heat_capacity_ratio, 1.4, GK_TOL(1e-12, 1e-6));
-    /* Sea-level speed of sound 340.294 m/s (ISO 2533, check-values.md) from the table's gamma
+    /* Sea-level speed of sound 340.294 m/s (ISO 2533:1975, sea-level table) from the table's gamma
        and M at 288.15 K; ISO 2533 uses R* = 8.31432 J/(mol K), about 2e-5 below CODATA R, so
        the CODATA figure is about 1e-5 higher: tolerance 3e-5. */
     double c = sqrt((double)air->heat_capacity_ratio * 8.314462618 * 288.15 /
@@ -228,7 +228,8 @@ static void air_is_the_iso_2533_pseudo_pure_gas(void **state) {
 static void water_critical_point_is_iapws(void **state) {
     (void)state;
     const gk_gas *w = must_find("water");
-    /* IAPWS critical point 647.096 K, 22.064 MPa (check-values.md). */
+    /* Critical point of water 647.096 K, 22.064 MPa (IAPWS R2-83(1992), the release on the
+       critical-point values of ordinary and heavy water; also used by IAPWS-95 and IF97). */
     assert_rel(w->critical_temperature.k, 647.096, GK_TOL(1e-12, 1e-6));
     assert_rel(w->critical_pressure.pa, 22.064e6, GK_TOL(1e-12, 1e-6));
 }
@@ -236,7 +237,7 @@ static void water_critical_point_is_iapws(void **state) {
 static void handbook_van_der_waals_constants(void **state) {
     (void)state;
     /* CRC Handbook, "Van der Waals constants for gases" (older table; CO2 and H2 from the newer
-       table), as quoted in check-values.md; a in bar L2/mol2 (x 0.1 -> Pa m6/mol2), b in L/mol
+       table; from memory); a in bar L2/mol2 (x 0.1 -> Pa m6/mol2), b in L/mol
        (x 1e-3 -> m3/mol). */
     static const struct { const char *formula; double a_bar_l2; double b_l; } crc[] = {
         {"He", 0.0346, 0.0238}, {"N2", 1.370, 0.0387}, {"O2", 1.382, 0.03186},
@@ -252,7 +253,7 @@ static void handbook_van_der_waals_constants(void **state) {
 
 static void critical_data_reproduce_handbook_van_der_waals(void **state) {
     (void)state;
-    /* check-values.md: the CRC constants are fitted to critical data, so a = 27 R^2 Tc^2/(64 Pc),
+    /* The CRC constants are fitted to critical data (common practice), so a = 27 R^2 Tc^2/(64 Pc),
        b = R Tc/(8 Pc) from the table's Tc, Pc must reproduce them within a few percent. This
        checks the critical data of the table against an independent published table. Observed
        agreement is better than 0.3 % (H2 b: 0.9 %); tolerance 2 %. */
@@ -286,10 +287,27 @@ static void heat_capacity_ratios_follow_kinetic_theory(void **state) {
 
 static void graham_ratio_of_hydrogen_to_oxygen(void **state) {
     (void)state;
-    /* check-values.md (common practice): effusion rate ratio H2 (2.016) : O2 (31.998) ~ 3.98. */
+    /* Graham's law (common practice), IUPAC 2021 atomic weights: effusion rate ratio H2 (2.016) :
+       O2 (31.998) ~ 3.98. */
     double ratio = sqrt((double)must_find("O2")->molar_mass.kg_per_mol /
                         (double)must_find("H2")->molar_mass.kg_per_mol);
     assert_rel(ratio, 3.98, 1e-3);
+}
+
+/* The scan of a key is bounded (gas.h): a text of GK_GAS_KEY_MAX + 1 characters without a NUL
+   within them is not found and is read no further (AddressSanitizer would catch a read past the
+   array); every key of the table fits. */
+static void key_scan_is_bounded(void **state) {
+    (void)state;
+    char longest[GK_GAS_KEY_MAX + 1];
+    const gk_gas *g = NULL;
+    memset(longest, 'N', sizeof longest);
+    assert_status(gk_gas_find(longest, &g), GK_ERR_NOT_FOUND);
+    assert_null(g);
+    for (size_t i = 0; i < gk_gas_count(); ++i) {
+        assert_true(strlen(gk_gas_at(i)->name) <= GK_GAS_KEY_MAX);
+        assert_true(strlen(gk_gas_at(i)->formula) <= GK_GAS_KEY_MAX);
+    }
 }
 
 int main(void) {
@@ -309,6 +327,7 @@ int main(void) {
         cmocka_unit_test(critical_data_reproduce_handbook_van_der_waals),
         cmocka_unit_test(heat_capacity_ratios_follow_kinetic_theory),
         cmocka_unit_test(graham_ratio_of_hydrogen_to_oxygen),
+        cmocka_unit_test(key_scan_is_bounded),
     };
     return cmocka_run_group_tests_name("gases", tests, NULL, NULL);
 }

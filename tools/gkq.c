@@ -778,7 +778,10 @@ static gk_status word_state(const settings *set, args *a, record *r, detail *why
     rec_real(r, "density", rho);
     rec_real(r, "phi", D(res.fugacity_coefficient));
     rec_real(r, "fugacity", D(res.fugacity_coefficient) * D(p.pa));
-    rec_text(r, "branch", res.branch == GK_ROOT_LIQUID ? "liquid" : "gas");
+    rec_text(r, "branch",
+             res.branch == GK_ROOT_LIQUID          ? "liquid"
+             : res.branch == GK_ROOT_SUPERCRITICAL ? "supercritical"
+                                                   : "gas");
     rec_real(r, "root_count", (double)res.root_count);
     for (i = 0; i < res.root_count && i < 3; i++) {
         static const char *const keys[3] = { "z_root_1", "z_root_2", "z_root_3" };

@@ -9,7 +9,7 @@ for prec in 0 1; do
   sed "s/@GK_REAL_IS_FLOAT@/$prec/" include/gaskit/config.h.in >"$gen/gaskit/config.h"
   for f in lib/*.c; do
     gcc -std=c99 -O1 -fanalyzer -Wall -Wextra -Werror -DGK_BUILDING_LIBRARY \
-        -Iinclude -I"$gen" -Ilib -c "$f" -o /dev/null
+        -I"$gen" -Iinclude -Ilib -c "$f" -o /dev/null
     n=$((n + 1))
   done
 done

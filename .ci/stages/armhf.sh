@@ -15,10 +15,10 @@ echo "summary: armhf under qemu-arm: $(grep -E 'tests passed' build-armhf/ctest.
 
 # The same sweep as the float stage, double on armhf against double on the host.
 [ -f build/libgaskit.a ] || { cmake -B build -DGASKIT_WERROR=ON && cmake --build build -j2 --target gaskit_static; }
-gcc -std=c99 -O2 -Iinclude -Ibuild/include bindings-examples/firmware/float_accuracy.c \
+gcc -std=c99 -O2 -Ibuild/include -Iinclude bindings-examples/firmware/float_accuracy.c \
     build/libgaskit.a -lm -o build/float_accuracy
 build/float_accuracy >build/float_accuracy.txt
-arm-linux-gnueabihf-gcc -std=c99 -O2 -Iinclude -Ibuild-armhf/include \
+arm-linux-gnueabihf-gcc -std=c99 -O2 -Ibuild-armhf/include -Iinclude \
     bindings-examples/firmware/float_accuracy.c build-armhf/libgaskit.a -lm -o build-armhf/float_accuracy
 qemu-arm build-armhf/float_accuracy >build-armhf/float_accuracy.txt
 python3 bindings-examples/firmware/float_accuracy.py build/float_accuracy.txt build-armhf/float_accuracy.txt \

@@ -10,7 +10,7 @@ ctest --test-dir build-f --output-on-failure
 # build (bindings-examples/firmware/float_accuracy.c; the table is in docs/embedding.md).
 [ -f build/libgaskit.a ] || { cmake -B build -DGASKIT_WERROR=ON && cmake --build build -j2 --target gaskit_static; }
 for b in build build-f; do
-  gcc -std=c99 -O2 -Iinclude -I"$b/include" bindings-examples/firmware/float_accuracy.c \
+  gcc -std=c99 -O2 -I"$b/include" -Iinclude bindings-examples/firmware/float_accuracy.c \
       "$b/libgaskit.a" -lm -o "$b/float_accuracy"
   "$b/float_accuracy" >"$b/float_accuracy.txt"
 done

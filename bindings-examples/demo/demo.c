@@ -207,7 +207,7 @@ int main(void) {
                "flow at reference, dry") &&
             ok(gk_flow_to_reference(GK_EOS_IDEAL, h.fluid, actual, pdry, tm, normal, &dry_ref_ideal),
                "flow at reference, dry, ideal gas") &&
-            ok(gk_mass_flow(GK_EOS_PENG_ROBINSON, h.fluid, actual, pdry, tm, &w), "dry mass flow") &&
+            ok(gk_flow_to_mass(GK_EOS_PENG_ROBINSON, h.fluid, actual, pdry, tm, &w), "dry mass flow") &&
             ok(gk_volume_flow_to(actual, GK_UNIT_ML_PER_MIN, &ml_min), "unit") &&
             ok(gk_volume_flow_to(wet_ref, GK_UNIT_ML_PER_MIN, &wet_ml), "unit") &&
             ok(gk_volume_flow_to(dry_ref, GK_UNIT_ML_PER_MIN, &dry_ml), "unit") &&

@@ -1,5 +1,5 @@
 /*
- * main.c - sample firmware of an invented cylinder-bank and line monitor ("Kestrel Bench
+ * main.c - sample firmware of an invented cylinder-bank and line monitor ("Pelloran bank
  * monitor", a product of our own) that embeds gaskit in single precision.
  *
  * Each cycle it takes raw sensor readings (here: fixed values behind volatile, as an ADC driver

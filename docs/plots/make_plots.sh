@@ -16,7 +16,7 @@ TMP=$(mktemp -d)
 trap 'rm -rf "$TMP"' EXIT
 
 [ -f "$BUILD/libgaskit.a" ] || { echo "build gaskit first: cmake -B build && cmake --build build"; exit 1; }
-"$CC" -std=c99 -O2 -I "$ROOT/include" -I "$BUILD/include" "$HERE/plotdata.c" "$BUILD/libgaskit.a" -lm \
+"$CC" -std=c99 -O2 -I "$BUILD/include" -I "$ROOT/include" "$HERE/plotdata.c" "$BUILD/libgaskit.a" -lm \
     -o "$TMP/plotdata"
 
 "$TMP/plotdata" z N2 293.15 1 400 >"$TMP/n2.dat" 2>"$TMP/n2.err"

@@ -46,7 +46,7 @@ typedef double gk_real;
 /** Major version: changes on an incompatible API or ABI change (it is the SONAME). */
 #define GK_VERSION_MAJOR 0
 /** Minor version: compatible additions. */
-#define GK_VERSION_MINOR 1
+#define GK_VERSION_MINOR 2
 /** Patch version: fixes only. */
 #define GK_VERSION_PATCH 0
 

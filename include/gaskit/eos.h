@@ -20,6 +20,11 @@ extern "C" {
 #endif
 
 /** @defgroup eos Van der Waals and cubic equations of state
+ *  Every function here returns GK_ERR_ARGUMENT for a NULL pointer or an enum value out of
+ *  range, GK_ERR_DOMAIN for an input that is not finite or outside its physical domain
+ *  (p, T, n, V, Vm not > 0; gas data or van der Waals constants that are not physical), and
+ *  GK_ERR_RANGE where a result overflows or underflows; outputs are written only on GK_OK.
+ *  Below, each function lists what it adds to that.
  *  @{ */
 
 /** Van der Waals constants. */
@@ -28,41 +33,41 @@ typedef struct gk_vdw {
     gk_real b; /**< covolume, m^3 mol^-1 */
 } gk_vdw;
 
-/** Which root of a cubic equation of state to return. */
+/**
+ * Which root of a cubic equation of state to return (an input: the first three values), and
+ * which branch a result lies on (gk_eos_result.branch: GAS, LIQUID or SUPERCRITICAL).
+ */
 typedef enum gk_root {
     GK_ROOT_STABLE, /**< the root with the lower fugacity (lower Gibbs energy) */
     GK_ROOT_GAS,    /**< the largest real root above the covolume */
-    GK_ROOT_LIQUID  /**< the smallest real root above the covolume */
+    GK_ROOT_LIQUID, /**< the smallest real root above the covolume */
+    /** Output only: a lone root above the model's critical temperature (for a mixture, its
+     *  pseudo-critical temperature sum x_i Tc_i), neither gas nor liquid. As an input it is
+     *  GK_ERR_ARGUMENT. */
+    GK_ROOT_SUPERCRITICAL
 } gk_root;
 
 /**
  * @brief Van der Waals constants from the critical point: a = 27 R^2 Tc^2 / (64 Pc),
  *        b = R Tc / (8 Pc).
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL.
- * @retval GK_ERR_DOMAIN   An input is not finite or not > 0.
- * @retval GK_ERR_RANGE    A constant overflows.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_vdw_from_critical(gk_temperature tc, gk_pressure pc, gk_vdw *out);
 
 /**
  * @brief Van der Waals pressure p = n R T / (V - n b) - a n^2 / V^2.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL.
- * @retval GK_ERR_DOMAIN   An input is not finite, n, V, T not > 0, a or b < 0, or V <= n b.
+ * @retval GK_ERR_DOMAIN   Also for a or b < 0, or V <= n b.
  * @retval GK_ERR_NO_SOLUTION The pressure would not be > 0 (a metastable or unstable state
  *                            of the model with negative pressure).
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval Others          See the group.
  */
 GK_API gk_status gk_vdw_pressure(gk_vdw c, gk_amount n, gk_volume v, gk_temperature t,
                                  gk_pressure *out);
 
 /**
  * @brief Van der Waals temperature T = (p + a n^2 / V^2)(V - n b) / (n R).
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL.
- * @retval GK_ERR_DOMAIN   An input is not finite, n, V, p not > 0, a or b < 0, or V <= n b.
- * @retval GK_ERR_RANGE    The result overflows, or underflows to 0.
+ * @retval GK_ERR_DOMAIN   Also for a or b < 0, or V <= n b.
+ * @retval Others          See the group.
  */
 GK_API gk_status gk_vdw_temperature(gk_vdw c, gk_amount n, gk_volume v, gk_pressure p,
                                     gk_temperature *out);
@@ -75,11 +80,9 @@ GK_API gk_status gk_vdw_temperature(gk_vdw c, gk_amount n, gk_volume v, gk_press
  * @param t    Temperature, > 0 K.
  * @param root Which root where there are three (see gk_root).
  * @param[out] out The volume V of the chosen root, m^3.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL or @p root out of range.
- * @retval GK_ERR_DOMAIN   An input is not finite, n, p, T not > 0, or a or b < 0.
+ * @retval GK_ERR_ARGUMENT Also for @p root GK_ROOT_SUPERCRITICAL (an output label only).
  * @retval GK_ERR_NO_SOLUTION No real root above the covolume.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval Others          See the group.
  */
 GK_API gk_status gk_vdw_volume(gk_vdw c, gk_amount n, gk_pressure p, gk_temperature t, gk_root root,
                                gk_volume *out);
@@ -114,8 +117,11 @@ typedef struct gk_eos_result {
      */
     int root_count;
     gk_real z_roots[3]; /**< those roots of Z, ascending; unused entries 0 */
-    /** GK_ROOT_GAS or GK_ROOT_LIQUID: the branch returned. With a lone root: GK_ROOT_LIQUID when
-     * it is denser than the model's critical density (Z/B < Zc/Omega_b), else GK_ROOT_GAS
+    /** The branch returned: GK_ROOT_GAS or GK_ROOT_LIQUID for the root chosen among two or
+     * three. A lone root is GK_ROOT_SUPERCRITICAL at T above the model's critical temperature
+     * (for a mixture the pseudo-critical sum x_i Tc_i; Tc = 8 a / (27 R b) for van der Waals
+     * with the gas's handbook a, b), else GK_ROOT_LIQUID when it is denser than the model's
+     * critical density (Z/B < Zc/Omega_b), else GK_ROOT_GAS. The ideal gas: GK_ROOT_GAS.
      */
     gk_root branch;
 } gk_eos_result;
@@ -141,14 +147,12 @@ typedef struct gk_eos_result {
  * @param t   Temperature, > 0 K.
  * @param root Which root where there are three (see gk_root).
  * @param[out] out Z, molar volume and fugacity coefficient of the chosen root, and all roots.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p gas or @p out is NULL, or @p eos or @p root out of range.
- * @retval GK_ERR_DOMAIN   p or T not finite or not > 0, or the gas data are not physical.
- * @retval GK_ERR_NO_SOLUTION No real root above the covolume (cannot happen for these models
- *                            with physical data: one root always lies in (B, 1 + B]).
- * @retval GK_ERR_RANGE    The result overflows or underflows (e.g. phi of a liquid root at an
- *                         absurdly low temperature), or the root lies within rounding of the
- *                         covolume and cannot be told from it.
+ * Statuses: the gas and model are checked before the state (p, T, root).
+ * @retval GK_ERR_ARGUMENT Also for @p root GK_ROOT_SUPERCRITICAL (an output label only).
+ * @retval GK_ERR_RANGE    Also where the root lies within rounding of the covolume and cannot
+ *                         be told from it (e.g. phi of a liquid root at an absurdly low
+ *                         temperature overflows or underflows).
+ * @retval Others          See the group.
  */
 GK_API gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
                               gk_root root, gk_eos_result *out);
@@ -158,19 +162,17 @@ GK_API gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_t
  *        p = R T / (Vm - b) - a(T) / (Vm^2 + u b Vm + w b^2) with the constants of
  *        gk_eos_solve() ((u, w) = (0, 0) vdW, (1, 0) RK and SRK, (2, -1) PR); R T / Vm for the
  *        ideal gas.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p gas or @p out is NULL, or @p eos out of range.
- * @retval GK_ERR_DOMAIN   Vm or T not finite or not > 0, Vm at or below the covolume, or the
- *                         gas data are not physical.
+ * @retval GK_ERR_DOMAIN   Also for Vm at or below the covolume.
  * @retval GK_ERR_NO_SOLUTION The model gives a pressure that is not > 0.
- * @retval GK_ERR_RANGE    The result overflows.
+ * @retval Others          See the group.
  */
 GK_API gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm,
                                  gk_temperature t, gk_pressure *out);
 
 /**
  * @brief Mass density of the stable root: rho = M / Vm.
- * @retval As gk_eos_solve().
+ * @retval GK_ERR_DOMAIN Also for a molar mass of the gas that is not finite or not > 0.
+ * @retval Others        As gk_eos_solve().
  */
 GK_API gk_status gk_eos_density(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
                                 gk_density *out);

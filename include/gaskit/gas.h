@@ -36,6 +36,9 @@ typedef struct gk_gas {
     gk_real collision_diameter;
 } gk_gas;
 
+/** Longest formula, name or alias gk_gas_find() looks up, in characters before the NUL. */
+#define GK_GAS_KEY_MAX 63
+
 /**
  * @brief Finds a gas of the built-in table by formula or name.
  *
@@ -48,7 +51,8 @@ typedef struct gk_gas {
  *   ASCII case ("Carbon Dioxide"). No locale is consulted.
  * - No trimming: " N2" and "nitrogen " find nothing.
  * The table, its conventions and the source of every column are listed in docs/gas-table.md.
- * Reads @p name_or_formula only up to its terminating NUL.
+ * Reads @p name_or_formula only up to its terminating NUL, and never more than
+ * GK_GAS_KEY_MAX + 1 characters: a longer text names no gas (GK_ERR_NOT_FOUND).
  * @param name_or_formula NUL-terminated text.
  * @param[out] out Pointer to the static, constant table entry (the same pointer for every key
  *             of the same gas, so pointers may be compared).
@@ -60,7 +64,7 @@ typedef struct gk_gas {
 GK_API gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out);
 
 /**
- * @brief Number of gases in the built-in table (31 in version 0.1).
+ * @brief Number of gases in the built-in table (31 in version 0.2).
  * @return The count; gk_gas_at() accepts 0 ... count - 1.
  */
 GK_API size_t gk_gas_count(void);

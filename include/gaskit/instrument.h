@@ -26,6 +26,12 @@ extern "C" {
 #endif
 
 /** @defgroup instrument Instrument calculations
+ *  Every function here that takes a gk_fluid checks it first: GK_ERR_ARGUMENT for a NULL
+ *  output, an @p eos out of range or not exactly one of gas and mixture, then the statuses of
+ *  gk_mixture_eos_solve() for the composition, the gas data and k_ij. Then GK_ERR_DOMAIN for a
+ *  reading or reference p, T that is not finite or not > 0, GK_ERR_RANGE for a liquid stable
+ *  state (see the file comment) or a result that overflows or underflows, and otherwise the
+ *  statuses of gk_eos_solve(). Outputs are written only on GK_OK.
  *  @{ */
 
 /** What is in the vessel or the line: exactly one of gas and mixture is non-NULL. */
@@ -39,9 +45,7 @@ typedef struct gk_fluid {
  * @brief Compressibility factor Z of the stable root of @p eos for a gas or mixture.
  *
  * The stable root is returned whether it is gas or liquid (no liquid check here).
- * @retval GK_OK           @p z written.
- * @retval GK_ERR_ARGUMENT @p z is NULL, @p eos out of range, or not exactly one of gas and mixture.
- * @retval Others          As gk_eos_solve() / gk_mixture_eos_solve().
+ * @return A status: see the group.
  */
 GK_API gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t,
                             gk_real *z);
@@ -50,10 +54,9 @@ GK_API gk_status gk_fluid_z(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temper
  * @brief Actual volume flow at p, T to the volume flow at a reference condition, with Z from
  *        @p eos at both conditions: q_ref = q (p / p_ref)(T_ref / T)(Z_ref / Z).
  *
- * Any finite flow converts, also zero and negative (reverse) flow.
- * @retval As gk_fluid_z(); GK_ERR_DOMAIN for a flow that is not finite or a reference p, T not
- *         finite or not > 0; GK_ERR_RANGE for a stable state that is liquid at either
- *         condition, or a result that overflows.
+ * Any finite flow converts, also zero and negative (reverse) flow; the stable state must be
+ * gas at both conditions.
+ * @return A status: see the group (GK_ERR_DOMAIN also for a flow that is not finite).
  */
 GK_API gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow actual,
                                       gk_pressure p, gk_temperature t, gk_reference ref,
@@ -62,31 +65,20 @@ GK_API gk_status gk_flow_to_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow
 /**
  * @brief Volume flow at a reference condition to the actual volume flow at p, T (the inverse of
  *        gk_flow_to_reference()).
- * @retval As gk_flow_to_reference().
+ * @return A status: see the group (GK_ERR_DOMAIN also for a flow that is not finite).
  */
 GK_API gk_status gk_flow_from_reference(gk_eos eos, gk_fluid fluid, gk_volume_flow at_reference,
                                         gk_reference ref, gk_pressure p, gk_temperature t,
                                         gk_volume_flow *out);
 
 /**
- * @brief Mass flow of an actual volume flow at p, T: w = q rho(p, T).
- *
- * The API contract names this function gk_mass_flow, but in C that name is already the
- * typedef of the mass-flow quantity (gk_mass_flow), and a function and a typedef cannot share
- * an identifier. The linked symbol is therefore gk_flow_to_mass; the function-like macro
- * gk_mass_flow() below keeps the contract's call syntax working from C and C++ source (it
- * expands only where the name is followed by '(', so the type name is unaffected).
- * Foreign callers may bind either symbol: on ELF targets built with GCC or clang the library
- * also exports gk_mass_flow, a thin wrapper (lib/contract_names.c).
- * Density rho = p M / (Z R T) with M the molar mass of the gas or the mixture.
- * @retval As gk_flow_to_reference() (liquid at p, T: GK_ERR_RANGE).
+ * @brief Mass flow of an actual volume flow at p, T: w = q rho(p, T), rho = p M / (Z R T)
+ *        with M the molar mass of the gas or the mixture.
+ * @return A status: see the group (GK_ERR_DOMAIN also for a flow that is not finite or a molar mass of
+ *         the gas that is not finite or not > 0).
  */
 GK_API gk_status gk_flow_to_mass(gk_eos eos, gk_fluid fluid, gk_volume_flow actual, gk_pressure p,
                                  gk_temperature t, gk_mass_flow *out);
-
-/** Contract spelling of gk_flow_to_mass() (see there). */
-#define gk_mass_flow(eos, fluid, actual, p, t, out) \
-  gk_flow_to_mass((eos), (fluid), (actual), (p), (t), (out))
 
 /** Contents of a vessel. */
 typedef struct gk_contents {
@@ -102,9 +94,8 @@ typedef struct gk_contents {
  * amount n = p V / (Z R T), mass n M, reference_volume n Z_ref R T_ref / p_ref, z = Z.
  * Where the stable state in the vessel is liquid (a liquefied-gas cylinder), the contents do not
  * follow from pressure: GK_ERR_RANGE; such containers are weighed.
- * @retval As gk_fluid_z(); GK_ERR_DOMAIN for a vessel volume (or a reference p, T) not finite
- *         or not > 0; GK_ERR_RANGE for a liquid stable state in the vessel or at the
- *         reference condition, or a result that overflows.
+ * @return A status: see the group (GK_ERR_DOMAIN also for a vessel volume or a molar mass of the gas
+ *         that is not finite or not > 0).
  */
 GK_API gk_status gk_vessel_contents(gk_eos eos, gk_fluid fluid, gk_volume vessel, gk_pressure p,
                                     gk_temperature t, gk_reference ref, gk_contents *out);
@@ -124,12 +115,10 @@ typedef struct gk_leak {
  * mol_per_s Z_ref R T_ref / p_ref. An unchanged state gives a zero leak. The small difference
  * of the two amounts is formed from the differences of the readings (see docs/instruments.md
  * for its accuracy in a float build).
- * @retval GK_OK              @p out written.
  * @retval GK_ERR_NO_SOLUTION The end state holds more gas than the start (gas flowed in, or
  *                            the temperature reading is wrong).
- * @retval GK_ERR_DOMAIN      Elapsed time or volume not finite or not > 0, or another input
- *                            outside its domain.
- * @retval Others             As gk_vessel_contents().
+ * @retval Others             See the group (GK_ERR_DOMAIN also for an elapsed time, a volume
+ *                            or a molar mass of the gas that is not finite or not > 0).
  */
 GK_API gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volume test_volume,
                                              gk_pressure p_start, gk_temperature t_start,
@@ -139,7 +128,7 @@ GK_API gk_status gk_leak_rate_pressure_decay(gk_eos eos, gk_fluid fluid, gk_volu
 /**
  * @brief Density of a gas or mixture relative to dry air at the same pressure and temperature:
  *        d = (M / M_air)(Z_air / Z), both Z from @p eos; dry air is the gas table's "air".
- * @retval As gk_fluid_z(); GK_ERR_RANGE where the fluid or air is liquid in the model.
+ * @return A status: see the group (GK_ERR_RANGE also where air is liquid in the model).
  */
 GK_API gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temperature t,
                                      gk_real *out);

@@ -13,6 +13,11 @@ extern "C" {
 #endif
 
 /** @defgroup mixture Mixtures
+ *  Every function here returns GK_ERR_ARGUMENT for a NULL argument (or a NULL component gas
+ *  among the first count) and writes its outputs only on GK_OK. A valid composition has count
+ *  1 ... GK_MIXTURE_MAX, every fraction in [0, 1] and a sum of 1 within 1e-6 (compensated
+ *  summation); otherwise GK_ERR_COMPOSITION. The same gas listed twice is accepted in a
+ *  gk_mixture (gk_mixture_parse() rejects it in text).
  *  @{ */
 
 /** Most components a gk_mixture holds. */
@@ -56,8 +61,6 @@ typedef struct gk_mixture {
  * The first error from left to right is reported; the sum checks come after the whole text.
  * @param text NUL-terminated composition text (untrusted input is fine).
  * @param[out] out The mixture, components in text order; written only on GK_OK.
- * @retval GK_OK              @p out written.
- * @retval GK_ERR_ARGUMENT    An argument is NULL.
  * @retval GK_ERR_PARSE       Malformed text: empty, a component without '=' or without a name
  *                            or value, a bad number or suffix, text after a value, a trailing
  *                            comma, two balances, more than 40 mantissa digits, more than 1024
@@ -78,8 +81,6 @@ GK_API gk_status gk_mixture_parse(const char *text, gk_mixture *out);
  * (compensated) sum.
  * @param[in,out] mix The mixture; only count and the first count fractions are read, only
  *                the fractions are written, and only on GK_OK.
- * @retval GK_OK              @p mix rescaled.
- * @retval GK_ERR_ARGUMENT    @p mix is NULL or has a NULL gas among the first count.
  * @retval GK_ERR_COMPOSITION count is 0 or above GK_MIXTURE_MAX, a fraction is negative or not
  *                            finite, or all are 0. @p mix is left unchanged.
  */
@@ -88,14 +89,10 @@ GK_API gk_status gk_mixture_normalize(gk_mixture *mix);
 /**
  * @brief Mean molar mass of a mixture, sum of x_i M_i (compensated summation).
  *
- * Validates the composition first: count 1 ... GK_MIXTURE_MAX, no NULL gas, every fraction in
- * [0, 1], sum 1 within 1e-6 (use gk_mixture_normalize() for proportions). The same gas listed
- * twice is accepted here.
+ * Validates the composition first (see the group; use gk_mixture_normalize() for
+ * proportions).
  * @param mix The mixture.
- * @param[out] out Mean molar mass; written only on GK_OK.
- * @retval GK_OK              @p out written.
- * @retval GK_ERR_ARGUMENT    An argument is NULL, or a component gas is NULL.
- * @retval GK_ERR_COMPOSITION The composition is not valid (see above).
+ * @param[out] out Mean molar mass.
  * @retval GK_ERR_DOMAIN      A component's molar mass is not finite or not > 0.
  * @retval GK_ERR_RANGE       The result underflows to 0 (absurdly small molar masses).
  */
@@ -116,11 +113,13 @@ GK_API gk_status gk_mixture_molar_mass(const gk_mixture *mix, gk_molar_mass *out
  * @param t   Temperature, > 0 K.
  * @param root Which root where there are three (see gk_root).
  * @param[out] out Z, molar volume and fugacity coefficient of the chosen root, and all roots.
- * @retval As gk_eos_solve(), and GK_ERR_COMPOSITION for an invalid composition (count 0 or above
- *         GK_MIXTURE_MAX, a fraction not finite or outside [0, 1], a sum not 1 within 1e-6),
- *         GK_ERR_ARGUMENT for a NULL component gas, GK_ERR_DOMAIN for a component with
- *         non-physical data (molar mass, Tc, Pc, acentric factor) or a k_ij that is not finite,
- *         not symmetric, outside [-1, 1] or on a non-zero diagonal.
+ * A lone root above the pseudo-critical temperature sum x_i Tc_i is labelled
+ * GK_ROOT_SUPERCRITICAL. The mixture (composition, each component's data, k_ij) is checked
+ * before the state (p, T, root).
+ * @retval GK_ERR_DOMAIN Also for a component with non-physical data (molar mass, Tc, Pc,
+ *         acentric factor) or a k_ij that is not finite, not symmetric, outside [-1, 1] or on
+ *         a non-zero diagonal.
+ * @retval Others As gk_eos_solve() and the group.
  */
 GK_API gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij,
                                       gk_pressure p, gk_temperature t, gk_root root,

@@ -18,7 +18,7 @@ extern "C" {
 /** @defgroup units Quantities and units
  *  @{ */
 
-/** A absolute pressure in pascal (absolute) (Pa). Always absolute; see gk_pressure_from_gauge() for gauge readings. */
+/** An absolute pressure in pascal (Pa); gauge readings: gk_pressure_from_gauge(). */
 typedef struct gk_pressure {
     gk_real pa; /**< value in Pa */
 } gk_pressure;
@@ -33,7 +33,7 @@ typedef struct gk_volume {
     gk_real m3; /**< value in m3 */
 } gk_volume;
 
-/** A amount of substance in mole (mol). */
+/** An amount of substance in mole (mol). */
 typedef struct gk_amount {
     gk_real mol; /**< value in mol */
 } gk_amount;
@@ -199,29 +199,30 @@ GK_API gk_status gk_unit_parse(const char *symbol, gk_unit *out);
  */
 GK_API const char *gk_unit_symbol(gk_unit unit);
 
+/** @defgroup unit_pairs Quantities from and to units
+ *  @ingroup units
+ *  Each quantity has a pair of functions: gk_<quantity>_from(value, unit, out) makes the typed
+ *  SI quantity from a value in @p unit, gk_<quantity>_to(q, unit, out) expresses a quantity in
+ *  @p unit. They share one error contract; outputs are written only on GK_OK:
+ *  - GK_ERR_ARGUMENT: @p out is NULL, or @p unit is not a unit of the quantity's dimension
+ *    (gk_convert() lists the factors and the temperature offsets);
+ *  - GK_ERR_DOMAIN: the value, or the quantity passed in, is not finite or outside the
+ *    quantity's domain: > 0 for the absolute quantities (pressure, temperature, volume, amount,
+ *    molar mass, molar volume, density, mass; temperatures below absolute zero included), any
+ *    finite value for the signed ones (speed, volume flow, mass flow);
+ *  - GK_ERR_RANGE: the result overflows, or a non-zero result underflows below the smallest
+ *    normal number.
+ *  @{ */
+
 /**
- * @brief Makes a absolute pressure from a value in a pressure unit.
- * @param value Value in @p unit.
- * @param unit  A pressure unit.
- * @param[out] out The absolute pressure in Pa.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a pressure unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0 Pa (absolute).
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Absolute pressure (Pa, absolute, > 0) from a value in a pressure unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_pressure_from(gk_real value, gk_unit unit, gk_pressure *out);
 
 /**
- * @brief Expresses a absolute pressure in a pressure unit.
- * @param p The absolute pressure (Pa).
- * @param unit A pressure unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a pressure unit.
- * @retval GK_ERR_DOMAIN   The absolute pressure is not finite or not > 0 Pa (absolute).
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Absolute pressure @p p expressed in a pressure unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_pressure_to(gk_pressure p, gk_unit unit, gk_real *out);
 
@@ -241,264 +242,127 @@ GK_API gk_status gk_pressure_from_gauge(gk_real value, gk_unit unit, gk_pressure
                                         gk_pressure *out);
 
 /**
- * @brief Makes a thermodynamic temperature from a value in a temperature unit.
- * @param value Value in @p unit.
- * @param unit  A temperature unit.
- * @param[out] out The thermodynamic temperature in K.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a temperature unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite or below absolute zero (not > 0 K).
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Thermodynamic temperature (K, > 0) from a value in a temperature unit.
+ * Celsius and Fahrenheit values are converted with their scale offsets.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_temperature_from(gk_real value, gk_unit unit, gk_temperature *out);
 
 /**
- * @brief Expresses a thermodynamic temperature in a temperature unit.
- * @param t The thermodynamic temperature (K).
- * @param unit A temperature unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a temperature unit.
- * @retval GK_ERR_DOMAIN   The thermodynamic temperature is not finite or below absolute zero (not > 0 K).
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Thermodynamic temperature @p t expressed in a temperature unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_temperature_to(gk_temperature t, gk_unit unit, gk_real *out);
 
 /**
- * @brief Makes a volume from a value in a volume unit.
- * @param value Value in @p unit.
- * @param unit  A volume unit.
- * @param[out] out The volume in m3.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Volume (m3, > 0) from a value in a volume unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_volume_from(gk_real value, gk_unit unit, gk_volume *out);
 
 /**
- * @brief Expresses a volume in a volume unit.
- * @param v The volume (m3).
- * @param unit A volume unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume unit.
- * @retval GK_ERR_DOMAIN   The volume is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Volume @p v expressed in a volume unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_volume_to(gk_volume v, gk_unit unit, gk_real *out);
 
 /**
- * @brief Makes a amount of substance from a value in a amount unit.
- * @param value Value in @p unit.
- * @param unit  A amount unit.
- * @param[out] out The amount of substance in mol.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a amount unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Amount of substance (mol, > 0) from a value in an amount unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_amount_from(gk_real value, gk_unit unit, gk_amount *out);
 
 /**
- * @brief Expresses a amount of substance in a amount unit.
- * @param n The amount of substance (mol).
- * @param unit A amount unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a amount unit.
- * @retval GK_ERR_DOMAIN   The amount of substance is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Amount of substance @p n expressed in an amount unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_amount_to(gk_amount n, gk_unit unit, gk_real *out);
 
 /**
- * @brief Makes a molar mass from a value in a molar mass unit.
- * @param value Value in @p unit.
- * @param unit  A molar mass unit.
- * @param[out] out The molar mass in kg/mol.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar mass unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Molar mass (kg/mol, > 0) from a value in a molar mass unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_molar_mass_from(gk_real value, gk_unit unit, gk_molar_mass *out);
 
 /**
- * @brief Expresses a molar mass in a molar mass unit.
- * @param m The molar mass (kg/mol).
- * @param unit A molar mass unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar mass unit.
- * @retval GK_ERR_DOMAIN   The molar mass is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Molar mass @p m expressed in a molar mass unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_molar_mass_to(gk_molar_mass m, gk_unit unit, gk_real *out);
 
 /**
- * @brief Makes a molar volume from a value in a molar volume unit.
- * @param value Value in @p unit.
- * @param unit  A molar volume unit.
- * @param[out] out The molar volume in m3/mol.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar volume unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Molar volume (m3/mol, > 0) from a value in a molar volume unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_molar_volume_from(gk_real value, gk_unit unit, gk_molar_volume *out);
 
 /**
- * @brief Expresses a molar volume in a molar volume unit.
- * @param vm The molar volume (m3/mol).
- * @param unit A molar volume unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a molar volume unit.
- * @retval GK_ERR_DOMAIN   The molar volume is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Molar volume @p vm expressed in a molar volume unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_molar_volume_to(gk_molar_volume vm, gk_unit unit, gk_real *out);
 
 /**
- * @brief Makes a mass density from a value in a density unit.
- * @param value Value in @p unit.
- * @param unit  A density unit.
- * @param[out] out The mass density in kg/m3.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a density unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Mass density (kg/m3, > 0) from a value in a density unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_density_from(gk_real value, gk_unit unit, gk_density *out);
 
 /**
- * @brief Expresses a mass density in a density unit.
- * @param rho The mass density (kg/m3).
- * @param unit A density unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a density unit.
- * @retval GK_ERR_DOMAIN   The mass density is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Mass density @p rho expressed in a density unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_density_to(gk_density rho, gk_unit unit, gk_real *out);
 
 /**
- * @brief Makes a speed from a value in a speed unit.
- * @param value Value in @p unit.
- * @param unit  A speed unit.
- * @param[out] out The speed in m/s.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a speed unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite.
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Speed (m/s, signed) from a value in a speed unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_speed_from(gk_real value, gk_unit unit, gk_speed *out);
 
 /**
- * @brief Expresses a speed in a speed unit.
- * @param u The speed (m/s).
- * @param unit A speed unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a speed unit.
- * @retval GK_ERR_DOMAIN   The speed is not finite.
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Speed @p u expressed in a speed unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_speed_to(gk_speed u, gk_unit unit, gk_real *out);
 
 /**
- * @brief Makes a mass from a value in a mass unit.
- * @param value Value in @p unit.
- * @param unit  A mass unit.
- * @param[out] out The mass in kg.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite or not > 0.
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Mass (kg, > 0) from a value in a mass unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_mass_from(gk_real value, gk_unit unit, gk_mass *out);
 
 /**
- * @brief Expresses a mass in a mass unit.
- * @param mass The mass (kg).
- * @param unit A mass unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass unit.
- * @retval GK_ERR_DOMAIN   The mass is not finite or not > 0.
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Mass @p mass expressed in a mass unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_mass_to(gk_mass mass, gk_unit unit, gk_real *out);
 
 /**
- * @brief Makes a volume flow rate from a value in a volume flow unit.
- * @param value Value in @p unit.
- * @param unit  A volume flow unit.
- * @param[out] out The volume flow rate in m3/s.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume flow unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite.
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Volume flow rate (m3/s, signed) from a value in a volume flow unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_volume_flow_from(gk_real value, gk_unit unit, gk_volume_flow *out);
 
 /**
- * @brief Expresses a volume flow rate in a volume flow unit.
- * @param q The volume flow rate (m3/s).
- * @param unit A volume flow unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a volume flow unit.
- * @retval GK_ERR_DOMAIN   The volume flow rate is not finite.
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Volume flow rate @p q expressed in a volume flow unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_volume_flow_to(gk_volume_flow q, gk_unit unit, gk_real *out);
 
 /**
- * @brief Makes a mass flow rate from a value in a mass flow unit.
- * @param value Value in @p unit.
- * @param unit  A mass flow unit.
- * @param[out] out The mass flow rate in kg/s.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass flow unit.
- * @retval GK_ERR_DOMAIN   @p value is not finite.
- * @retval GK_ERR_RANGE    The SI value overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Mass flow rate (kg/s, signed) from a value in a mass flow unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_mass_flow_from(gk_real value, gk_unit unit, gk_mass_flow *out);
 
 /**
- * @brief Expresses a mass flow rate in a mass flow unit.
- * @param w The mass flow rate (kg/s).
- * @param unit A mass flow unit.
- * @param[out] out The value in @p unit.
- * @retval GK_OK           @p out written.
- * @retval GK_ERR_ARGUMENT @p out is NULL, or @p unit is not a mass flow unit.
- * @retval GK_ERR_DOMAIN   The mass flow rate is not finite.
- * @retval GK_ERR_RANGE    The result overflows, or a non-zero value underflows below the
- *                         smallest normal number.
+ * @brief Mass flow rate @p w expressed in a mass flow unit.
+ * @retval GK_OK, GK_ERR_ARGUMENT, GK_ERR_DOMAIN, GK_ERR_RANGE (see the group).
  */
 GK_API gk_status gk_mass_flow_to(gk_mass_flow w, gk_unit unit, gk_real *out);
+
+/** @} */
 
 /** @} */
 

@@ -85,7 +85,7 @@ case_state() {
     near "0 bar(g)" "$(kv p "$OUT")" 101325 "$REL"
     # Peng-Robinson (1976) for N2 at 200 bar, 300 K: the returned Z must satisfy the PR cubic
     # written with the gas's own Tc, Pc, omega (listed by 'gkq gases'); the constants 0.45724,
-    # 0.07780 and kappa(omega) are those of the 1976 paper (see check-values.md).
+    # 0.07780 and kappa(omega) are those of the 1976 paper (Ind. Eng. Chem. Fundam. 15, 59).
     G=$("$GKQ" -k gases | grep ' formula=N2 ')
     run -m pr state N2 200bar 300K; ok state
     awk -v z="$(kv z "$OUT")" -v tc="$(kv tc "$G")" -v pc="$(kv pc "$G")" -v w="$(kv omega "$G")" \
@@ -147,7 +147,7 @@ case_speeds() {
         "$(awk 'BEGIN{printf "%.15g", sqrt(3/2)}')" "$REL"
     # rms = sqrt(3RT/M)
     near "rms N2 300 K" "$rms" "$(awk -v m="$(kv molar_mass "$OUT")" 'BEGIN{printf "%.12g", sqrt(3*8.314462618*300/m)}')" "$REL"
-    # Graham's law, H2 against O2: about 3.98 (check-values.md; sqrt(31.998/2.016) = 3.984)
+    # Graham's law, H2 against O2: about 3.98 (common practice; IUPAC 2021 atomic weights, sqrt(31.998/2.016) = 3.984)
     run speeds H2 20degC O2; ok speeds
     near "Graham H2/O2" "$(kv effusion_ratio "$OUT")" 3.984 2e-3
     near "time ratio" "$(kv effusion_time_ratio "$OUT")" "$(awk 'BEGIN{printf "%.6g", 1/3.984}')" 2e-3
@@ -175,7 +175,7 @@ case_water() {
     run dew 1atm 300K 0.5; ok dew
     near "water at 50 %" "$(kv p_water "$OUT")" 1768.294705 "$LOOSE"
     # over ice below the triple point: IAPWS R14-08 (2011) sublimation equation, evaluated here
-    # from its published coefficients (check-values.md)
+    # from its published coefficients (the coefficients printed in the release)
     run water -10degC; ok water
     [ "$(kv phase "$OUT")" = ice ] || fail "phase at -10 degC: $(kv phase "$OUT")"
     near "p_subl(263.15 K)" "$(kv p_sat "$OUT")" "$(awk 'BEGIN {

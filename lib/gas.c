@@ -1,5 +1,5 @@
 /*
- * gases.c - the built-in gas table and its lookup by formula or name.
+ * gas.c - the built-in gas table and its lookup by formula or name.
  *
  * Conventions
  * - name: lower-case English name, IUPAC spelling where the trade uses it ("sulfur dioxide"),
@@ -20,8 +20,7 @@
  *           F 18.998403162, Ne 20.1797, S 32.06, Cl 35.45, Ar 39.95, Kr 83.798, Xe 131.293.
  *           Each row's comment gives the sum; the literal is that sum, not rounded further.
  * [ISO2533] ISO 2533:1975 Standard Atmosphere (= U.S. Standard Atmosphere 1976 at sea level):
- *           molar mass of dry air 28.9644 g/mol, ratio of specific heats 1.40
- *           (check-values.md).
+ *           molar mass of dry air 28.9644 g/mol, ratio of specific heats 1.40 (from memory).
  * [AIRPC]   Air is a mixture with no true critical point; its pseudo-critical constants
  *           Tc 132.5 K, Pc 3.77 MPa and acentric factor 0.035 are common-practice approximate
  *           values (from memory; cf. the maxcondentherm 132.63 K / 3.785 MPa of Lemmon et al.,
@@ -30,13 +29,16 @@
  * [PPO5]    B. E. Poling, J. M. Prausnitz, J. P. O'Connell, The Properties of Gases and
  *           Liquids, 5th ed. (McGraw-Hill 2001), Appendix A: Tc, Pc, omega (from memory). The
  *           acentric factor of neon is the least certain (published values -0.04 ... -0.016).
- * [IAPWS]   Critical point of water, IAPWS: 647.096 K, 22.064 MPa (check-values.md).
+ * [IAPWS]   Critical point of water: 647.096 K, 22.064 MPa (IAPWS, Release on the values of
+ *           temperature, pressure and density of ordinary and heavy water substances at their
+ *           respective critical points, 1992; from memory).
  * [TRB94]   R. Tillner-Roth, H. D. Baehr, J. Phys. Chem. Ref. Data 23 (1994) 657, R-134a
- *           (critical point and ideal-gas heat capacity, from memory, as rounded in NIST
- *           REFPROP: 374.21 K, 4.0593 MPa). [REFPROP]: acentric factor 0.3268 (from memory).
+ *           (critical point 374.21 K, 4.0593 MPa and ideal-gas heat capacity, from memory; the
+ *           acentric factor 0.3268 from the vapour pressure of that equation at Tr = 0.7,
+ *           from memory).
  * [CRC-vdW] CRC Handbook of Chemistry and Physics, "Van der Waals constants for gases" (older
- *           formula-ordered table); [CRC-vdW-new] the newer CRC table (CO2, H2). Values as in
- *           check-values.md, converted with 1 bar L2/mol2 = 0.1 Pa m6/mol2 and 1 L/mol =
+ *           formula-ordered table); [CRC-vdW-new] the newer CRC table (CO2, H2). Values from
+ *           memory of those tables, converted with 1 bar L2/mol2 = 0.1 Pa m6/mol2 and 1 L/mol =
  *           1e-3 m3/mol. Other gases carry 0: callers derive a, b from Tc, Pc.
  * [JANAF]   NIST-JANAF Thermochemical Tables, 4th ed. (1998), Cp at 298.15 K (from memory);
  *           [TRC] TRC / CRC tables of ideal-gas heat capacities of hydrocarbons at 298.15 K
@@ -47,7 +49,7 @@
  *           value engineers use as "the" molecular diameter in mean-free-path estimates; it
  *           is not a rigid-sphere diameter. 0 where the gas is not in that table.
  */
-#include "mixture_internal.h"
+#include "gas_internal.h"
 
 /* Most aliases per row. */
 #define GK__ALIAS_MAX 3
@@ -317,7 +319,7 @@ static const gk__gas_row gk__gases[] = {
     /* 1,1,1,2-tetrafluoroethane */
     GK__ROW("1,1,1,2-tetrafluoroethane", "CH2FCF3",
             102.031612648e-3,           /* M: 2x12.011 + 2x1.008 + 4x18.998403162 [AW] */
-            374.21, 4.0593e6, 0.3268,   /* Tc, Pc, omega: Tc, Pc [TRB94, from memory]; omega [REFPROP, from memory] */
+            374.21, 4.0593e6, 0.3268,   /* Tc, Pc, omega: Tc, Pc [TRB94, from memory]; omega [TRB94, from memory] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.1068,                     /* gamma: cp 86.2 J/(mol K) [TRB94, from memory], cp/(cp - R) */
             0.0,                        /* sigma: not known */
@@ -329,18 +331,18 @@ static const gk__gas_row gk__gases[] = {
 
 /* Does text[0 .. n) equal the NUL-terminated b, exactly (fold = 0) or without regard to ASCII
    case (fold = 1)? Reads no further than n in text and than its NUL in b. */
-static int gk__same_n(const char *text, size_t n, const char *b, int fold) {
+static bool gk__same_n(const char *text, size_t n, const char *b, bool fold) {
     size_t i;
     for (i = 0; i < n; ++i) {
         char ca = text[i], cb = b[i];
-        if (cb == '\0') { return 0; }
+        if (cb == '\0') { return false; }
         if (fold) {
             ca = gk__ascii_lower(ca);
             cb = gk__ascii_lower(cb);
         }
-        if (ca != cb) { return 0; }
+        if (ca != cb) { return false; }
     }
-    return (b[n] == '\0') ? 1 : 0;
+    return b[n] == '\0';
 }
 
 gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out) {
@@ -348,19 +350,19 @@ gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out) {
     const char *alias;
     /* Formulas first, exactly: "CO" must never fall through to a case-blind match. */
     for (i = 0; i < GK__GAS_COUNT; ++i) {
-        if (gk__same_n(text, n, gk__gases[i].gas.formula, 0)) {
+        if (gk__same_n(text, n, gk__gases[i].gas.formula, false)) {
             *out = &gk__gases[i].gas;
             return GK_OK;
         }
     }
     for (i = 0; i < GK__GAS_COUNT; ++i) {
-        if (gk__same_n(text, n, gk__gases[i].gas.name, 1)) {
+        if (gk__same_n(text, n, gk__gases[i].gas.name, true)) {
             *out = &gk__gases[i].gas;
             return GK_OK;
         }
         alias = gk__gases[i].aliases;
         while (alias != NULL && *alias != '\0') {
-            if (gk__same_n(text, n, alias, 1)) {
+            if (gk__same_n(text, n, alias, true)) {
                 *out = &gk__gases[i].gas;
                 return GK_OK;
             }
@@ -374,7 +376,10 @@ gk_status gk__gas_find_n(const char *text, size_t n, const gk_gas **out) {
 gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out) {
     size_t n = 0;
     if (name_or_formula == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
-    while (name_or_formula[n] != '\0') { ++n; }
+    /* bounded: reads at most GK_GAS_KEY_MAX + 1 characters, never past the NUL; a longer key
+       names no gas */
+    while (n <= GK_GAS_KEY_MAX && name_or_formula[n] != '\0') { ++n; }
+    if (n > GK_GAS_KEY_MAX) { return GK_ERR_NOT_FOUND; }
     return gk__gas_find_n(name_or_formula, n, out);
 }
 

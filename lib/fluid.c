@@ -1,0 +1,158 @@
+/*
+ * fluid.c - the fluid layer (fluid.h): a gas or a mixture under one model, checked once, and the
+ * public functions that are one fluid and one state (gk_eos_solve, gk_eos_pressure,
+ * gk_eos_density, gk_mixture_eos_solve).
+ *
+ * The pseudo-critical temperature of a mixture is Kay's rule, sum x_i Tc_i (W. B. Kay, Ind. Eng.
+ * Chem. 28 (1936) 1014, from memory; common practice).
+ */
+#include "fluid.h"
+#include "eos_internal.h"
+#include "mixture_internal.h"
+
+static gk_status init_mixture(gk__fluid *f, gk_eos eos, const gk_mixture *mix, const gk_real *kij) {
+    gk_real tc = GK_LIT(0.0);
+    size_t i;
+    gk_status st = gk__mixture_check(mix);
+    if (st != GK_OK) { return st; }
+    for (i = 0; i < mix->count; ++i) {
+        st = gk__eos_check_gas(eos, mix->gas[i]);
+        if (st != GK_OK) { return st; }
+    }
+    st = gk__eos_check_kij(mix->count, kij);
+    if (st != GK_OK) { return st; }
+    for (i = 0; i < mix->count; ++i) { tc += mix->mole_fraction[i] * gk__eos_tc(eos, mix->gas[i]); }
+    f->gas = NULL;
+    f->mix = mix;
+    f->kij = kij;
+    f->molar_mass = gk__mixture_molar_mass(mix);
+    f->tc = tc;
+    f->eos = eos;
+    return GK_OK;
+}
+
+gk_status gk__fluid_init(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
+                         const gk_real *kij) {
+    gk_status st;
+    if (!gk__eos_valid(eos) || (gas == NULL) == (mix == NULL)) { return GK_ERR_ARGUMENT; }
+    if (mix != NULL) { return init_mixture(f, eos, mix, kij); }
+    st = gk__eos_check_gas(eos, gas);
+    if (st != GK_OK) { return st; }
+    f->gas = gas;
+    f->mix = NULL;
+    f->kij = NULL;
+    f->molar_mass = gas->molar_mass.kg_per_mol;
+    f->tc = gk__eos_tc(eos, gas);
+    f->eos = eos;
+    return GK_OK;
+}
+
+/* The one dispatch on the model: a new family of models adds its case here. */
+gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_root root,
+                          gk_eos_result *out) {
+    gk_real a = GK_LIT(0.0), b = GK_LIT(0.0);
+    gk_status st;
+    if (!gk__root_valid(root)) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(p.pa) || !gk_positive(t.k)) { return GK_ERR_DOMAIN; }
+    switch (f->eos) {
+        case GK_EOS_IDEAL:
+            return gk__eos_ideal_state(p.pa, t.k, out);
+        case GK_EOS_VAN_DER_WAALS:
+        case GK_EOS_REDLICH_KWONG:
+        case GK_EOS_SOAVE_REDLICH_KWONG:
+        case GK_EOS_PENG_ROBINSON:
+            st = (f->mix != NULL) ? gk__eos_mix_ab(f->eos, f->mix, f->kij, p.pa, t.k, &a, &b)
+                                  : gk__eos_ab(f->eos, f->gas, p.pa, t.k, &a, &b);
+            if (st != GK_OK) { return st; }
+            return gk__eos_cubic_state(f->eos, a, b, p.pa, t.k, f->tc, root, out);
+        default:
+            return GK_ERR_ARGUMENT;
+    }
+}
+
+gk_status gk__fluid_gas_z(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_real *z) {
+    gk_eos_result r;
+    const gk_status st = gk__fluid_state(f, p, t, GK_ROOT_STABLE, &r);
+    if (st != GK_OK) { return st; }
+    /* liquid: the stable root of two or three is the liquid one, or a lone root below Tc lies
+       on the liquid side (the two spinodal volumes of a cubic bracket its critical volume for
+       every T < Tc, so the side of Vc tells the side of the vapour pressure) */
+    if (r.branch == GK_ROOT_LIQUID && (r.root_count >= 2 || t.k < f->tc)) { return GK_ERR_RANGE; }
+    /* every formula above this layer divides by Z */
+    if (!gk_positive(r.z) || !gk_positive(r.molar_volume.m3_per_mol)) { return GK_ERR_RANGE; }
+    *z = r.z;
+    return GK_OK;
+}
+
+gk_status gk__fluid_molar_mass(const gk__fluid *f, gk_real *m) {
+    if (!gk_positive(f->molar_mass)) { return (f->mix != NULL) ? GK_ERR_RANGE : GK_ERR_DOMAIN; }
+    *m = f->molar_mass;
+    return GK_OK;
+}
+
+gk_status gk__fluid_pressure(const gk__fluid *f, gk_molar_volume vm, gk_temperature t,
+                             gk_pressure *out) {
+    gk_real pa = GK_LIT(0.0);
+    gk_status st;
+    if (f->gas == NULL) { return GK_ERR_ARGUMENT; }
+    if (!gk_positive(vm.m3_per_mol) || !gk_positive(t.k)) { return GK_ERR_DOMAIN; }
+    if (f->eos == GK_EOS_IDEAL) {
+        pa = GK_R * t.k / vm.m3_per_mol;
+        /* R T / Vm > 0 for every valid input: 0 is an underflow, not a non-positive pressure */
+        st = (pa > GK_LIT(0.0)) ? gk_check_result(pa) : GK_ERR_RANGE;
+    } else {
+        st = gk__eos_pressure(f->eos, f->gas, vm.m3_per_mol, t.k, &pa);
+    }
+    if (st != GK_OK) { return st; }
+    out->pa = pa;
+    return GK_OK;
+}
+
+/* ------------------------------------------------------------------ public functions */
+
+gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t, gk_root root,
+                       gk_eos_result *out) {
+    gk__fluid f;
+    gk_status st;
+    if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
+    st = gk__fluid_init(&f, eos, gas, NULL, NULL);
+    if (st != GK_OK) { return st; }
+    return gk__fluid_state(&f, p, t, root, out);
+}
+
+gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij, gk_pressure p,
+                               gk_temperature t, gk_root root, gk_eos_result *out) {
+    gk__fluid f;
+    gk_status st;
+    if (mix == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
+    st = gk__fluid_init(&f, eos, NULL, mix, kij);
+    if (st != GK_OK) { return st; }
+    return gk__fluid_state(&f, p, t, root, out);
+}
+
+gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_temperature t,
+                          gk_pressure *out) {
+    gk__fluid f;
+    gk_status st;
+    if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
+    st = gk__fluid_init(&f, eos, gas, NULL, NULL);
+    if (st != GK_OK) { return st; }
+    return gk__fluid_pressure(&f, vm, t, out);
+}
+
+gk_status gk_eos_density(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
+                         gk_density *out) {
+    gk__fluid f;
+    gk_eos_result r;
+    gk_real m = GK_LIT(0.0), rho;
+    gk_status st;
+    if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
+    st = gk__fluid_init(&f, eos, gas, NULL, NULL);
+    if (st == GK_OK) { st = gk__fluid_molar_mass(&f, &m); }
+    if (st == GK_OK) { st = gk__fluid_state(&f, p, t, GK_ROOT_STABLE, &r); }
+    if (st != GK_OK) { return st; }
+    rho = m / r.molar_volume.m3_per_mol;
+    if (!gk_positive(rho)) { return GK_ERR_RANGE; }
+    out->kg_per_m3 = rho;
+    return GK_OK;
+}
