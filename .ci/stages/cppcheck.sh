@@ -3,7 +3,7 @@
 #  - missingIncludeSystem: cppcheck is not given the system headers (it needs no libc model).
 #  - unusedFunction is not enabled: lib/ is a library, its public functions have no callers here.
 #  - variableScope: a readability preference, not a defect. The solvers and scanners
-#    (lib/cubic.c, lib/water.c, lib/number_parse.c, lib/units.c, lib/mixture.c, lib/gases.c)
+#    (lib/cubic.c, lib/water.c, lib/number_parse.c, lib/units.c, lib/mixture.c, lib/gas.c)
 #    declare their working variables at the top of the function, so each function's error
 #    budget and the values its loop carries read in one place (and MISRA C:2012 rule 9.1 is
 #    easy to check: every variable is visibly set before the loop).

@@ -26,7 +26,7 @@ drivers=(
   "water:water.c:-eva-subdivide-non-linear 40"
   "cubic:cubic.c:-warn-special-float none"
   "number:number_parse.c:-eva-auto-loop-unroll 64"
-  "parse:mixture.c gases.c number_parse.c:"
+  "parse:mixture.c gas.c number_parse.c:"
 )
 status=0
 summary=()
