@@ -67,7 +67,10 @@ static inline gk_status gk_check_result(gk_real x) { return gk_finite(x) ? GK_OK
 
 /* ASCII lower case; no locale, no <ctype.h> (gas names and composition keywords). */
 static inline char gk__ascii_lower(char c) {
-    return (c >= 'A' && c <= 'Z') ? (char)(c - 'A' + 'a') : c;
+    const int code = ((int)c - (int)'A') + (int)'a';
+    char lower = c;
+    if ((c >= 'A') && (c <= 'Z')) { lower = (char)code; }
+    return lower;
 }
 
 #endif /* GASKIT_INTERNAL_H */
