@@ -195,20 +195,21 @@ static gk_real gk__mul_limit(gk_real f) {
    when the product would overflow, which is decided before each step, so no step yields an
    infinity. A result within 4 units of rounding below the largest gk_real counts as overflow. */
 static gk_status gk__scale_up(gk_real *r, int32_t e) {
+    const int32_t steps = e / GK__POW10_MAX; /* e >= 0 */
+    const int32_t rest = e % GK__POW10_MAX;  /* 0 ... GK__POW10_MAX - 1 */
     gk_real v = *r;
-    int32_t k = e;
+    int32_t k;
     gk_status st = GK_OK;
-    while ((k > GK__POW10_MAX) && (st == GK_OK)) {
+    for (k = 0; (k < steps) && (st == GK_OK); ++k) {
         if (v <= gk__mul_limit(gk__pow10[GK__POW10_MAX])) {
             v *= gk__pow10[GK__POW10_MAX];
-            k -= GK__POW10_MAX;
         } else {
             st = GK_ERR_RANGE;
         }
     }
     if (st == GK_OK) {
-        if (v <= gk__mul_limit(gk__pow10[k])) {
-            *r = v * gk__pow10[k];
+        if (v <= gk__mul_limit(gk__pow10[rest])) {
+            *r = v * gk__pow10[rest]; /* 10^0 = 1 is exact: the same value as without it */
         } else {
             st = GK_ERR_RANGE;
         }

@@ -3,7 +3,7 @@
 #include "sound.h"
 
 #ifndef SOUND_TEXT_MAX
-#  define SOUND_TEXT_MAX 24
+#  define SOUND_TEXT_MAX 16
 #endif
 
 int main(void) {
@@ -17,7 +17,7 @@ int main(void) {
     if (s == GK_OK) {
         /*@ assert count_ok: 1 <= mix.count <= GK_MIXTURE_MAX; */
         for (i = 0; i < mix.count; ++i) {
-            /*@ assert fraction_finite: \is_finite(mix.mole_fraction[i]); */
+            /*@ assert fraction_ok: \is_finite(mix.mole_fraction[i]) && 0.0 <= mix.mole_fraction[i] <= 1.0; */
         }
     }
     (void)gk_gas_find(text, &g);
