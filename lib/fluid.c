@@ -8,7 +8,21 @@
  */
 #include "fluid.h"
 #include "eos_internal.h"
+#include "helmholtz.h"
+#include "hydrogen.h"
 #include "mixture_internal.h"
+
+/* Is eos one of gk_eos (cubic, ideal or reference-grade)? Compared as unsigned (see
+   gk__eos_valid()). */
+static bool fluid_eos_valid(gk_eos eos) { return (unsigned)eos <= (unsigned)GK_EOS_HYDROGEN; }
+
+/* Keeps a helper out of line (firmware stack: its frame is not under the cubic path); only a
+   hint, empty without GCC or Clang. */
+#if defined(__GNUC__)
+#  define GK__FLUID_NOINLINE __attribute__((noinline))
+#else
+#  define GK__FLUID_NOINLINE
+#endif
 
 static gk_status init_mixture(gk__fluid *f, gk_eos eos, const gk_mixture *mix, const gk_real *kij) {
     gk_real tc = GK_LIT(0.0);
@@ -31,10 +45,55 @@ static gk_status init_mixture(gk__fluid *f, gk_eos eos, const gk_mixture *mix, c
     return GK_OK;
 }
 
-gk_status gk__fluid_init(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
-                         const gk_real *kij) {
+/* The reference-grade models (helmholtz.h): GK_ERR_NOT_FOUND where they do not cover the gas or
+   a component; with best, that status only says "not covered" (the caller falls back). */
+#if GK_REFERENCE_MODELS
+static gk_status init_reference(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
+                                const gk_real *kij) {
+    gk__hz_model m;
     gk_status st;
-    if (!gk__eos_valid(eos) || (gas == NULL) == (mix == NULL)) { return GK_ERR_ARGUMENT; }
+    if (mix != NULL) {
+        st = gk__mixture_check(mix);
+        if (st == GK_OK && eos == GK_EOS_HYDROGEN) { st = GK_ERR_NOT_FOUND; }
+        if (st == GK_OK) {
+            st = gk__sw_model_mixture(mix->gas, mix->mole_fraction, mix->count, &m);
+        }
+        if (st == GK_OK) { st = gk__eos_check_kij(mix->count, kij); }
+        if (st != GK_OK) { return st; }
+        f->molar_mass = gk__mixture_molar_mass(mix);
+    } else if (eos == GK_EOS_HYDROGEN) {
+        if (!gk__h2_covers(gas)) { return GK_ERR_NOT_FOUND; }
+        m.t_r = gas->critical_temperature.k; /* the label of a lone root only */
+        f->molar_mass = gas->molar_mass.kg_per_mol;
+    } else {
+        st = gk__sw_model_gas(gas, &m);
+        if (st != GK_OK) { return st; }
+        f->molar_mass = gas->molar_mass.kg_per_mol;
+    }
+    f->gas = gas;
+    f->mix = mix;
+    f->kij = kij;
+    f->tc = m.t_r;
+    f->eos = eos;
+    return GK_OK;
+}
+#else
+/* Built without the reference-grade models (gaskit/config.h): nothing is covered. */
+static gk_status init_reference(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
+                                const gk_real *kij) {
+    gk_status st = (mix != NULL) ? gk__mixture_check(mix) : GK_OK;
+    (void)f;
+    (void)eos;
+    (void)gas;
+    (void)kij;
+    return (st != GK_OK) ? st : GK_ERR_NOT_FOUND;
+}
+#endif
+
+/* A cubic model or the ideal gas (eos valid for gk__eos_valid()). */
+static gk_status init_cubic(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
+                            const gk_real *kij) {
+    gk_status st;
     if (mix != NULL) { return init_mixture(f, eos, mix, kij); }
     st = gk__eos_check_gas(eos, gas);
     if (st != GK_OK) { return st; }
@@ -47,6 +106,74 @@ gk_status gk__fluid_init(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_m
     return GK_OK;
 }
 
+gk_status gk__fluid_init(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
+                         const gk_real *kij) {
+    gk_status st;
+    if (!fluid_eos_valid(eos) || (gas == NULL) == (mix == NULL)) { return GK_ERR_ARGUMENT; }
+    if (eos == GK_EOS_SPAN_WAGNER || eos == GK_EOS_HYDROGEN) {
+        return init_reference(f, eos, gas, mix, kij);
+    }
+    if (eos != GK_EOS_BEST) { return init_cubic(f, eos, gas, mix, kij); }
+    /* GK_EOS_BEST: Span-Wagner where it covers the fluid, the hydrogen equation for hydrogen,
+       else Peng-Robinson */
+    st = init_reference(f, GK_EOS_SPAN_WAGNER, gas, mix, kij);
+    if (st != GK_ERR_NOT_FOUND) { return st; }
+#if GK_REFERENCE_MODELS
+    if (gas != NULL && gk__h2_covers(gas)) {
+        return init_reference(f, GK_EOS_HYDROGEN, gas, mix, kij);
+    }
+#endif
+    return init_cubic(f, GK_EOS_PENG_ROBINSON, gas, mix, kij);
+}
+
+#if GK_REFERENCE_MODELS
+/* The Span-Wagner model of the fluid (its gas, air as its mixture, or its mixture). */
+static gk_status fluid_sw_model(const gk__fluid *f, gk__hz_model *m) {
+    return (f->mix != NULL)
+               ? gk__sw_model_mixture(f->mix->gas, f->mix->mole_fraction, f->mix->count, m)
+               : gk__sw_model_gas(f->gas, m);
+}
+
+/* The state of the hydrogen equation (hydrogen.h) in the result form: one root. */
+static GK__FLUID_NOINLINE gk_status fluid_h2_state(const gk__fluid *f, gk_real p, gk_real t,
+                                                   gk_eos_result *out) {
+    gk__h2_state h;
+    gk_real phi, vm;
+    gk_status st = gk__h2_solve(p, t, &h);
+    if (st != GK_OK) { return st; }
+    phi = gk_exp(h.ln_phi);
+    vm = GK_LIT(1.0) / h.molar_density;
+    if (!gk_positive(phi) || !gk_positive(vm)) { return GK_ERR_RANGE; }
+    out->z = h.z;
+    out->molar_volume.m3_per_mol = vm;
+    out->fugacity_coefficient = phi;
+    out->root_count = 1;
+    out->z_roots[0] = h.z;
+    out->z_roots[1] = GK_LIT(0.0);
+    out->z_roots[2] = GK_LIT(0.0);
+    /* a lone root above the critical temperature is labelled as the cubics do */
+    out->branch = (t > f->tc) ? GK_ROOT_SUPERCRITICAL : GK_ROOT_GAS;
+    return GK_OK;
+}
+
+/* A state of a reference-grade model (helmholtz.h, hydrogen.h). Out of line: the cubic path
+   does not carry its frame. */
+static GK__FLUID_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk_real p, gk_real t,
+                                                          gk_root root, gk_eos_result *out) {
+    gk__hz_model m;
+    gk_status st;
+    if (f->eos == GK_EOS_HYDROGEN) {
+        st = fluid_h2_state(f, p, t, out);
+    } else {
+        st = fluid_sw_model(f, &m);
+        if (st == GK_OK) { st = gk__hz_solve(&m, p, t, root, out); }
+    }
+    if (st == GK_OK) { out->model = f->eos; }
+    return st;
+}
+
+#endif
+
 /* The one dispatch on the model: a new family of models adds its case here. */
 gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_root root,
                           gk_eos_result *out) {
@@ -56,18 +183,29 @@ gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, g
     if (!gk_positive(p.pa) || !gk_positive(t.k)) { return GK_ERR_DOMAIN; }
     switch (f->eos) {
         case GK_EOS_IDEAL:
-            return gk__eos_ideal_state(p.pa, t.k, out);
+            st = gk__eos_ideal_state(p.pa, t.k, out);
+            break;
         case GK_EOS_VAN_DER_WAALS:
         case GK_EOS_REDLICH_KWONG:
         case GK_EOS_SOAVE_REDLICH_KWONG:
         case GK_EOS_PENG_ROBINSON:
             st = (f->mix != NULL) ? gk__eos_mix_ab(f->eos, f->mix, f->kij, p.pa, t.k, &a, &b)
                                   : gk__eos_ab(f->eos, f->gas, p.pa, t.k, &a, &b);
-            if (st != GK_OK) { return st; }
-            return gk__eos_cubic_state(f->eos, a, b, p.pa, t.k, f->tc, root, out);
+            if (st == GK_OK) {
+                st = gk__eos_cubic_state(f->eos, a, b, p.pa, t.k, f->tc, root, out);
+            }
+            break;
+#if GK_REFERENCE_MODELS
+        case GK_EOS_SPAN_WAGNER:
+        case GK_EOS_HYDROGEN:
+            return fluid_reference_state(f, p.pa, t.k, root, out);
+#endif
+        case GK_EOS_BEST: /* resolved by gk__fluid_init() */
         default:
             return GK_ERR_ARGUMENT;
     }
+    if (st == GK_OK) { out->model = f->eos; }
+    return st;
 }
 
 gk_status gk__fluid_gas_z(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_real *z) {
@@ -100,6 +238,14 @@ gk_status gk__fluid_pressure(const gk__fluid *f, gk_molar_volume vm, gk_temperat
         pa = GK_R * t.k / vm.m3_per_mol;
         /* R T / Vm > 0 for every valid input: 0 is an underflow, not a non-positive pressure */
         st = (pa > GK_LIT(0.0)) ? gk_check_result(pa) : GK_ERR_RANGE;
+#if GK_REFERENCE_MODELS
+    } else if (f->eos == GK_EOS_HYDROGEN) {
+        st = gk__h2_pressure(GK_LIT(1.0) / vm.m3_per_mol, t.k, &pa);
+    } else if (f->eos == GK_EOS_SPAN_WAGNER) {
+        gk__hz_model m;
+        st = fluid_sw_model(f, &m);
+        if (st == GK_OK) { st = gk__hz_pressure(&m, GK_LIT(1.0) / vm.m3_per_mol, t.k, &pa); }
+#endif
     } else {
         st = gk__eos_pressure(f->eos, f->gas, vm.m3_per_mol, t.k, &pa);
     }

@@ -25,14 +25,18 @@ typedef struct gk__fluid {
     const gk_mixture *mix; /* the mixture, or NULL */
     const gk_real *kij;    /* with a mixture: count*count interaction parameters, or NULL */
     gk_real molar_mass;    /* kg/mol: the gas's as given, or sum x_i M_i of the mixture */
-    gk_real tc;            /* K: the model's critical temperature, for a mixture sum x_i Tc_i */
-    gk_eos eos;            /* the model */
+    gk_real tc;            /* K: the model's critical temperature, for a mixture sum x_i Tc_i
+                              (Span-Wagner: the reducing temperature of the gas or mixture) */
+    gk_eos eos;            /* the model that serves (GK_EOS_BEST resolved at init) */
 } gk__fluid;
 
 /* Checks the fluid once and fills *f (only on GK_OK). In this order: eos not a model, or not
    exactly one of gas and mix -> GK_ERR_ARGUMENT; the composition (gk__mixture_check()); each
-   gas's data for the model (gk__eos_check_gas()); k_ij (gk__eos_check_kij()). The molar mass
-   of a pure gas is not checked here (a state does not need it): see gk__fluid_molar_mass(). */
+   gas's data for the model (gk__eos_check_gas(); Span-Wagner and hydrogen: coefficients for
+   every gas, else GK_ERR_NOT_FOUND); k_ij (gk__eos_check_kij()). GK_EOS_BEST is resolved here
+   (helmholtz.h covers the gas or every component: Span-Wagner; hydrogen: its equation; else
+   Peng-Robinson). The molar mass of a pure gas is not checked here (a state does not need it):
+   see gk__fluid_molar_mass(). */
 gk_status gk__fluid_init(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
                          const gk_real *kij);
 

@@ -87,7 +87,7 @@ static const gk__gas_row gk__gases[] = {
     /* nitrogen */
     GK__ROW("nitrogen", "N2",
             28.014e-3,                  /* M: 2 x 14.007 g/mol [AW] */
-            126.2, 3.398e6, 0.037,      /* Tc, Pc, omega: [PPO5, from memory] */
+            126.192, 3.3958e6, 0.037,   /* Tc, Pc: Span et al., J. Phys. Chem. Ref. Data 29 (2000) 1361 (reference EOS, from memory); omega [PPO5] */
             0.137, 3.87e-05,            /* a, b: 1.370 bar L2/mol2, 0.0387 L/mol [CRC-vdW] */
             1.3996,                     /* gamma: cp 29.124 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             3.798e-10,                  /* sigma, m: [LJ, from memory] */
@@ -95,7 +95,7 @@ static const gk__gas_row gk__gases[] = {
     /* oxygen */
     GK__ROW("oxygen", "O2",
             31.998e-3,                  /* M: 2 x 15.999 g/mol [AW] */
-            154.58, 5.043e6, 0.022,     /* Tc, Pc, omega: [PPO5, from memory] */
+            154.581, 5.043e6, 0.022,    /* Tc, Pc: Schmidt and Wagner, Fluid Phase Equilib. 19 (1985) 175 (reference EOS, from memory); omega [PPO5] */
             0.1382, 3.186e-05,          /* a, b: 1.382 bar L2/mol2, 0.03186 L/mol [CRC-vdW] */
             1.3947,                     /* gamma: cp 29.378 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             3.467e-10,                  /* sigma, m: [LJ, from memory] */
@@ -103,7 +103,7 @@ static const gk__gas_row gk__gases[] = {
     /* argon */
     GK__ROW("argon", "Ar",
             39.95e-3,                   /* M: 39.95 g/mol [AW] */
-            150.86, 4.898e6, -0.002,    /* Tc, Pc, omega: [PPO5, from memory] */
+            150.687, 4.863e6, -0.002,   /* Tc, Pc: Tegeler et al., J. Phys. Chem. Ref. Data 28 (1999) 779 (reference EOS, from memory); omega [PPO5] */
             0.1355, 3.201e-05,          /* a, b: 1.355 bar L2/mol2, 0.03201 L/mol [CRC-vdW] */
             1.6666666666666667,         /* gamma: 5/3, monatomic ideal gas (kinetic theory) */
             3.542e-10,                  /* sigma, m: [LJ, from memory] */
@@ -143,7 +143,7 @@ static const gk__gas_row gk__gases[] = {
     /* hydrogen */
     GK__ROW("hydrogen", "H2",
             2.016e-3,                   /* M: 2 x 1.008 g/mol [AW] */
-            33.19, 1.313e6, -0.216,     /* Tc, Pc, omega: [PPO5, from memory] */
+            33.145, 1.2964e6, -0.216,   /* Tc, Pc: normal H2 Leachman et al., J. Phys. Chem. Ref. Data 38 (2009) 721 (reference EOS, from memory); omega [PPO5] */
             0.02452, 2.65e-05,          /* a, b: 0.2452 bar L2/mol2, 0.0265 L/mol [CRC-vdW-new] */
             1.4052,                     /* gamma: cp 28.836 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             2.827e-10,                  /* sigma, m: [LJ, from memory] */
@@ -151,7 +151,7 @@ static const gk__gas_row gk__gases[] = {
     /* carbon dioxide */
     GK__ROW("carbon dioxide", "CO2",
             44.009e-3,                  /* M: 12.011 + 2 x 15.999 g/mol [AW] */
-            304.12, 7.374e6, 0.225,     /* Tc, Pc, omega: [PPO5, from memory] */
+            304.1282, 7.3773e6, 0.225,  /* Tc, Pc: Span and Wagner, J. Phys. Chem. Ref. Data 25 (1996) 1509 (reference EOS, from memory); omega [PPO5] */
             0.3658, 4.29e-05,           /* a, b: 3.658 bar L2/mol2, 0.0429 L/mol [CRC-vdW-new] */
             1.2885,                     /* gamma: cp 37.135 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             3.941e-10,                  /* sigma, m: [LJ, from memory] */
@@ -167,7 +167,7 @@ static const gk__gas_row gk__gases[] = {
     /* methane */
     GK__ROW("methane", "CH4",
             16.043e-3,                  /* M: 12.011 + 4 x 1.008 g/mol [AW] */
-            190.56, 4.599e6, 0.011,     /* Tc, Pc, omega: [PPO5, from memory] */
+            190.564, 4.5992e6, 0.011,   /* Tc, Pc: Setzmann and Wagner, J. Phys. Chem. Ref. Data 20 (1991) 1061 (reference EOS, from memory); omega [PPO5] */
             0.2303, 4.31e-05,           /* a, b: 2.303 bar L2/mol2, 0.04310 L/mol [CRC-vdW] */
             1.3037,                     /* gamma: cp 35.69 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             3.758e-10,                  /* sigma, m: [LJ, from memory] */
@@ -175,7 +175,7 @@ static const gk__gas_row gk__gases[] = {
     /* ethane */
     GK__ROW("ethane", "C2H6",
             30.07e-3,                   /* M: 2 x 12.011 + 6 x 1.008 g/mol [AW] */
-            305.32, 4.872e6, 0.099,     /* Tc, Pc, omega: [PPO5, from memory] */
+            305.322, 4.8722e6, 0.099,   /* Tc, Pc: Buecker and Wagner, J. Phys. Chem. Ref. Data 35 (2006) 205 (reference EOS, from memory); omega [PPO5] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.1882,                     /* gamma: cp 52.49 J/(mol K) [TRC, from memory], cp/(cp - R) */
             4.443e-10,                  /* sigma, m: [LJ, from memory] */
@@ -183,7 +183,7 @@ static const gk__gas_row gk__gases[] = {
     /* propane */
     GK__ROW("propane", "C3H8",
             44.097e-3,                  /* M: 3 x 12.011 + 8 x 1.008 g/mol [AW] */
-            369.83, 4.248e6, 0.152,     /* Tc, Pc, omega: [PPO5, from memory] */
+            369.89, 4.2512e6, 0.152,    /* Tc, Pc: Lemmon et al., J. Chem. Eng. Data 54 (2009) 3141 (reference EOS, from memory); omega [PPO5] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.1274,                     /* gamma: cp 73.6 J/(mol K) [TRC, from memory], cp/(cp - R) */
             5.118e-10,                  /* sigma, m: [LJ, from memory] */
@@ -191,7 +191,7 @@ static const gk__gas_row gk__gases[] = {
     /* n-butane */
     GK__ROW("n-butane", "n-C4H10",
             58.124e-3,                  /* M: 4 x 12.011 + 10 x 1.008 g/mol [AW] */
-            425.12, 3.796e6, 0.2,       /* Tc, Pc, omega: [PPO5, from memory] */
+            425.125, 3.796e6, 0.2,      /* Tc, Pc: Buecker and Wagner, J. Phys. Chem. Ref. Data 35 (2006) 929 (reference EOS, from memory); omega [PPO5] */
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.0922,                     /* gamma: cp 98.5 J/(mol K) [TRC, from memory], cp/(cp - R) */
             4.687e-10,                  /* sigma, m: [LJ, from memory] */

@@ -344,7 +344,7 @@ static void contract_pressure_density(void **state) {
     gk_pressure p = {1e6};
     assert_status(gk_eos_pressure(GK_EOS_PENG_ROBINSON, NULL, vm, t, &ps), GK_ERR_ARGUMENT);
     assert_status(gk_eos_pressure(GK_EOS_PENG_ROBINSON, &g, vm, t, NULL), GK_ERR_ARGUMENT);
-    assert_status(gk_eos_pressure((gk_eos)7, &g, vm, t, &ps), GK_ERR_ARGUMENT);
+    assert_status(gk_eos_pressure((gk_eos)(GK_EOS_HYDROGEN + 1), &g, vm, t, &ps), GK_ERR_ARGUMENT);
     gk_molar_volume vbad = {(gk_real)-1e-3};
     assert_status(gk_eos_pressure(GK_EOS_PENG_ROBINSON, &g, vbad, t, &ps), GK_ERR_DOMAIN);
     gk_temperature tbad = {(gk_real)NAN};

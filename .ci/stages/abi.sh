@@ -6,8 +6,12 @@ cd "$(dirname "$0")/../.."
 [ -f build/CMakeCache.txt ] || cmake -B build -DGASKIT_WERROR=ON
 cmake --build build -j2 --target gaskit_shared
 major=$(sed -n 's/^#define GK_VERSION_MAJOR \([0-9]*\).*/\1/p' include/gaskit/base.h)
+minor=$(sed -n 's/^#define GK_VERSION_MINOR \([0-9]*\).*/\1/p' include/gaskit/base.h)
+# libgaskit.so.MAJOR; in the 0.x series, where a minor release may change the ABI, .0.MINOR
+expected=libgaskit.so.$major
+[ "$major" != 0 ] || expected=libgaskit.so.0.$minor
 soname=$(readelf -d build/libgaskit.so | sed -n 's/.*Library soname: \[\(.*\)\]/\1/p')
-[ "$soname" = "libgaskit.so.$major" ] || { echo "SONAME $soname, expected libgaskit.so.$major"; exit 1; }
+[ "$soname" = "$expected" ] || { echo "SONAME $soname, expected $expected"; exit 1; }
 exports=$(nm -D --defined-only build/libgaskit.so | awk '{print $NF}')
 others=$(echo "$exports" | grep -Ev '^gk_[a-z0-9][a-z0-9_]*(@@?GASKIT_[0-9.]+)?$|^GASKIT_[0-9.]+$' || true)
 [ -z "$others" ] || { echo "exported symbols outside gk_: $others"; exit 1; }

@@ -6,7 +6,7 @@ n=0
 for prec in 0 1; do
   gen=build-analyzer/p$prec
   mkdir -p "$gen/gaskit"
-  sed "s/@GK_REAL_IS_FLOAT@/$prec/" include/gaskit/config.h.in >"$gen/gaskit/config.h"
+  sed -e "s/@GK_REAL_IS_FLOAT@/$prec/" -e "s/@GK_REFERENCE_MODELS@/1/" include/gaskit/config.h.in >"$gen/gaskit/config.h"
   for f in lib/*.c; do
     gcc -std=c99 -O1 -fanalyzer -Wall -Wextra -Werror -DGK_BUILDING_LIBRARY \
         -I"$gen" -Iinclude -Ilib -c "$f" -o /dev/null

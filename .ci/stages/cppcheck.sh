@@ -16,7 +16,7 @@ cd "$(dirname "$0")/../.."
 for prec in 0 1; do
   gen=build-cppcheck/p$prec
   mkdir -p "$gen/gaskit"
-  sed "s/@GK_REAL_IS_FLOAT@/$prec/" include/gaskit/config.h.in >"$gen/gaskit/config.h"
+  sed -e "s/@GK_REAL_IS_FLOAT@/$prec/" -e "s/@GK_REFERENCE_MODELS@/1/" include/gaskit/config.h.in >"$gen/gaskit/config.h"
   cppcheck --std=c99 --language=c --enable=warning,style,performance,portability \
     --error-exitcode=1 --inline-suppr --quiet \
     --suppress=missingIncludeSystem --suppress=variableScope \

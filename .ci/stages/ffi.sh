@@ -1,8 +1,9 @@
 #!/usr/bin/env bash
-# Foreign callers: Python ctypes, C++17, Rust (rustc) and Go (cgo) examples against the shared
-# library of the stage-1 build (build/, reconfigured with GASKIT_FFI_EXAMPLES=ON: the library is
-# not rebuilt). Then the Python example once more against the float build (build-f/) to show
-# that gk_build_flags lets it adapt.
+# Foreign callers: Python (the gaskit package's README snippet), C++17, Rust (rustc) and Go (cgo)
+# examples against the shared library of the stage-1 build (build/, reconfigured with
+# GASKIT_FFI_EXAMPLES=ON: the library is not rebuilt). Then the Python snippet once more against
+# the float build (build-f/) to show that gk_build_flags lets it adapt. The package's pytest
+# suite and benchmarks are the python stage (.ci/stages/python.sh).
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 [ -d "${HOME:-/nonexistent}/.cargo/bin" ] && export PATH="$PATH:$HOME/.cargo/bin"
@@ -15,6 +16,6 @@ if [ "$ran" -ne 4 ]; then
 fi
 if [ -f build-f/libgaskit.so ] || { cmake -B build-f -DGASKIT_SINGLE_PRECISION=ON -DGASKIT_WERROR=ON \
      && cmake --build build-f -j2 --target gaskit_shared; }; then
-  python3 bindings-examples/python/gaskit_ctypes.py build-f/libgaskit.so
+  GASKIT_LIBRARY=build-f/libgaskit.so /usr/bin/python3 bindings-examples/python/examples/quickstart.py
 fi
-echo "summary: foreign callers: python ctypes, C++17, rust, go (cgo) passed; python also against the float build"
+echo "summary: foreign callers: python (gaskit package), C++17, rust, go (cgo) passed; python also against the float build"

@@ -39,7 +39,8 @@ plot "$TMP/n2.dat" using 1:2 with lines dt 2 lc rgb "black" title "ideal gas", \
      "" using 1:3 with lines lc rgb "#b2182b" title "van der Waals", \
      "" using 1:4 with lines lc rgb "#ef8a62" title "Redlich-Kwong", \
      "" using 1:5 with lines lc rgb "#2166ac" title "Soave-Redlich-Kwong", \
-     "" using 1:6 with lines lc rgb "#1b7837" title "Peng-Robinson"
+     "" using 1:6 with lines lc rgb "#1b7837" title "Peng-Robinson", \
+     "" using 1:7 with lines lw 2 lc rgb "black" title "reference: Span-Wagner (2003)"
 
 set output "$HERE/z_carbon_dioxide.png"
 set title "Carbon dioxide at 40 degC (just above Tc = 31 degC): Z by model (gaskit)"
@@ -50,7 +51,8 @@ plot "$TMP/co2.dat" using 1:2 with lines dt 2 lc rgb "black" title "ideal gas", 
      "" using 1:3 with lines lc rgb "#b2182b" title "van der Waals", \
      "" using 1:4 with lines lc rgb "#ef8a62" title "Redlich-Kwong", \
      "" using 1:5 with lines lc rgb "#2166ac" title "Soave-Redlich-Kwong", \
-     "" using 1:6 with lines lc rgb "#1b7837" title "Peng-Robinson"
+     "" using 1:6 with lines lc rgb "#1b7837" title "Peng-Robinson", \
+     "" using 1:7 with lines lw 2 lc rgb "black" title "reference: Span-Wagner (2003)"
 
 set output "$HERE/vdw_isotherm.png"
 set title "Van der Waals isotherm of carbon dioxide at 280 K and its three roots at 50 bar (gaskit)"

@@ -27,13 +27,15 @@ static const gk_gas *gas_or_die(const char *name) {
 
 static int z_table(const gk_gas *g, double t_k, double p_min, double p_max) {
     static const gk_eos models[] = {GK_EOS_IDEAL, GK_EOS_VAN_DER_WAALS, GK_EOS_REDLICH_KWONG,
-                                    GK_EOS_SOAVE_REDLICH_KWONG, GK_EOS_PENG_ROBINSON};
+                                    GK_EOS_SOAVE_REDLICH_KWONG, GK_EOS_PENG_ROBINSON,
+                                    GK_EOS_BEST /* the reference curve: Span-Wagner here */};
     const int steps = 200;
     int i;
     size_t m;
     gk_temperature t;
     t.k = (gk_real)t_k;
-    printf("# p_bar Z_ideal Z_vdw Z_rk Z_srk Z_pr (%s at %.2f K, stable root)\n", g->formula, t_k);
+    printf("# p_bar Z_ideal Z_vdw Z_rk Z_srk Z_pr Z_reference (%s at %.2f K, stable root)\n",
+           g->formula, t_k);
     for (i = 0; i <= steps; i++) {
         double p_bar = p_min + (p_max - p_min) * (double)i / (double)steps;
         gk_pressure p;

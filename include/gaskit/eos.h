@@ -1,7 +1,13 @@
 /**
  * @file eos.h
  * @brief Van der Waals and the cubic equations of state (Redlich-Kwong, Soave-Redlich-Kwong,
- *        Peng-Robinson), with the choice of the physical root.
+ *        Peng-Robinson), the reference-grade Span-Wagner and hydrogen equations, with the choice
+ *        of the physical root.
+ *
+ * The reference-grade models (GK_EOS_SPAN_WAGNER, GK_EOS_HYDROGEN, and GK_EOS_BEST, which picks the
+ * best model for the fluid) cover a few gases with a stated uncertainty of about 0.2 % in gas
+ * density or better; see gk_eos. The cubic models cover every gas with data (and liquids,
+ * qualitatively).
  *
  * Each cubic equation of state is written as a cubic in the compressibility factor Z = p Vm / (R T).
  * Below the critical temperature it can have three real roots above the covolume B: the
@@ -93,7 +99,38 @@ typedef enum gk_eos {
     GK_EOS_VAN_DER_WAALS,       /**< van der Waals (1873); handbook a, b where the gas lists them */
     GK_EOS_REDLICH_KWONG,       /**< Redlich and Kwong (1949) */
     GK_EOS_SOAVE_REDLICH_KWONG, /**< Soave (1972) */
-    GK_EOS_PENG_ROBINSON        /**< Peng and Robinson (1976) */
+    GK_EOS_PENG_ROBINSON,       /**< Peng and Robinson (1976) */
+    /**
+     * The Span-Wagner technical equations of state, R. Span and W. Wagner, Int. J. Thermophys.
+     * 24 (2003) 1-162 (12-term residual Helmholtz energy): nitrogen, oxygen, argon, methane,
+     * ethane, propane, n-butane (nonpolar form) and carbon dioxide (polar form); air (the gas
+     * "air") as the dry-air mixture of ISO 2533:1975 (N2, O2, Ar); mixtures whose components
+     * are all covered, in the multi-fluid form without departure functions (an approximation:
+     * dry air within 0.005 % of its normal density, other mixtures of unlike molecules
+     * unmeasured, of the order of a percent at high pressure). Validity: from each fluid's
+     * triple point (mixtures: the highest of the components') to 600 K, up to 100 MPa; outside,
+     * GK_ERR_RANGE. Stated uncertainty in density (the authors): about 0.2 % (often 0.1 %) in
+     * gas and supercritical states, more near the critical point. A gas or a mixture without
+     * coefficients: GK_ERR_NOT_FOUND. k_ij are checked but not used. Root choice as for the
+     * cubics; root_count is 1 or 2 (the unstable root between a vapour-like and a liquid-like
+     * root is not reported).
+     */
+    GK_EOS_SPAN_WAGNER,
+    /**
+     * The most accurate model the library has for the fluid: GK_EOS_SPAN_WAGNER where it covers
+     * the gas (air included) or every component of the mixture, GK_EOS_HYDROGEN for hydrogen,
+     * GK_EOS_PENG_ROBINSON otherwise (with its data checks and statuses). The model that served
+     * is reported in gk_eos_result.model.
+     */
+    GK_EOS_BEST,
+    /**
+     * The standardized hydrogen density equation of E. W. Lemmon, M. L. Huber and J. W.
+     * Leachman, J. Res. Natl. Inst. Stand. Technol. 113 (2008) 341-350 (explicit in p and T),
+     * normal hydrogen (the gas "H2") only; other gases and mixtures: GK_ERR_NOT_FOUND.
+     * Validity: 200 K to 1000 K, up to 200 MPa (outside: GK_ERR_RANGE); stated agreement with
+     * the reference equation 0.01 % up to 70 MPa above 220 K, 0.1 % up to 200 MPa.
+     */
+    GK_EOS_HYDROGEN
 } gk_eos;
 
 /**
@@ -124,6 +161,8 @@ typedef struct gk_eos_result {
      * critical density (Z/B < Zc/Omega_b), else GK_ROOT_GAS. The ideal gas: GK_ROOT_GAS.
      */
     gk_root branch;
+    /** The model that served: the one asked for, or with GK_EOS_BEST the one it chose. */
+    gk_eos model;
 } gk_eos_result;
 
 /**
@@ -140,6 +179,12 @@ typedef struct gk_eos_result {
  * Root choice: GK_ROOT_GAS is the largest real root above the covolume, GK_ROOT_LIQUID the
  * smallest, GK_ROOT_STABLE the one of those two with the lower fugacity (a tie goes to the gas).
  * With one real root every choice returns it and root_count is 1.
+ *
+ * GK_EOS_SPAN_WAGNER solves p = rho R T (1 + delta d(alpha_r)/d(delta)) for the density by a
+ * safeguarded Newton iteration (vapour-like root from below, liquid-like root from above; below
+ * the critical temperature both, chosen as above; only roots with dp/drho > 0). Its validity and
+ * uncertainty: see gk_eos. GK_EOS_HYDROGEN is explicit (one root). GK_EOS_BEST: see gk_eos;
+ * out->model says which model served.
  * Validity: see the file comment; the models, not the numerics, limit the range.
  * @param eos Model.
  * @param gas Gas data (Tc, Pc, acentric factor; vdw_a, vdw_b for van der Waals where non-zero).
@@ -151,7 +196,11 @@ typedef struct gk_eos_result {
  * @retval GK_ERR_ARGUMENT Also for @p root GK_ROOT_SUPERCRITICAL (an output label only).
  * @retval GK_ERR_RANGE    Also where the root lies within rounding of the covolume and cannot
  *                         be told from it (e.g. phi of a liquid root at an absurdly low
- *                         temperature overflows or underflows).
+ *                         temperature overflows or underflows), and for a state outside the
+ *                         validity range of GK_EOS_SPAN_WAGNER or GK_EOS_HYDROGEN.
+ * @retval GK_ERR_NOT_FOUND GK_EOS_SPAN_WAGNER or GK_EOS_HYDROGEN for a gas they do not cover.
+ * @retval GK_ERR_NO_SOLUTION The density iteration of GK_EOS_SPAN_WAGNER did not converge
+ *                         (not seen in the tests' scans of every covered fluid's range).
  * @retval Others          See the group.
  */
 GK_API gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
@@ -161,7 +210,10 @@ GK_API gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_t
  * @brief Pressure from an equation of state at molar volume @p vm and temperature @p t:
  *        p = R T / (Vm - b) - a(T) / (Vm^2 + u b Vm + w b^2) with the constants of
  *        gk_eos_solve() ((u, w) = (0, 0) vdW, (1, 0) RK and SRK, (2, -1) PR); R T / Vm for the
- *        ideal gas.
+ *        ideal gas. GK_EOS_SPAN_WAGNER: p = rho R T (1 + delta d(alpha_r)/d(delta)), rho = 1/Vm;
+ *        GK_EOS_HYDROGEN: the p whose density is 1/Vm (Newton's iteration on the explicit
+ *        equation); both GK_ERR_RANGE outside their validity range (also a resulting p above it,
+ *        or a density above 4.5 times the critical density for Span-Wagner).
  * @retval GK_ERR_DOMAIN   Also for Vm at or below the covolume.
  * @retval GK_ERR_NO_SOLUTION The model gives a pressure that is not > 0.
  * @retval Others          See the group.
