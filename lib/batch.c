@@ -70,8 +70,8 @@ static inline uint32_t real_key(gk_real x) {
    check; when it fails the caller recomputes the block element by element (the inputs are
    intact). Inlined with n = GK_BATCH_BLOCK for a full block, so that the trip count is a
    constant (compilers then vectorise it also at -O2, with no remainder loop). */
-static inline bool ideal_block(size_t n, const gk_real *restrict p, const gk_real *restrict t,
-                               gk_real m, uint32_t key_lo, uint32_t span, gk_real *restrict out) {
+static inline bool ideal_block(size_t n, const gk_real *p, const gk_real *t, gk_real m,
+                               uint32_t key_lo, uint32_t span, gk_real *out) {
     size_t i;
     uint32_t worst = 0u;
     for (i = 0; i < n; ++i) {
@@ -150,9 +150,9 @@ size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk_real *
     fast = in_bound(m.kg_per_mol, lo, hi) && out_kg_per_m3 != p_pa && out_kg_per_m3 != t_k;
     for (base = 0; base < count; base += n) {
         const size_t rest = count - base;
-        const gk_real *p = p_pa + base, *t = t_k + base;
-        gk_real *out = out_kg_per_m3 + base;
-        gk_status *st = (status_out != NULL) ? status_out + base : NULL;
+        const gk_real *p = &p_pa[base], *t = &t_k[base];
+        gk_real *out = &out_kg_per_m3[base];
+        gk_status *st = (status_out != NULL) ? &status_out[base] : NULL;
         bool done = false;
         n = (rest < GK_BATCH_BLOCK) ? rest : GK_BATCH_BLOCK;
         if (fast) {

@@ -210,7 +210,7 @@ static gk_status hz_model_pure(const gk__sw_fluid *fluid, gk__hz_model *out) {
 
 /* Dry air of ISO 2533:1975 (from memory): N2 78.084 %, O2 20.9476 %, Ar 0.934 % by volume, the
    three normalised to their sum 0.999656 (the other 0.034 %, mostly CO2, left out). */
-static const gk__sw_fluid *const hz_air_rows[3] = { &hz_fluids[0], &hz_fluids[1], &hz_fluids[2] };
+static const gk__sw_fluid *const hz_air_rows[] = { &hz_fluids[0], &hz_fluids[1], &hz_fluids[2] };
 static const gk_real hz_air_x[3] = { GK_LIT(0.7811087013932793), GK_LIT(0.20954808454108212),
                                      GK_LIT(0.009343214065638579) };
 
@@ -279,7 +279,7 @@ gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_
                                gk__hz_model *out) {
     size_t i;
     if (gas == NULL || x == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
-    if (count == 0 || count > GK_MIXTURE_MAX) { return GK_ERR_DOMAIN; }
+    if ((count == 0u) || (count > (size_t)GK_MIXTURE_MAX)) { return GK_ERR_DOMAIN; }
     for (i = 0; i < count; ++i) {
         if (gas[i] == NULL) { return GK_ERR_ARGUMENT; }
         if (!gk_finite(x[i]) || x[i] < GK_LIT(0.0) || x[i] > GK_LIT(1.0)) { return GK_ERR_DOMAIN; }
@@ -295,9 +295,7 @@ gk_status gk__sw_model_mixture(const gk_gas *const *gas, const gk_real *x, size_
    temperature the terms of a group add into one coefficient G = sum n_k tau^t_k (over the
    forms present and, for a mixture, x_i over the components), so every density evaluation,
    pure or mixed, nonpolar or polar, is 12 terms at most. */
-enum {
-    HZ_GROUPS = 12
-};
+#  define HZ_GROUPS 12
 static const unsigned char hz_group[2][GK__SW_TERMS] = {
     { 0, 0, 0, 1, 2, 3, 5, 6, 7, 8, 10, 11 }, /* nonpolar */
     { 0, 0, 0, 2, 3, 4, 5, 6, 7, 7, 8, 9 }    /* polar */
@@ -321,9 +319,7 @@ typedef struct hz_rootrec {
 
 /* The integer powers of tau the exponents use (the integer parts of t_k: 0, 1, 2, 3, 4, 6, 12,
    14) and, per term, the slot of its power in that list. */
-enum {
-    HZ_TAU_POWERS = 8
-};
+#  define HZ_TAU_POWERS 8
 static const unsigned char hz_tslot[2][GK__SW_TERMS] = {
     { 0, 1, 1, 1, 0, 0, 0, 1, 3, 3, 7, 6 }, /* nonpolar: 0 1 1 1 0 0 0 1 3 3 14 12 */
     { 0, 1, 1, 0, 0, 2, 2, 2, 3, 5, 4, 6 }  /* polar: 0 1 1 0 0 2 2 2 3 6 4 12 */
@@ -472,6 +468,8 @@ static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, hz_roo
             x = best_x; /* rounding level: back to the best point (evaluated once more) */
             settle = true;
             continue;
+        } else {
+            /* no better than the best point yet, not stalled: go on */
         }
         dx = (fp > GK_LIT(0.0)) ? -f / fp : GK_LIT(0.0);
         if (fp > GK_LIT(0.0) && gk_fabs(dx) <= HZ_QUAD_TOL * x) {
@@ -494,6 +492,8 @@ static int hz_root(const hz_ctx *ctx, int dir, bool split, gk_real start, hz_roo
         } else if (!(fp > GK_LIT(0.0)) || !((xn - near_end) * sgn > GK_LIT(0.0)) ||
                    !((far_end - xn) * sgn > GK_LIT(0.0))) {
             xn = GK_LIT(0.5) * (near_end + far_end); /* bisection of the bracket */
+        } else {
+            /* the Newton step stays inside the bracket */
         }
         x = xn;
         stepped = true;
@@ -553,13 +553,17 @@ static HZ_NOINLINE gk_real hz_gas_start(const hz_ctx *ctx, gk_real limit) {
 static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, gk_real t, const hz_rootrec rr[2],
                                      const int found[2], gk_root root, gk_eos_result *out) {
     int n = found[0] + found[1];
-    int i = (found[1] != 0) ? 1 : 0; /* the vapour-like root, or the only one */
+    int i = 0;
     gk_real phi, vm;
     gk_root branch;
-    if (n == 2 && root == GK_ROOT_LIQUID) {
+    if (found[1] != 0) { i = 1; /* the vapour-like root, or the only one */ }
+    if ((n == 2) && (root == GK_ROOT_LIQUID)) {
         i = 0;
-    } else if (n == 2 && root == GK_ROOT_STABLE) {
-        i = (rr[0].ln_phi < rr[1].ln_phi) ? 0 : 1; /* a tie goes to the gas */
+    } else if ((n == 2) && (root == GK_ROOT_STABLE)) {
+        if (rr[0].ln_phi < rr[1].ln_phi) { i = 0; }
+        if (!(rr[0].ln_phi < rr[1].ln_phi)) { i = 1; /* a tie goes to the gas */ }
+    } else {
+        /* one root, or the gas asked for: the vapour-like one when found */
     }
     if (n == 2) {
         branch = (i == 0) ? GK_ROOT_LIQUID : GK_ROOT_GAS;
