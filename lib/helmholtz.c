@@ -589,7 +589,8 @@ static HZ_NOINLINE gk_status hz_pick(const gk__hz_model *m, gk_real t, const hz_
 gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
                        gk_eos_result *out) {
     hz_ctx ctx;
-    hz_rootrec rr[2];
+    hz_rootrec rr[2] = { { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) },
+                         { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) } };
     int found[2] = { 0, 0 };
     bool split;
     gk_status st;
