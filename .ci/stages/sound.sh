@@ -7,7 +7,7 @@
 # assertion of a driver that EVA cannot prove (a GK_OK result is finite, ...), fails the stage.
 # Floating-point policy: IEEE 754 as C99 Annex F; EVA's default -warn-special-float non-finite,
 # so every operation that could yield an infinity or a NaN from the finite inputs is an alarm.
-# Takes about 4 minutes on one core (GASKIT_SOUND_PRECISION, default 2, trades time for fewer
+# Takes about 2 minutes on one core (GASKIT_SOUND_PRECISION, default 2, trades time for fewer
 # imprecise alarms; each driver's time is printed). GASKIT_SOUND_DRIVERS="units cubic" runs a
 # chosen set.
 set -euo pipefail
