@@ -12,6 +12,15 @@
 #include "hydrogen.h"
 #include "mixture_internal.h"
 
+/* Zero values to start locals from: every field is set before any read on every path, also
+   where a call fills a structure only on GK_OK (the analysers see it without following the
+   statuses). Static, so zero-initialised, and const. */
+static const gk__fluid fluid_none;
+static const gk_eos_result fluid_no_result;
+#if GK_REFERENCE_MODELS
+static const gk__hz_model fluid_no_model;
+#endif
+
 /* Is eos one of gk_eos (cubic, ideal or reference-grade)? Compared as unsigned (see
    gk__eos_valid()). */
 static bool fluid_eos_valid(gk_eos eos) { return (unsigned)eos <= (unsigned)GK_EOS_HYDROGEN; }
@@ -50,7 +59,7 @@ static gk_status init_mixture(gk__fluid *f, gk_eos eos, const gk_mixture *mix, c
 #if GK_REFERENCE_MODELS
 static gk_status init_reference(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
                                 const gk_real *kij) {
-    gk__hz_model m;
+    gk__hz_model m = fluid_no_model;
     gk_status st;
     if (mix != NULL) {
         st = gk__mixture_check(mix);
@@ -137,7 +146,7 @@ static gk_status fluid_sw_model(const gk__fluid *f, gk__hz_model *m) {
 /* The state of the hydrogen equation (hydrogen.h) in the result form: one root. */
 static GK__FLUID_NOINLINE gk_status fluid_h2_state(const gk__fluid *f, gk_real p, gk_real t,
                                                    gk_eos_result *out) {
-    gk__h2_state h;
+    gk__h2_state h = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
     gk_real phi, vm;
     gk_status st = gk__h2_solve(p, t, &h);
     if (st != GK_OK) { return st; }
@@ -160,7 +169,7 @@ static GK__FLUID_NOINLINE gk_status fluid_h2_state(const gk__fluid *f, gk_real p
    does not carry its frame. */
 static GK__FLUID_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk_real p, gk_real t,
                                                           gk_root root, gk_eos_result *out) {
-    gk__hz_model m;
+    gk__hz_model m = fluid_no_model;
     gk_status st;
     if (f->eos == GK_EOS_HYDROGEN) {
         st = fluid_h2_state(f, p, t, out);
@@ -209,7 +218,7 @@ gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, g
 }
 
 gk_status gk__fluid_gas_z(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_real *z) {
-    gk_eos_result r;
+    gk_eos_result r = fluid_no_result;
     const gk_status st = gk__fluid_state(f, p, t, GK_ROOT_STABLE, &r);
     if (st != GK_OK) { return st; }
     /* liquid: the stable root of two or three is the liquid one, or a lone root below Tc lies
@@ -242,7 +251,7 @@ gk_status gk__fluid_pressure(const gk__fluid *f, gk_molar_volume vm, gk_temperat
     } else if (f->eos == GK_EOS_HYDROGEN) {
         st = gk__h2_pressure(GK_LIT(1.0) / vm.m3_per_mol, t.k, &pa);
     } else if (f->eos == GK_EOS_SPAN_WAGNER) {
-        gk__hz_model m;
+        gk__hz_model m = fluid_no_model;
         st = fluid_sw_model(f, &m);
         if (st == GK_OK) { st = gk__hz_pressure(&m, GK_LIT(1.0) / vm.m3_per_mol, t.k, &pa); }
 #endif
@@ -258,7 +267,7 @@ gk_status gk__fluid_pressure(const gk__fluid *f, gk_molar_volume vm, gk_temperat
 
 gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t, gk_root root,
                        gk_eos_result *out) {
-    gk__fluid f;
+    gk__fluid f = fluid_none;
     gk_status st;
     if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__fluid_init(&f, eos, gas, NULL, NULL);
@@ -268,7 +277,7 @@ gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperat
 
 gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij, gk_pressure p,
                                gk_temperature t, gk_root root, gk_eos_result *out) {
-    gk__fluid f;
+    gk__fluid f = fluid_none;
     gk_status st;
     if (mix == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__fluid_init(&f, eos, NULL, mix, kij);
@@ -278,7 +287,7 @@ gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real 
 
 gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_temperature t,
                           gk_pressure *out) {
-    gk__fluid f;
+    gk__fluid f = fluid_none;
     gk_status st;
     if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__fluid_init(&f, eos, gas, NULL, NULL);
@@ -288,8 +297,8 @@ gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_
 
 gk_status gk_eos_density(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
                          gk_density *out) {
-    gk__fluid f;
-    gk_eos_result r;
+    gk__fluid f = fluid_none;
+    gk_eos_result r = fluid_no_result;
     gk_real m = GK_LIT(0.0), rho;
     gk_status st;
     if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }

@@ -28,6 +28,7 @@ drivers=(
   "number:number_parse.c:-eva-auto-loop-unroll 64"
   "parse:mixture.c gas.c number_parse.c:-eva-precision 1"
   "refgrade:helmholtz.c hydrogen.c gas.c:-eva-precision 1 -warn-special-float none"
+  "state:eos.c eos_vdw.c fluid.c gas.c helmholtz.c hydrogen.c cubic.c mixture.c number_parse.c:-eva-precision 1 -warn-special-float none"
 )
 status=0
 summary=()
@@ -57,6 +58,6 @@ for prec in 0 1; do
   done
 done
 total=$(printf '%s\n' "${summary[@]}" | awk '{u += $3; e += $5} END {print u " unexplained, " e " explained"}')
-echo "summary: Frama-C $(frama-c -version | cut -d' ' -f1) EVA (precision $precision unless a driver sets its own; strict non-finite policy, cubic and refgrade under Annex F), $((${#summary[@]} / 2)) drivers x 2 precisions: $total alarms in $((SECONDS - t_start)) s"
+echo "summary: Frama-C $(frama-c -version | cut -d' ' -f1) EVA (precision $precision unless a driver sets its own; strict non-finite policy, cubic, refgrade and state under Annex F), $((${#summary[@]} / 2)) drivers x 2 precisions: $total alarms in $((SECONDS - t_start)) s"
 printf '%s\n' "${summary[@]}" | sed 's/^/summary:   /'
 exit $status
