@@ -169,7 +169,7 @@ static GK__FLUID_NOINLINE gk_status fluid_h2_state(const gk__fluid *f, gk_real p
    does not carry its frame. */
 static GK__FLUID_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk_real p, gk_real t,
                                                           gk_root root, gk_eos_result *out) {
-    gk__hz_model m = fluid_no_model;
+    gk__hz_model m; /* filled by fluid_sw_model, read only on its GK_OK */
     gk_status st;
     if (f->eos == GK_EOS_HYDROGEN) {
         st = fluid_h2_state(f, p, t, out);
@@ -218,7 +218,7 @@ gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, g
 }
 
 gk_status gk__fluid_gas_z(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_real *z) {
-    gk_eos_result r = fluid_no_result;
+    gk_eos_result r; /* filled by gk__fluid_state, read only on its GK_OK */
     const gk_status st = gk__fluid_state(f, p, t, GK_ROOT_STABLE, &r);
     if (st != GK_OK) { return st; }
     /* liquid: the stable root of two or three is the liquid one, or a lone root below Tc lies
