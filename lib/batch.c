@@ -70,8 +70,8 @@ static inline uint32_t real_key(gk_real x) {
    check; when it fails the caller recomputes the block element by element (the inputs are
    intact). Inlined with n = GK_BATCH_BLOCK for a full block, so that the trip count is a
    constant (compilers then vectorise it also at -O2, with no remainder loop). */
-static inline bool ideal_block(size_t n, const gk_real *restrict p, const gk_real *restrict t,
-                               gk_real m, uint32_t key_lo, uint32_t span, gk_real *restrict out) {
+static inline bool ideal_block(size_t n, const gk_real *p, const gk_real *t, gk_real m,
+                               uint32_t key_lo, uint32_t span, gk_real *out) {
     size_t i;
     uint32_t worst = 0u;
     for (i = 0; i < n; ++i) {
@@ -150,9 +150,9 @@ size_t gk_ideal_density_batch(size_t count, const gk_real *p_pa, const gk_real *
     fast = in_bound(m.kg_per_mol, lo, hi) && out_kg_per_m3 != p_pa && out_kg_per_m3 != t_k;
     for (base = 0; base < count; base += n) {
         const size_t rest = count - base;
-        const gk_real *p = p_pa + base, *t = t_k + base;
-        gk_real *out = out_kg_per_m3 + base;
-        gk_status *st = (status_out != NULL) ? status_out + base : NULL;
+        const gk_real *p = &p_pa[base], *t = &t_k[base];
+        gk_real *out = &out_kg_per_m3[base];
+        gk_status *st = (status_out != NULL) ? &status_out[base] : NULL;
         bool done = false;
         n = (rest < GK_BATCH_BLOCK) ? rest : GK_BATCH_BLOCK;
         if (fast) {
@@ -236,18 +236,23 @@ static gk_status element_root(const batch_job *job, gk_pressure p, gk_temperatur
     return GK_OK;
 }
 
-/* Contents, reference flow or mass flow at one state, with the formulas and the order of
-   statuses of gk_vessel_contents(), gk_flow_to_reference() and gk_flow_to_mass(): the
-   readings, the molar mass, Z at (p, T), Z at the reference, the result. */
-static gk_status element_amount(const batch_job *job, gk_real x, gk_pressure p, gk_temperature t,
-                                gk_real r[3]) {
-    gk_real z = GK_LIT(1.0), factor = GK_LIT(1.0), n, rho;
+/* The status of element i's readings and of the molar mass, in the order of the scalar
+   functions' checks: volume or flow, p, T, then the molar mass. */
+static gk_status amount_readings(const batch_job *job, size_t i) {
+    const gk_real x = job->x[i];
     const bool readings = ((job->op == BATCH_CONTENTS) ? gk_positive(x) : gk_finite(x)) &&
-                          gk_positive(p.pa) && gk_positive(t.k);
-    gk_status s = readings ? job->m_status : GK_ERR_DOMAIN;
-    if (s == GK_OK) { s = gk__fluid_gas_z(&job->fluid, p, t, &z); }
-    if (s == GK_OK) { s = job->z_ref_status; }
-    if (s != GK_OK) { return s; }
+                          gk_positive(job->p[i]) && gk_positive(job->t[i]);
+    return readings ? job->m_status : GK_ERR_DOMAIN;
+}
+
+/* Contents, reference flow or mass flow of element i from its Z, with the formulas of
+   gk_vessel_contents(), gk_flow_to_reference() and gk_flow_to_mass(). */
+static gk_status amount_of(const batch_job *job, size_t i, gk_real z, gk_real r[3]) {
+    const gk_real x = job->x[i];
+    const gk_pressure p = { job->p[i] };
+    const gk_temperature t = { job->t[i] };
+    gk_real factor = GK_LIT(1.0), n, rho;
+    gk_status s;
     switch (job->op) {
         case BATCH_FLOW_TO_REFERENCE:
             /* q_ref = q (p / p_ref)(T_ref / T)(Z_ref / Z) */
@@ -295,16 +300,29 @@ static size_t run_roots(const batch_job *job, size_t count) {
     return ok;
 }
 
-/* The elements of a contents or flow call, as run_roots(). */
+/* Element i of a contents or flow call from its status so far and its Z: the result, then the
+   outputs (its inputs are read before its outputs are written). Out of line: the results are
+   not in the frame that holds the loop over the state solves (firmware stack budget). */
+static GK_NOINLINE size_t amount_put(const batch_job *job, size_t i, gk_status s, gk_real z) {
+    gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
+    const gk_status st = (s == GK_OK) ? amount_of(job, i, z, r) : s;
+    return element_put(job, i, st, r);
+}
+
+/* The elements of a contents or flow call, with the order of statuses of the scalar
+   functions: the readings, the molar mass, Z at (p, T), Z at the reference, the result. */
 static size_t run_amounts(const batch_job *job, size_t count) {
     size_t i, ok = 0;
     for (i = 0; i < count; ++i) {
-        gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
-        gk_pressure p;
-        gk_temperature t;
-        p.pa = job->p[i];
-        t.k = job->t[i];
-        ok += element_put(job, i, element_amount(job, job->x[i], p, t, r), r);
+        gk_real z = GK_LIT(1.0);
+        gk_status s = amount_readings(job, i);
+        if (s == GK_OK) {
+            const gk_pressure p = { job->p[i] };
+            const gk_temperature t = { job->t[i] };
+            s = gk__fluid_gas_z(&job->fluid, p, t, &z);
+        }
+        if (s == GK_OK) { s = job->z_ref_status; }
+        ok += amount_put(job, i, s, z);
     }
     return ok;
 }

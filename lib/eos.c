@@ -438,7 +438,8 @@ gk_status gk__eos_cubic_state(gk_eos eos, gk_real a, gk_real b, gk_real p, gk_re
                               gk_root root, gk_eos_result *out) {
     const eos_family family = family_of(eos);
     const eos_cubic k = cubic_of(family);
-    gk_real c2, c1, c0, zr[3], guess, zsel = GK_LIT(0.0), attr = GK_LIT(0.0), phi, vm;
+    gk_real c2, c1, c0, guess, zsel = GK_LIT(0.0), attr = GK_LIT(0.0), phi, vm;
+    gk_real zr[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
     gk_root branch;
     int n;
 

@@ -12,17 +12,18 @@
 #include "hydrogen.h"
 #include "mixture_internal.h"
 
+/* Zero values to start locals from: every field is set before any read on every path, also
+   where a call fills a structure only on GK_OK (the analysers see it without following the
+   statuses). Static, so zero-initialised, and const. */
+static const gk__fluid fluid_none;
+static const gk_eos_result fluid_no_result;
+#if GK_REFERENCE_MODELS
+static const gk__hz_model fluid_no_model;
+#endif
+
 /* Is eos one of gk_eos (cubic, ideal or reference-grade)? Compared as unsigned (see
    gk__eos_valid()). */
 static bool fluid_eos_valid(gk_eos eos) { return (unsigned)eos <= (unsigned)GK_EOS_HYDROGEN; }
-
-/* Keeps a helper out of line (firmware stack: its frame is not under the cubic path); only a
-   hint, empty without GCC or Clang. */
-#if defined(__GNUC__)
-#  define GK__FLUID_NOINLINE __attribute__((noinline))
-#else
-#  define GK__FLUID_NOINLINE
-#endif
 
 static gk_status init_mixture(gk__fluid *f, gk_eos eos, const gk_mixture *mix, const gk_real *kij) {
     gk_real tc = GK_LIT(0.0);
@@ -50,7 +51,7 @@ static gk_status init_mixture(gk__fluid *f, gk_eos eos, const gk_mixture *mix, c
 #if GK_REFERENCE_MODELS
 static gk_status init_reference(gk__fluid *f, gk_eos eos, const gk_gas *gas, const gk_mixture *mix,
                                 const gk_real *kij) {
-    gk__hz_model m;
+    gk__hz_model m = fluid_no_model;
     gk_status st;
     if (mix != NULL) {
         st = gk__mixture_check(mix);
@@ -135,9 +136,9 @@ static gk_status fluid_sw_model(const gk__fluid *f, gk__hz_model *m) {
 }
 
 /* The state of the hydrogen equation (hydrogen.h) in the result form: one root. */
-static GK__FLUID_NOINLINE gk_status fluid_h2_state(const gk__fluid *f, gk_real p, gk_real t,
-                                                   gk_eos_result *out) {
-    gk__h2_state h;
+static GK_NOINLINE gk_status fluid_h2_state(const gk__fluid *f, gk_real p, gk_real t,
+                                            gk_eos_result *out) {
+    gk__h2_state h = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
     gk_real phi, vm;
     gk_status st = gk__h2_solve(p, t, &h);
     if (st != GK_OK) { return st; }
@@ -158,8 +159,8 @@ static GK__FLUID_NOINLINE gk_status fluid_h2_state(const gk__fluid *f, gk_real p
 
 /* The per-temperature part of a Span-Wagner state (gk__hz_prepare()) of the fluid. Out of line:
    the model it builds is not in the frame under the density solve (firmware stack). */
-static GK__FLUID_NOINLINE gk_status fluid_sw_prepare(const gk__fluid *f, gk_real p, gk_real t,
-                                                     gk__hz_prepared *out) {
+static GK_NOINLINE gk_status fluid_sw_prepare(const gk__fluid *f, gk_real p, gk_real t,
+                                              gk__hz_prepared *out) {
     gk__hz_model m;
     gk_status st = fluid_sw_model(f, &m);
     return (st == GK_OK) ? gk__hz_prepare(&m, p, t, out) : st;
@@ -167,8 +168,8 @@ static GK__FLUID_NOINLINE gk_status fluid_sw_prepare(const gk__fluid *f, gk_real
 
 /* A state of a reference-grade model (helmholtz.h, hydrogen.h). Out of line: the cubic path
    does not carry its frame. */
-static GK__FLUID_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk_real p, gk_real t,
-                                                          gk_root root, gk_eos_result *out) {
+static GK_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk_real p, gk_real t,
+                                                   gk_root root, gk_eos_result *out) {
     gk__hz_prepared pr;
     gk_status st;
     if (f->eos == GK_EOS_HYDROGEN) {
@@ -185,8 +186,8 @@ static GK__FLUID_NOINLINE gk_status fluid_reference_state(const gk__fluid *f, gk
 
 /* A state of a cubic model: its a and b (pure or mixed), then the cubic. Out of line: a and b
    are not in the frame above the other models' solves (firmware stack). */
-static GK__FLUID_NOINLINE gk_status fluid_cubic_state(const gk__fluid *f, gk_real p, gk_real t,
-                                                      gk_root root, gk_eos_result *out) {
+static GK_NOINLINE gk_status fluid_cubic_state(const gk__fluid *f, gk_real p, gk_real t,
+                                               gk_root root, gk_eos_result *out) {
     gk_real a = GK_LIT(0.0), b = GK_LIT(0.0);
     gk_status st = (f->mix != NULL) ? gk__eos_mix_ab(f->eos, f->mix, f->kij, p, t, &a, &b)
                                     : gk__eos_ab(f->eos, f->gas, p, t, &a, &b);
@@ -227,7 +228,7 @@ gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, g
 }
 
 gk_status gk__fluid_gas_z(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_real *z) {
-    gk_eos_result r;
+    gk_eos_result r; /* filled by gk__fluid_state, read only on its GK_OK */
     const gk_status st = gk__fluid_state(f, p, t, GK_ROOT_STABLE, &r);
     if (st != GK_OK) { return st; }
     /* liquid: the stable root of two or three is the liquid one, or a lone root below Tc lies
@@ -260,7 +261,7 @@ gk_status gk__fluid_pressure(const gk__fluid *f, gk_molar_volume vm, gk_temperat
     } else if (f->eos == GK_EOS_HYDROGEN) {
         st = gk__h2_pressure(GK_LIT(1.0) / vm.m3_per_mol, t.k, &pa);
     } else if (f->eos == GK_EOS_SPAN_WAGNER) {
-        gk__hz_model m;
+        gk__hz_model m = fluid_no_model;
         st = fluid_sw_model(f, &m);
         if (st == GK_OK) { st = gk__hz_pressure(&m, GK_LIT(1.0) / vm.m3_per_mol, t.k, &pa); }
 #endif
@@ -300,7 +301,7 @@ static gk_status fluid_public_state(const gk__fluid *f, gk_pressure p, gk_temper
 
 gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t, gk_root root,
                        gk_eos_result *out) {
-    gk__fluid f;
+    gk__fluid f = fluid_none;
     gk_status st;
     if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__fluid_init(&f, eos, gas, NULL, NULL);
@@ -310,7 +311,7 @@ gk_status gk_eos_solve(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperat
 
 gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real *kij, gk_pressure p,
                                gk_temperature t, gk_root root, gk_eos_result *out) {
-    gk__fluid f;
+    gk__fluid f = fluid_none;
     gk_status st;
     if (mix == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__fluid_init(&f, eos, NULL, mix, kij);
@@ -320,7 +321,7 @@ gk_status gk_mixture_eos_solve(gk_eos eos, const gk_mixture *mix, const gk_real 
 
 gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_temperature t,
                           gk_pressure *out) {
-    gk__fluid f;
+    gk__fluid f = fluid_none;
     gk_status st;
     if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     st = gk__fluid_init(&f, eos, gas, NULL, NULL);
@@ -330,8 +331,8 @@ gk_status gk_eos_pressure(gk_eos eos, const gk_gas *gas, gk_molar_volume vm, gk_
 
 gk_status gk_eos_density(gk_eos eos, const gk_gas *gas, gk_pressure p, gk_temperature t,
                          gk_density *out) {
-    gk__fluid f;
-    gk_eos_result r;
+    gk__fluid f = fluid_none;
+    gk_eos_result r = fluid_no_result;
     gk_real m = GK_LIT(0.0), rho;
     gk_status st;
     if (gas == NULL || out == NULL) { return GK_ERR_ARGUMENT; }

@@ -64,12 +64,9 @@ typedef struct gk__gas_row {
 
 /* clang-format off */
 #define GK__ROW(name, formula, m, tc, pc, omega, a, b, gamma, sigma, alias)                     \
-    { { name, formula, { GK_LIT(m) }, { GK_LIT(tc) }, { GK_LIT(pc) }, GK_LIT(omega),           \
+    { { (name), (formula), { GK_LIT(m) }, { GK_LIT(tc) }, { GK_LIT(pc) }, GK_LIT(omega),       \
         GK_LIT(a), GK_LIT(b), GK_LIT(gamma), GK_LIT(sigma) },                                  \
-      alias }
-#define GK__ALIAS1(a) a "\0"
-#define GK__ALIAS2(a, b) a "\0" b "\0"
-#define GK__ALIAS3(a, b, c) a "\0" b "\0" c "\0"
+      (alias) }
 #define GK__NO_ALIAS NULL
 
 /* Columns of GK__ROW: name, formula, molar mass (kg/mol), Tc (K), Pc (Pa), acentric factor,
@@ -83,7 +80,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.4,                        /* gamma: 1.40 [ISO2533] */
             3.711e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("dry air")),
+            "dry air" "\0"),
     /* nitrogen */
     GK__ROW("nitrogen", "N2",
             28.014e-3,                  /* M: 2 x 14.007 g/mol [AW] */
@@ -115,7 +112,7 @@ static const gk__gas_row gk__gases[] = {
             0.00346, 2.38e-05,          /* a, b: 0.0346 bar L2/mol2, 0.0238 L/mol [CRC-vdW] */
             1.6666666666666667,         /* gamma: 5/3, monatomic ideal gas (kinetic theory) */
             2.551e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("helium-4")),
+            "helium-4" "\0"),
     /* neon */
     GK__ROW("neon", "Ne",
             20.1797e-3,                 /* M: 20.1797 g/mol [AW] */
@@ -195,7 +192,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.0922,                     /* gamma: cp 98.5 J/(mol K) [TRC, from memory], cp/(cp - R) */
             4.687e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("butane")),
+            "butane" "\0"),
     /* isobutane */
     GK__ROW("isobutane", "i-C4H10",
             58.124e-3,                  /* M: 4 x 12.011 + 10 x 1.008 g/mol [AW] */
@@ -203,7 +200,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.094,                      /* gamma: cp 96.8 J/(mol K) [TRC, from memory], cp/(cp - R) */
             5.278e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS2("2-methylpropane", "i-butane")),
+            "2-methylpropane" "\0" "i-butane" "\0"),
     /* ethylene */
     GK__ROW("ethylene", "C2H4",
             28.054e-3,                  /* M: 2 x 12.011 + 4 x 1.008 g/mol [AW] */
@@ -211,7 +208,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.2404,                     /* gamma: cp 42.9 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             4.163e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("ethene")),
+            "ethene" "\0"),
     /* propylene */
     GK__ROW("propylene", "C3H6",
             42.081e-3,                  /* M: 3 x 12.011 + 6 x 1.008 g/mol [AW] */
@@ -219,7 +216,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.1485,                     /* gamma: cp 64.32 J/(mol K) [TRC, from memory], cp/(cp - R) */
             4.678e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("propene")),
+            "propene" "\0"),
     /* acetylene */
     GK__ROW("acetylene", "C2H2",
             26.038e-3,                  /* M: 2 x 12.011 + 2 x 1.008 g/mol [AW] */
@@ -227,7 +224,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.2327,                     /* gamma: cp 44.04 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             4.033e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("ethyne")),
+            "ethyne" "\0"),
     /* ammonia */
     GK__ROW("ammonia", "NH3",
             17.031e-3,                  /* M: 14.007 + 3 x 1.008 g/mol [AW] */
@@ -243,7 +240,7 @@ static const gk__gas_row gk__gases[] = {
             0.5537, 3.049e-05,          /* a, b: 5.537 bar L2/mol2, 0.03049 L/mol [CRC-vdW] */
             1.329,                      /* gamma: cp 33.588 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             2.641e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS2("water vapour", "water vapor")),
+            "water vapour" "\0" "water vapor" "\0"),
     /* hydrogen sulfide */
     GK__ROW("hydrogen sulfide", "H2S",
             34.076e-3,                  /* M: 2 x 1.008 + 32.06 g/mol [AW] */
@@ -251,7 +248,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.3213,                     /* gamma: cp 34.192 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             3.623e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("hydrogen sulphide")),
+            "hydrogen sulphide" "\0"),
     /* sulfur dioxide */
     GK__ROW("sulfur dioxide", "SO2",
             64.058e-3,                  /* M: 32.06 + 2 x 15.999 g/mol [AW] */
@@ -259,7 +256,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.2634,                     /* gamma: cp 39.878 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             4.112e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("sulphur dioxide")),
+            "sulphur dioxide" "\0"),
     /* nitrous oxide */
     GK__ROW("nitrous oxide", "N2O",
             44.013e-3,                  /* M: 2 x 14.007 + 15.999 g/mol [AW] */
@@ -267,7 +264,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.2744,                     /* gamma: cp 38.617 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             3.828e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("dinitrogen monoxide")),
+            "dinitrogen monoxide" "\0"),
     /* nitric oxide */
     GK__ROW("nitric oxide", "NO",
             30.006e-3,                  /* M: 14.007 + 15.999 g/mol [AW] */
@@ -275,7 +272,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.3862,                     /* gamma: cp 29.845 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             3.492e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("nitrogen monoxide")),
+            "nitrogen monoxide" "\0"),
     /* chlorine */
     GK__ROW("chlorine", "Cl2",
             70.9e-3,                    /* M: 2 x 35.45 g/mol [AW] */
@@ -299,7 +296,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.0938,                     /* gamma: cp 97.0 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             5.128e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("sulphur hexafluoride")),
+            "sulphur hexafluoride" "\0"),
     /* nitrogen trifluoride */
     GK__ROW("nitrogen trifluoride", "NF3",
             71.002209486e-3,            /* M: 14.007 + 3 x 18.998403162 g/mol [AW] */
@@ -315,7 +312,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.1575,                     /* gamma: cp 61.09 J/(mol K) [JANAF, from memory], cp/(cp - R) */
             4.662e-10,                  /* sigma, m: [LJ, from memory] */
-            GK__ALIAS1("tetrafluoromethane")),
+            "tetrafluoromethane" "\0"),
     /* 1,1,1,2-tetrafluoroethane */
     GK__ROW("1,1,1,2-tetrafluoroethane", "CH2FCF3",
             102.031612648e-3,           /* M: 2x12.011 + 2x1.008 + 4x18.998403162 [AW] */
@@ -323,7 +320,7 @@ static const gk__gas_row gk__gases[] = {
             0.0, 0.0,                   /* a, b: 0, derive from Tc, Pc */
             1.1068,                     /* gamma: cp 86.2 J/(mol K) [TRB94, from memory], cp/(cp - R) */
             0.0,                        /* sigma: not known */
-            GK__ALIAS3("r-134a", "r134a", "hfc-134a")),
+            "r-134a" "\0" "r134a" "\0" "hfc-134a" "\0"),
 };
 /* clang-format on */
 
@@ -378,8 +375,8 @@ gk_status gk_gas_find(const char *name_or_formula, const gk_gas **out) {
     if (name_or_formula == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     /* bounded: reads at most GK_GAS_KEY_MAX + 1 characters, never past the NUL; a longer key
        names no gas */
-    while (n <= GK_GAS_KEY_MAX && name_or_formula[n] != '\0') { ++n; }
-    if (n > GK_GAS_KEY_MAX) { return GK_ERR_NOT_FOUND; }
+    while ((n <= (size_t)GK_GAS_KEY_MAX) && (name_or_formula[n] != '\0')) { ++n; }
+    if (n > (size_t)GK_GAS_KEY_MAX) { return GK_ERR_NOT_FOUND; }
     return gk__gas_find_n(name_or_formula, n, out);
 }
 

@@ -16,6 +16,15 @@
 
 #define GK_LIT(x) GK_REAL_C(x)
 
+/* Keeps a helper out of line, so that its locals are not in the frame of a caller that also
+   makes deeper calls (the firmware stack budget, docs/embedding.md); only a hint, empty without
+   GCC or Clang. */
+#if defined(__GNUC__)
+#  define GK_NOINLINE __attribute__((noinline))
+#else
+#  define GK_NOINLINE
+#endif
+
 #if GK_REAL_IS_FLOAT
 #  define gk_sqrt sqrtf
 #  define gk_cbrt cbrtf
@@ -67,7 +76,10 @@ static inline gk_status gk_check_result(gk_real x) { return gk_finite(x) ? GK_OK
 
 /* ASCII lower case; no locale, no <ctype.h> (gas names and composition keywords). */
 static inline char gk__ascii_lower(char c) {
-    return (c >= 'A' && c <= 'Z') ? (char)(c - 'A' + 'a') : c;
+    const int code = ((int)c - (int)'A') + (int)'a';
+    char lower = c;
+    if ((c >= 'A') && (c <= 'Z')) { lower = (char)code; }
+    return lower;
 }
 
 #endif /* GASKIT_INTERNAL_H */

@@ -87,9 +87,10 @@ static inline gk_status gk_scaled_product(const gk_real *num, const gk_real *den
     const gk_real lo = GK_LIT(1.0) / hi; /* exact: a power of two */
     gk_real mant = GK_LIT(1.0);
     int expo = 0;
-    int i, in_range = 1;
+    int i;
+    bool in_range = true;
     for (i = 0; i < count; ++i) {
-        if (num[i] > hi || num[i] < lo || den[i] > hi || den[i] < lo) { in_range = 0; }
+        if (num[i] > hi || num[i] < lo || den[i] > hi || den[i] < lo) { in_range = false; }
     }
     if (in_range) {
         for (i = 0; i < count; ++i) { mant *= num[i] / den[i]; }

@@ -46,13 +46,6 @@
 
 #if GK_REFERENCE_MODELS /* the whole file: see gaskit/config.h */
 
-/* Keeps a helper out of line so its locals are not in the frame under the root searches
-   (firmware stack budget); only a hint, empty without GCC or Clang. */
-#  if defined(__GNUC__)
-#    define HZ_NOINLINE __attribute__((noinline))
-#  else
-#    define HZ_NOINLINE
-#  endif
 /* Always inlines a helper into its caller, whose frame then holds its locals once (firmware
    stack); only a hint without GCC or Clang. */
 #  if defined(__GNUC__)
@@ -227,7 +220,7 @@ static gk_status hz_model_pure(const gk__sw_fluid *fluid, gk__hz_model *out) {
 
 /* Dry air of ISO 2533:1975 (from memory): N2 78.084 %, O2 20.9476 %, Ar 0.934 % by volume, the
    three normalised to their sum 0.999656 (the other 0.034 %, mostly CO2, left out). */
-static const gk__sw_fluid *const hz_air_rows[3] = { &hz_fluids[0], &hz_fluids[1], &hz_fluids[2] };
+static const gk__sw_fluid *const hz_air_rows[] = { &hz_fluids[0], &hz_fluids[1], &hz_fluids[2] };
 static const gk_real hz_air_x[3] = { GK_LIT(0.7811087013932793), GK_LIT(0.20954808454108212),
                                      GK_LIT(0.009343214065638579) };
 
@@ -252,9 +245,9 @@ typedef struct hz_mix_sums {
     gk_real t_min, t_max, p_max;
 } hz_mix_sums;
 
-/* Adds x times the row to the mixture's sums and range. Out of line: the sums stay in the
-   caller's frame, not in registers saved across the row lookups (firmware stack). */
-static HZ_NOINLINE void hz_mix_add(hz_mix_sums *m, const gk__sw_fluid *fl, gk_real x) {
+/* Adds x times the row to the mixture's sums and range (out of line: firmware stack budget,
+   docs/embedding.md). */
+static GK_NOINLINE void hz_mix_add(hz_mix_sums *m, const gk__sw_fluid *fl, gk_real x) {
     gk_real c = gk_cbrt(GK_LIT(1.0) / fl->rho_c);
     m->s[0] += x * gk_sqrt(fl->t_c);
     m->s[1] += x;
@@ -303,12 +296,12 @@ static gk_status hz_model_rows(const gk__sw_fluid *const *rows, const gk_real *x
     return hz_model_mix(NULL, rows, x, count, out);
 }
 
-/* The checks of gk__sw_model_mixture() on its components; GK_OK or the status. Out of line:
-   its loop's registers are not saved under the model's construction (firmware stack). */
-static HZ_NOINLINE gk_status hz_mixture_check(const gk_gas *const *gas, const gk_real *x,
+/* The checks of gk__sw_model_mixture() on its components; GK_OK or the status (out of line:
+   firmware stack budget). */
+static GK_NOINLINE gk_status hz_mixture_check(const gk_gas *const *gas, const gk_real *x,
                                               size_t count) {
     size_t i;
-    if (count == 0 || count > GK_MIXTURE_MAX) { return GK_ERR_DOMAIN; }
+    if ((count == 0u) || (count > (size_t)GK_MIXTURE_MAX)) { return GK_ERR_DOMAIN; }
     for (i = 0; i < count; ++i) {
         if (gas[i] == NULL) { return GK_ERR_ARGUMENT; }
         if (!gk_finite(x[i]) || x[i] < GK_LIT(0.0) || x[i] > GK_LIT(1.0)) { return GK_ERR_DOMAIN; }
@@ -349,9 +342,7 @@ typedef struct hz_rootrec {
 
 /* The integer powers of tau the exponents use (the integer parts of t_k: 0, 1, 2, 3, 4, 6, 12,
    14) and, per term, the slot of its power in that list. */
-enum {
-    HZ_TAU_POWERS = 8
-};
+#  define HZ_TAU_POWERS 8
 static const unsigned char hz_tslot[2][GK__SW_TERMS] = {
     { 0, 1, 1, 1, 0, 0, 0, 1, 3, 3, 7, 6 }, /* nonpolar: 0 1 1 1 0 0 0 1 3 3 14 12 */
     { 0, 1, 1, 0, 0, 2, 2, 2, 3, 5, 4, 6 }  /* polar: 0 1 1 0 0 2 2 2 3 6 4 12 */
@@ -421,8 +412,8 @@ static inline void hz_expo(hz_sums *s, gk_real term, gk_real d, gk_real l, gk_re
     s->s2 += (g * (g - GK_LIT(1.0)) - l * l * dl) * term;
 }
 
-/* The 12 groups (see hz_group). Always inlined: inside hz_root() its registers are saved once
-   (firmware stack). */
+/* The sums of the 12 groups (see hz_group) at delta: alpha_r, delta alpha_r_delta and
+   delta^2 alpha_r_delta_delta (inlined into hz_root(): firmware stack budget). */
 static HZ_INLINE void hz_eval(const gk_real *g, gk_real delta, hz_sums *out) {
     /* the exponentials first: only delta is kept across the calls */
     const gk_real e1 = gk_exp(-delta), e2 = gk_exp(-(delta * delta));
@@ -515,6 +506,8 @@ static int hz_root(const gk__hz_prepared *pr, int dir, bool split, gk_real start
             x = best_x; /* rounding level: back to the best point (evaluated once more) */
             settle = true;
             continue;
+        } else {
+            /* no better than the best point yet, not stalled: go on */
         }
         dx = (fp > GK_LIT(0.0)) ? -f / fp : GK_LIT(0.0);
         if (fp > GK_LIT(0.0) && gk_fabs(dx) <= HZ_QUAD_TOL * x) {
@@ -539,6 +532,8 @@ static int hz_root(const gk__hz_prepared *pr, int dir, bool split, gk_real start
         } else if (!(fp > GK_LIT(0.0)) || !hz_before(dir, near_end, xn) ||
                    !hz_before(dir, xn, far_end)) {
             xn = GK_LIT(0.5) * (near_end + far_end); /* bisection of the bracket */
+        } else {
+            /* the Newton step stays inside the bracket */
         }
         x = xn;
         stepped = true;
@@ -581,7 +576,7 @@ static gk_real hz_liquid_start(gk_real tr) {
    second-order series has no root (Pi above its peak -1/(4 B), B < 0), the density of that peak,
    -1/(2 B): near the end of the vapour branch, where a search without a root ends soonest. Out
    of line: its temporaries stay out of the frame under the Newton loop (firmware stack). */
-static HZ_NOINLINE gk_real hz_gas_start(const gk__hz_prepared *pr, gk_real limit) {
+static GK_NOINLINE gk_real hz_gas_start(const gk__hz_prepared *pr, gk_real limit) {
     const gk_real *g = pr->g;
     const gk_real b = g[0] + g[4] + g[7];
     const gk_real c = GK_LIT(2.0) * (((g[1] + g[5]) + g[9]) - g[4]);
@@ -608,15 +603,19 @@ static HZ_NOINLINE gk_real hz_gas_start(const gk__hz_prepared *pr, gk_real limit
 /* Writes the chosen root (index 0 = liquid-like, 1 = vapour-like) into *out; has_gas: rr[1]
    holds a root, n: the number of roots in rr. Out of line: its locals are not in the frame that
    lies under the root searches (firmware stack budget). */
-static HZ_NOINLINE gk_status hz_pick(const gk__hz_prepared *pr, const hz_rootrec rr[2],
+static GK_NOINLINE gk_status hz_pick(const gk__hz_prepared *pr, const hz_rootrec rr[2],
                                      bool has_gas, int n, gk_root root, gk_eos_result *out) {
-    int i = has_gas ? 1 : 0; /* the vapour-like root, or the only one */
+    int i = 0;
     gk_real phi, vm;
     gk_root branch;
-    if (n == 2 && root == GK_ROOT_LIQUID) {
+    if (has_gas) { i = 1; /* the vapour-like root, or the only one */ }
+    if ((n == 2) && (root == GK_ROOT_LIQUID)) {
         i = 0;
-    } else if (n == 2 && root == GK_ROOT_STABLE) {
-        i = (rr[0].ln_phi < rr[1].ln_phi) ? 0 : 1; /* a tie goes to the gas */
+    } else if ((n == 2) && (root == GK_ROOT_STABLE)) {
+        i = 1; /* a tie goes to the gas */
+        if (rr[0].ln_phi < rr[1].ln_phi) { i = 0; }
+    } else {
+        /* one root, or the gas asked for: the vapour-like one when found */
     }
     if (n == 2) {
         branch = (i == 0) ? GK_ROOT_LIQUID : GK_ROOT_GAS;

@@ -52,8 +52,17 @@ static const gk_real h2_cf[9] = { GK_LIT(0.0),  GK_LIT(0.0), GK_LIT(0.0), GK_LIT
 #  define H2_MPA GK_LIT(1.0e6)
 
 bool gk__h2_covers(const gk_gas *gas) {
-    return gas != NULL && gas->formula != NULL && gas->formula[0] == 'H' &&
-           gas->formula[1] == '2' && gas->formula[2] == '\0';
+    /* "H2" compared character by character, stopping at the first difference (never past the
+       formula's NUL) */
+    static const char h2[3] = { 'H', '2', '\0' };
+    bool more = (gas != NULL) && (gas->formula != NULL);
+    bool same = false;
+    size_t i;
+    for (i = 0u; (i < 3u) && more; ++i) {
+        more = (unsigned char)gas->formula[i] == (unsigned char)h2[i];
+        same = more && (h2[i] == '\0');
+    }
+    return same;
 }
 
 /* x^n for 0 <= n <= 5 by multiplication. */

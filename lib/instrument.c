@@ -227,10 +227,27 @@ gk_status gk_relative_density(gk_eos eos, gk_fluid fluid, gk_pressure p, gk_temp
 
 /* Is this component water? The built-in entry, or a caller's entry with formula "H2O". */
 static bool is_water(const gk_gas *g, const gk_gas *water) {
-    if (g == water) { return true; }
     /* the formula compared by hand: the library uses no C library but <math.h> */
-    return g != NULL && g->formula != NULL && g->formula[0] == 'H' && g->formula[1] == '2' &&
-           g->formula[2] == 'O' && g->formula[3] == '\0';
+    static const char h2o[4] = { 'H', '2', 'O', '\0' };
+    bool same = g == water;
+    bool more = !same && (g != NULL) && (g->formula != NULL);
+    size_t i;
+    for (i = 0u; (i < 4u) && more; ++i) {
+        /* stops at the first difference, so never reads past the formula's NUL */
+        more = (unsigned char)g->formula[i] == (unsigned char)h2o[i];
+        same = more && (h2o[i] == '\0');
+    }
+    return same;
+}
+
+/* The index of water among the first n components of dry, or n when it is not there. */
+static size_t water_index(const gk_mixture *dry, size_t n, const gk_gas *water) {
+    size_t k = n;
+    size_t i;
+    for (i = 0; (i < n) && (k == n); ++i) {
+        if (is_water(dry->gas[i], water)) { k = i; }
+    }
+    return k;
 }
 
 gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature t,
@@ -254,18 +271,14 @@ gk_status gk_humid_mixture(const gk_mixture *dry, gk_pressure p, gk_temperature 
     s = gk_gas_find("H2O", &water);
     if (s != GK_OK) { return s; }
     n = dry->count;
-    k = n;
-    for (i = 0; i < n; ++i) {
-        if (is_water(dry->gas[i], water)) {
-            k = i;
-            break;
-        }
+    k = water_index(dry, n, water);
+    if ((k == n) && (n >= (size_t)GK_MIXTURE_MAX)) {
+        return GK_ERR_COMPOSITION; /* no room to append water */
     }
-    if (k == n && n >= GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; /* no room to append water */ }
     /* Every check has passed: write *wet entry by entry, each read from dry before it is
        written, so wet may be the same object as dry. */
     scale = GK_LIT(1.0) - xw;
-    for (i = 0; i < GK_MIXTURE_MAX; ++i) {
+    for (i = 0; i < (size_t)GK_MIXTURE_MAX; ++i) {
         const gk_gas *g = dry->gas[i];
         gk_real x = dry->mole_fraction[i];
         if (i < n) { x *= scale; }

@@ -9,7 +9,10 @@
 
 /* Longest composition text accepted, in characters before the NUL (documented in mixture.h).
    Sixteen components with long names and numbers fit comfortably. */
-#define GK__MIXTURE_TEXT_MAX 1024
+#define GK__MIXTURE_TEXT_MAX 1024u
+
+/* GK_MIXTURE_MAX as a size_t, the type of the counts it bounds. */
+#define GK__MIX_MAX ((size_t)GK_MIXTURE_MAX)
 
 /* Sum with Neumaier's compensation (A. Neumaier, ZAMM 54 (1974) 39; common practice): the
    error stays about one rounding of the result instead of growing with the count, so 16
@@ -47,7 +50,7 @@ gk_status gk__mixture_check(const gk_mixture *mix) {
     gk_real sum;
 
     if (mix == NULL) { return GK_ERR_ARGUMENT; }
-    if (mix->count == 0u || mix->count > GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; }
+    if ((mix->count == 0u) || (mix->count > GK__MIX_MAX)) { return GK_ERR_COMPOSITION; }
     for (i = 0; i < mix->count; ++i) {
         if (mix->gas[i] == NULL) { return GK_ERR_ARGUMENT; }
     }
@@ -127,18 +130,18 @@ static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *
     if (eq == len) { return GK_ERR_PARSE; /* no '=': "", "N2", "N2=1," */ }
     name_begin = gk__skip_spaces(text, pos, eq);
     name_end = eq;
-    while (name_end > name_begin && gk__is_space(text[name_end - 1])) { --name_end; }
+    while ((name_end > name_begin) && gk__is_space(text[name_end - 1u])) { --name_end; }
     if (name_end == name_begin) { return GK_ERR_PARSE; /* "=0.5" */ }
-    if (text[name_begin] == ',' || text[name_end - 1] == ',') { return GK_ERR_PARSE; }
+    if ((text[name_begin] == ',') || (text[name_end - 1u] == ',')) { return GK_ERR_PARSE; }
 
     /* value */
-    v = gk__skip_spaces(text, eq + 1, len);
+    v = gk__skip_spaces(text, eq + 1u, len);
     if (gk__starts_with_ci(text, v, len, "balance")) {
         is_balance = true;
         v += 7u;
     } else {
         size_t used = 0;
-        st = gk__decimal_scan(text + v, len - v, &number, &used);
+        st = gk__decimal_scan(&text[v], len - v, &number, &used);
         if (st != GK_OK) { return GK_ERR_PARSE; /* "N2=", "N2=abc" */ }
         v = gk__skip_spaces(text, v + used, len);
         if (v < len && text[v] == '%') {
@@ -147,13 +150,15 @@ static gk_status parse_item(const char *text, size_t len, size_t pos, mix_item *
         } else if (gk__starts_with_ci(text, v, len, "ppm")) {
             scale_exp10 = -6;
             v += 3u;
+        } else {
+            /* a plain fraction */
         }
     }
     v = gk__skip_spaces(text, v, len);
     if (v < len && text[v] != ',') { return GK_ERR_PARSE; /* "N2=0.5 O2=0.5", "N2=5%%" */ }
 
     /* gas */
-    st = gk__gas_find_n(text + name_begin, name_end - name_begin, &gas);
+    st = gk__gas_find_n(&text[name_begin], name_end - name_begin, &gas);
     if (st == GK_ERR_NOT_FOUND) {
         /* "N2=0,5, O2=0,5": a comma inside a name that names no gas was most likely
            meant as a separator, so the text is malformed rather than the gas unknown. */
@@ -196,8 +201,10 @@ static bool listed_before(const char *text, size_t len, size_t count, const gk_g
     for (i = 0; i < count; ++i) {
         it.gas = NULL;
         it.end = len;
-        (void)parse_item(text, len, q, &it); /* read before: cannot fail */
-        if (it.gas == gas) { return true; }
+        /* read without error before (check_text visits the same positions in the same order and
+           parse_item depends on text, len and q only); a failure here would be a defect, and
+           counting the gas as listed then makes the text GK_ERR_COMPOSITION, never a result */
+        if ((parse_item(text, len, q, &it) != GK_OK) || (it.gas == gas)) { return true; }
         q = it.end + 1u;
     }
     return false;
@@ -208,11 +215,11 @@ static bool listed_before(const char *text, size_t len, size_t count, const gk_g
 static gk_status tally_item(const char *text, size_t len, const mix_item *it, mix_tally *tally) {
     gk_real x = GK_LIT(0.0);
     gk_status value_st = GK_OK;
-    if (tally->count == GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; }
+    if (tally->count == GK__MIX_MAX) { return GK_ERR_COMPOSITION; }
     if (!it->is_balance) { value_st = item_fraction(it, &x); }
     if (listed_before(text, len, tally->count, it->gas)) { return GK_ERR_COMPOSITION; }
     if (it->is_balance) {
-        if (tally->balance_index != GK_MIXTURE_MAX) { return GK_ERR_PARSE; /* two balances */ }
+        if (tally->balance_index != GK__MIX_MAX) { return GK_ERR_PARSE; /* two balances */ }
         tally->balance_index = tally->count;
     } else {
         if (value_st != GK_OK) { return value_st; }
@@ -238,22 +245,29 @@ static gk_status check_text(const char *text, size_t len, mix_tally *tally, gk_r
     }
     sum = tally->sum + tally->comp;
     *rest = GK_LIT(0.0);
-    if (tally->balance_index != GK_MIXTURE_MAX) {
+    if (tally->balance_index != GK__MIX_MAX) {
         gk_real r = GK_LIT(1.0) - sum;
         if (r < -GK__MIXTURE_SUM_TOL) { return GK_ERR_COMPOSITION; /* negative balance */ }
         if (r > GK_LIT(0.0)) { *rest = r; /* a rounding below 0 within the 1e-6 budget is 0 */ }
     } else if (!(gk_fabs(sum - GK_LIT(1.0)) <= GK__MIXTURE_SUM_TOL)) {
         return GK_ERR_COMPOSITION;
+    } else {
+        /* no balance, and the fractions sum to 1 */
     }
     return GK_OK;
 }
 
-/* Pass 2 over a checked text: the same components again, into *out (cannot fail). */
+/* Pass 2 over a checked text: the same components again, into *out. Its two calls cannot fail,
+   by construction: parse_item and item_fraction are functions of their arguments only (no state),
+   and check_text called them with the same arguments (positions 0, end + 1, ... of the same
+   components in the same order) and stopped on the first status other than GK_OK; the
+   statuses are therefore not checked again here (checking them would need a third way out with
+   *out half written). */
 static void write_mixture(const char *text, size_t len, const mix_tally *tally, gk_real rest,
                           gk_mixture *out) {
     mix_item it = { NULL, { 0u, 0, 0 }, 0, false, 0u };
     size_t i, pos = 0;
-    for (i = 0; i < GK_MIXTURE_MAX; ++i) {
+    for (i = 0; i < GK__MIX_MAX; ++i) {
         gk_real x = GK_LIT(0.0);
         const gk_gas *gas = NULL;
         if (i < tally->count) {
@@ -280,14 +294,14 @@ static void write_mixture(const char *text, size_t len, const mix_tally *tally, 
  * the same components again and writes them.
  */
 gk_status gk_mixture_parse(const char *text, gk_mixture *out) {
-    mix_tally tally = { 0u, GK_MIXTURE_MAX, GK_LIT(0.0), GK_LIT(0.0) };
+    mix_tally tally = { 0u, GK__MIX_MAX, GK_LIT(0.0), GK_LIT(0.0) };
     size_t len = 0;
     gk_real rest = GK_LIT(0.0);
     gk_status st;
 
     if (text == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
     /* Bounded length: reads at most GK__MIXTURE_TEXT_MAX + 1 characters, never past the NUL. */
-    while (len <= GK__MIXTURE_TEXT_MAX && text[len] != '\0') { ++len; }
+    while ((len <= GK__MIXTURE_TEXT_MAX) && (text[len] != '\0')) { ++len; }
     if (len > GK__MIXTURE_TEXT_MAX) { return GK_ERR_PARSE; }
     st = check_text(text, len, &tally, &rest);
     if (st != GK_OK) { return st; }
@@ -306,7 +320,7 @@ gk_status gk_mixture_normalize(gk_mixture *mix) {
 
     if (mix == NULL) { return GK_ERR_ARGUMENT; }
     n = mix->count;
-    if (n == 0u || n > GK_MIXTURE_MAX) { return GK_ERR_COMPOSITION; }
+    if ((n == 0u) || (n > GK__MIX_MAX)) { return GK_ERR_COMPOSITION; }
     for (i = 0; i < n; ++i) {
         if (mix->gas[i] == NULL) { return GK_ERR_ARGUMENT; }
     }

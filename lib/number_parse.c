@@ -11,6 +11,8 @@
  */
 #include "number_parse.h"
 
+#include <stdbool.h>
+
 #if GK_REAL_IS_FLOAT
 /* 10^0 ... 10^10 are exact in binary32 (5^10 = 9765625 < 2^24); IEEE 754 binary32. */
 #  define GK__POW10_MAX 10
@@ -40,89 +42,139 @@ static const gk_real gk__pow10[GK__POW10_MAX + 1] = {
 /* An explicit exponent is accumulated up to this magnitude and then saturates (no overflow). */
 #define GK__EXP_SATURATE 100000
 
-static int gk__is_digit(char c) { return (c >= '0' && c <= '9') ? 1 : 0; }
+static bool gk__is_digit(char c) { return (c >= '0') && (c <= '9'); }
+
+/* The value of a digit character, 0 for any other character (the caller has checked). */
+static uint32_t gk__digit_value(char c) {
+    uint32_t v = 0u;
+    if ((c >= '0') && (c <= '9')) { v = (uint32_t)(unsigned char)c - 48u; /* '0' is 48 */ }
+    return v;
+}
 
 typedef struct gk__digits {
     uint64_t mantissa;
     int32_t exp10;
-    int kept;        /* significant digits in mantissa */
-    int dropped;     /* significant digits beyond GK__KEEP_DIGITS */
-    int round_digit; /* first dropped digit */
-    int sticky;      /* a non-zero digit after the first dropped one */
-    int count;       /* every mantissa digit character read */
+    int32_t kept;         /* significant digits in mantissa */
+    int32_t dropped;      /* significant digits beyond GK__KEEP_DIGITS */
+    uint32_t round_digit; /* first dropped digit */
+    bool sticky;          /* a non-zero digit after the first dropped one */
+    int32_t count;        /* every mantissa digit character read, <= GK__DECIMAL_MAX_DIGITS */
 } gk__digits;
 
-static void gk__take_digit(gk__digits *s, int d, int in_fraction) {
+/* Adds one mantissa digit d (0 ... 9). Called at most GK__DECIMAL_MAX_DIGITS times per number,
+   so every counter, and exp10 (one step per digit), stays within +-GK__DECIMAL_MAX_DIGITS. */
+static void gk__take_digit(gk__digits *s, uint32_t d, bool in_fraction) {
     s->count += 1;
-    if (s->kept == 0 && d == 0) { /* leading zero: not significant */
+    if ((s->kept == 0) && (d == 0u)) { /* leading zero: not significant */
         if (in_fraction) { s->exp10 -= 1; }
-        return;
-    }
-    if (s->kept < GK__KEEP_DIGITS) {
-        s->mantissa = s->mantissa * 10u + (uint64_t)d;
+    } else if (s->kept < GK__KEEP_DIGITS) {
+        s->mantissa = (s->mantissa * 10u) + (uint64_t)d;
         s->kept += 1;
         if (in_fraction) { s->exp10 -= 1; }
-        return;
+    } else {
+        if (s->dropped == 0) {
+            s->round_digit = d;
+        } else if (d != 0u) {
+            s->sticky = true;
+        } else {
+            /* a dropped zero after the first dropped digit changes nothing */
+        }
+        s->dropped += 1;
+        if (!in_fraction) { s->exp10 += 1; /* a dropped integer digit still scales */ }
     }
-    if (s->dropped == 0) {
-        s->round_digit = d;
-    } else if (d != 0) {
-        s->sticky = 1;
+}
+
+/* Reads the digits of text[*i .. limit) into s; at most GK__DECIMAL_MAX_DIGITS digits in all
+   (false when there are more: a malformed number). The loop looks at no more than
+   GK__DECIMAL_MAX_DIGITS + 1 characters. */
+static bool gk__scan_digits(const char *text, size_t limit, size_t *i, gk__digits *s,
+                            bool in_fraction) {
+    size_t k = *i;
+    bool ok = true;
+    bool more = true;
+    int32_t n;
+    for (n = 0; (n <= GK__DECIMAL_MAX_DIGITS) && more; ++n) {
+        if ((k < limit) && gk__is_digit(text[k])) {
+            if (s->count >= GK__DECIMAL_MAX_DIGITS) {
+                ok = false;
+                more = false;
+            } else {
+                gk__take_digit(s, gk__digit_value(text[k]), in_fraction);
+                k += 1u;
+            }
+        } else {
+            more = false;
+        }
     }
-    s->dropped += 1;
-    if (!in_fraction) { s->exp10 += 1; /* a dropped integer digit still scales */ }
+    *i = k;
+    return ok;
+}
+
+/* Reads the digits of an exponent from text[*i .. limit) into *e (saturating at
+   GK__EXP_SATURATE, so no overflow whatever the length). False when there is no digit. */
+static bool gk__scan_exponent_digits(const char *text, size_t limit, size_t *i, int32_t *e) {
+    size_t k = *i;
+    int32_t v = 0;
+    bool any = false;
+    while ((k < limit) && gk__is_digit(text[k])) {
+        if (v < (GK__EXP_SATURATE / 10)) {
+            v = (v * 10) + (int32_t)gk__digit_value(text[k]);
+        } else {
+            v = GK__EXP_SATURATE;
+        }
+        any = true;
+        k += 1u;
+    }
+    *i = k;
+    *e = v;
+    return any;
+}
+
+/* An optional sign at text[*i]: true for '-' (the position moves past a sign). */
+static bool gk__scan_sign(const char *text, size_t limit, size_t *i) {
+    bool negative = false;
+    if ((*i < limit) && ((text[*i] == '+') || (text[*i] == '-'))) {
+        negative = text[*i] == '-';
+        *i += 1u;
+    }
+    return negative;
+}
+
+/* The exponent part at text[*i], if any: (e|E) [+|-] digits, added to *exp10. False for an
+   exponent marker without digits ("1e", "1e+"). |*exp10| <= GK__DECIMAL_MAX_DIGITS on entry and
+   the digits saturate at GK__EXP_SATURATE, so the sum cannot overflow. */
+static bool gk__scan_exponent(const char *text, size_t limit, size_t *i, int32_t *exp10) {
+    int32_t e = 0;
+    bool e_negative;
+    bool ok = true;
+    if ((*i < limit) && ((text[*i] == 'e') || (text[*i] == 'E'))) {
+        *i += 1u;
+        e_negative = gk__scan_sign(text, limit, i);
+        ok = gk__scan_exponent_digits(text, limit, i, &e);
+        if (ok) { *exp10 += e_negative ? -e : e; }
+    }
+    return ok;
 }
 
 gk_status gk__decimal_scan(const char *text, size_t limit, gk__decimal *out, size_t *used) {
-    gk__digits s = { 0u, 0, 0, 0, 0, 0, 0 };
+    gk__digits s = { 0u, 0, 0, 0, 0u, false, 0 };
     size_t i = 0;
-    int negative = 0;
-    int mantissa_digits = 0;
+    bool negative;
 
-    if (text == NULL || out == NULL || used == NULL) { return GK_ERR_ARGUMENT; }
+    if ((text == NULL) || (out == NULL) || (used == NULL)) { return GK_ERR_ARGUMENT; }
 
-    if (i < limit && (text[i] == '+' || text[i] == '-')) {
-        negative = (text[i] == '-') ? 1 : 0;
-        i += 1;
+    negative = gk__scan_sign(text, limit, &i);
+    if (!gk__scan_digits(text, limit, &i, &s, false)) { return GK_ERR_PARSE; }
+    if ((i < limit) && (text[i] == '.')) {
+        i += 1u;
+        if (!gk__scan_digits(text, limit, &i, &s, true)) { return GK_ERR_PARSE; }
     }
-    while (i < limit && gk__is_digit(text[i])) {
-        if (s.count >= GK__DECIMAL_MAX_DIGITS) { return GK_ERR_PARSE; }
-        gk__take_digit(&s, text[i] - '0', 0);
-        mantissa_digits += 1;
-        i += 1;
-    }
-    if (i < limit && text[i] == '.') {
-        i += 1;
-        while (i < limit && gk__is_digit(text[i])) {
-            if (s.count >= GK__DECIMAL_MAX_DIGITS) { return GK_ERR_PARSE; }
-            gk__take_digit(&s, text[i] - '0', 1);
-            mantissa_digits += 1;
-            i += 1;
-        }
-    }
-    if (mantissa_digits == 0) { return GK_ERR_PARSE; /* "", "+", ".", "e5" */ }
-
-    if (i < limit && (text[i] == 'e' || text[i] == 'E')) {
-        int32_t e = 0;
-        int e_negative = 0;
-        int e_digits = 0;
-        i += 1;
-        if (i < limit && (text[i] == '+' || text[i] == '-')) {
-            e_negative = (text[i] == '-') ? 1 : 0;
-            i += 1;
-        }
-        while (i < limit && gk__is_digit(text[i])) {
-            if (e < GK__EXP_SATURATE) { e = e * 10 + (int32_t)(text[i] - '0'); }
-            e_digits += 1;
-            i += 1;
-        }
-        if (e_digits == 0) { return GK_ERR_PARSE; /* "1e", "1e+" */ }
-        s.exp10 += e_negative ? -e : e;
-    }
+    if (s.count == 0) { return GK_ERR_PARSE; /* "", "+", ".", "e5" */ }
+    if (!gk__scan_exponent(text, limit, &i, &s.exp10)) { return GK_ERR_PARSE; /* "1e", "1e+" */ }
 
     /* Round half to even on the dropped digits (only matters below 1e-18 relative). */
-    if (s.dropped > 0 &&
-        (s.round_digit > 5 || (s.round_digit == 5 && (s.sticky || (s.mantissa & 1u) != 0u)))) {
+    if ((s.dropped > 0) && ((s.round_digit > 5u) ||
+                            ((s.round_digit == 5u) && (s.sticky || ((s.mantissa & 1u) != 0u))))) {
         s.mantissa += 1u;
     }
 
@@ -133,10 +185,54 @@ gk_status gk__decimal_scan(const char *text, size_t limit, gk__decimal *out, siz
     return GK_OK;
 }
 
+/* Largest r for which r * f stays finite, with a margin of 4 units of rounding so that the
+   product cannot round up past the largest gk_real (f >= 1). */
+static gk_real gk__mul_limit(gk_real f) {
+    return (GK_REAL_MAX / f) * (GK_LIT(1.0) - (GK_LIT(4.0) * GK_REAL_EPS));
+}
+
+/* r * 10^e for r >= 0 and e >= 0, in steps of 10^GK__POW10_MAX; GK_ERR_RANGE (and *r unchanged)
+   when the product would overflow, which is decided before each step, so no step yields an
+   infinity. A result within 4 units of rounding below the largest gk_real counts as overflow. */
+static gk_status gk__scale_up(gk_real *r, int32_t e) {
+    const int32_t steps = e / GK__POW10_MAX; /* e >= 0 */
+    const int32_t rest = e % GK__POW10_MAX;  /* 0 ... GK__POW10_MAX - 1 */
+    gk_real v = *r;
+    int32_t k;
+    gk_status st = GK_OK;
+    for (k = 0; (k < steps) && (st == GK_OK); ++k) {
+        if (v <= gk__mul_limit(gk__pow10[GK__POW10_MAX])) {
+            v *= gk__pow10[GK__POW10_MAX];
+        } else {
+            st = GK_ERR_RANGE;
+        }
+    }
+    if (st == GK_OK) {
+        if (v <= gk__mul_limit(gk__pow10[rest])) {
+            *r = v * gk__pow10[rest]; /* 10^0 = 1 is exact: the same value as without it */
+        } else {
+            st = GK_ERR_RANGE;
+        }
+    }
+    return st;
+}
+
+/* r / 10^(-e) for e < 0, in steps of 10^GK__POW10_MAX (a quotient that underflows becomes 0). */
+static gk_real gk__scale_down(gk_real r, int32_t e) {
+    gk_real v = r;
+    int32_t k = -e;
+    while (k > GK__POW10_MAX) {
+        v /= gk__pow10[GK__POW10_MAX];
+        k -= GK__POW10_MAX;
+    }
+    return v / gk__pow10[k];
+}
+
 gk_status gk__decimal_to_real(gk__decimal d, int32_t extra_exp10, gk_real *out) {
     gk_real r;
     int64_t total;
     int32_t e;
+    gk_status st = GK_OK;
 
     if (out == NULL) { return GK_ERR_ARGUMENT; }
     if (d.mantissa == 0u) {
@@ -152,20 +248,15 @@ gk_status gk__decimal_to_real(gk__decimal d, int32_t extra_exp10, gk_real *out) 
     e = (int32_t)total;
 
     r = (gk_real)d.mantissa; /* exact on the fast path, else 0.5 ulp */
-    if (d.mantissa <= GK__EXACT_INT_MAX && e >= -GK__POW10_MAX && e <= GK__POW10_MAX) {
-        r = (e >= 0) ? r * gk__pow10[e] : r / gk__pow10[-e]; /* one correct rounding */
+    if ((d.mantissa <= GK__EXACT_INT_MAX) && (e >= -GK__POW10_MAX) && (e <= GK__POW10_MAX)) {
+        /* one correct rounding; at most 2^53 10^22 (binary32: 2^24 10^10): finite */
+        r = (e >= 0) ? (r * gk__pow10[e]) : (r / gk__pow10[-e]);
+    } else if (e >= 0) {
+        st = gk__scale_up(&r, e);
     } else {
-        while (e > GK__POW10_MAX) {
-            r *= gk__pow10[GK__POW10_MAX];
-            e -= GK__POW10_MAX;
-        }
-        while (e < -GK__POW10_MAX) {
-            r /= gk__pow10[GK__POW10_MAX];
-            e += GK__POW10_MAX;
-        }
-        r = (e >= 0) ? r * gk__pow10[e] : r / gk__pow10[-e];
+        r = gk__scale_down(r, e);
     }
-    if (!gk_finite(r)) { return GK_ERR_RANGE; }
+    if (st != GK_OK) { return st; }
     *out = d.negative ? -r : r;
     return GK_OK;
 }

@@ -14,6 +14,7 @@
 #ifndef GASKIT_NUMBER_PARSE_H
 #define GASKIT_NUMBER_PARSE_H
 
+#include <stdbool.h>
 #include <stdint.h>
 #include "gk_internal.h"
 
@@ -27,7 +28,7 @@
 typedef struct gk__decimal {
     uint64_t mantissa;
     int32_t exp10;
-    int negative;
+    bool negative;
 } gk__decimal;
 
 /*
@@ -48,8 +49,9 @@ gk_status gk__decimal_scan(const char *text, size_t limit, gk__decimal *out, siz
  * Otherwise the error is below 1 ulp for a total exponent within that range and grows by at
  * most 0.5 ulp per further factor 10^22 (10^10), i.e. a few ulp at the extremes; results in
  * the subnormal range lose relative accuracy as subnormals do.
- * Returns GK_OK, GK_ERR_ARGUMENT (NULL out) or GK_ERR_RANGE (the magnitude overflows gk_real;
- * *out untouched). A value that underflows becomes 0. A negative zero becomes +0.
+ * Returns GK_OK, GK_ERR_ARGUMENT (NULL out) or GK_ERR_RANGE (the magnitude overflows gk_real, or
+ * comes within 4 units of rounding of the largest gk_real; *out untouched). No step of the
+ * conversion yields an infinity. A value that underflows becomes 0. A negative zero becomes +0.
  */
 gk_status gk__decimal_to_real(gk__decimal d, int32_t extra_exp10, gk_real *out);
 

@@ -56,20 +56,12 @@ gk_status gk_reference_get(gk_reference_id id, gk_reference *out) {
 
 gk_status gk_reference_factor(gk_pressure p, gk_temperature t, gk_real z, gk_reference ref,
                               gk_real z_ref, gk_real *factor) {
-    gk_real f;
-    if (factor == NULL) { return GK_ERR_ARGUMENT; }
-    if (!gk_positive(p.pa) || !gk_positive(t.k) || !gk_positive(z) || !gk_positive(ref.p.pa) ||
-        !gk_positive(ref.t.k) || !gk_positive(z_ref)) {
-        return GK_ERR_DOMAIN;
-    }
     /* factor = (p / p_ref) (T_ref / T) (z_ref / z): V_ref = n z_ref R T_ref / p_ref and
-       V = n z R T / p for the same amount n. Three ratios, each finite for finite positive
-       inputs unless it overflows or underflows; both give GK_ERR_RANGE, and so does a factor
-       below the smallest normal number (digits lost; the rule of gk_scaled.h). */
-    f = (p.pa / ref.p.pa) * (ref.t.k / t.k) * (z_ref / z);
-    if (!(f >= GK_REAL_MIN_NORMAL && f <= GK_REAL_MAX)) { /* also NaN, 0 and inf */
-        return GK_ERR_RANGE;
-    }
-    *factor = f;
-    return GK_OK;
+       V = n z R T / p for the same amount n. Three ratios through gk_scaled_eval() (the same
+       product, rounding for rounding, where every factor is within 2^+-170; frexp/ldexp beyond),
+       so no step over- or underflows: a factor that overflows or falls below the smallest
+       normal number is GK_ERR_RANGE (the rule of gk_scaled.h). */
+    const gk_real num[3] = { p.pa, ref.t.k, z_ref };
+    const gk_real den[3] = { ref.p.pa, t.k, z };
+    return gk_scaled_eval(num, den, 3, factor);
 }

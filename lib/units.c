@@ -17,22 +17,23 @@
  * Every public _from / _to function is a one-line wrapper over quantity_from() and
  * quantity_to().
  */
+#include <stdbool.h>
+
 #include "gk_scaled.h"
 
-/* Dimensions; the typed functions check that a unit belongs to theirs. */
-enum gk_dim {
-    GK_DIM_PRESSURE,
-    GK_DIM_TEMPERATURE,
-    GK_DIM_VOLUME,
-    GK_DIM_AMOUNT,
-    GK_DIM_MOLAR_MASS,
-    GK_DIM_MOLAR_VOLUME,
-    GK_DIM_DENSITY,
-    GK_DIM_SPEED,
-    GK_DIM_MASS,
-    GK_DIM_VOLUME_FLOW,
-    GK_DIM_MASS_FLOW
-};
+/* Dimensions (unsigned constants, the type of a row's dim field); the typed functions check
+ * that a unit belongs to theirs. */
+#define GK_DIM_PRESSURE 0u
+#define GK_DIM_TEMPERATURE 1u
+#define GK_DIM_VOLUME 2u
+#define GK_DIM_AMOUNT 3u
+#define GK_DIM_MOLAR_MASS 4u
+#define GK_DIM_MOLAR_VOLUME 5u
+#define GK_DIM_DENSITY 6u
+#define GK_DIM_SPEED 7u
+#define GK_DIM_MASS 8u
+#define GK_DIM_VOLUME_FLOW 9u
+#define GK_DIM_MASS_FLOW 10u
 
 /* The symbol is held in the row (the longest, "cm3/mol" and "ft3/min", has 7 characters), so
  * a row needs no pointer and the table no separate strings (firmware size). In the float build
@@ -48,7 +49,7 @@ typedef struct gk_unit_row {
     gk_real num; /* one unit (after the offset) is num / den SI units */
     gk_real den;
 #endif
-    unsigned char dim; /* enum gk_dim */
+    unsigned char dim; /* GK_DIM_... */
 } gk_unit_row;
 
 /* clang-format off */
@@ -67,7 +68,7 @@ typedef struct gk_unit_row {
 /* SP 811 = NIST Special Publication 811 (2008 edition), Appendix B.8 / B.9 (factors in
  * alphabetical order / by kind of quantity). Where SP 811 prints a rounded factor the exact
  * definition it rests on is used and the printed figure given for comparison. */
-static const gk_unit_row gk_units[] = {
+static const gk_unit_row gk_units[GK_UNIT_COUNT] = {
     /* ---- pressure, SI unit Pa */
     [GK_UNIT_PA]   = ROW(PRESSURE, "Pa",   1.0, 1.0),
     [GK_UNIT_HPA]  = ROW(PRESSURE, "hPa",  100.0, 1.0),          /* SI prefix hecto */
@@ -152,25 +153,26 @@ static const gk_unit_row gk_units[] = {
     [GK_UNIT_LB_PER_H]  = ROW(MASS_FLOW, "lb/h",  0.45359237, 3600.0),
 };
 
-/* Compile-time check (C99 has no _Static_assert): one row per gk_unit. */
-typedef char gk_units_table_has_one_row_per_unit
-    [(sizeof gk_units / sizeof gk_units[0] == (size_t)GK_UNIT_COUNT) ? 1 : -1];
+/* The table is sized by GK_UNIT_COUNT and filled by designated initialisers in enum order; a row
+   left out would have an empty symbol, which tests/test_units.c (table_covers_every_unit)
+   rejects. */
 
 /* Extra spellings accepted by gk_unit_parse() besides the symbols of the table. */
 /* The text is held in the entry (the longest, "cm^3/mol" and "ft^3/min", has 8 bytes): no
    pointers and no separate strings (firmware size). */
-typedef struct gk_unit_alias { char text[9]; unsigned char unit; } gk_unit_alias;
+#define GK_UNIT_ALIAS_SIZE 9
+typedef struct gk_unit_alias { char text[GK_UNIT_ALIAS_SIZE]; unsigned char unit; } gk_unit_alias;
 
 static const gk_unit_alias gk_unit_aliases[] = {
     { "torr", GK_UNIT_TORR },
     { "kgf/cm2", GK_UNIT_AT },
     { "psia", GK_UNIT_PSI },            /* absolute psi: gaskit pressures are absolute */
     { "lbf/in2", GK_UNIT_PSI },
-    { "\xC2\xB0" "C", GK_UNIT_DEGC },   /* U+00B0 DEGREE SIGN, C */
+    { "\xC2\xB0\x43", GK_UNIT_DEGC },   /* U+00B0 DEGREE SIGN, C (0x43) */
     { "\xE2\x84\x83", GK_UNIT_DEGC },   /* U+2103 DEGREE CELSIUS */
-    { "\xC2\xB0" "F", GK_UNIT_DEGF },   /* U+00B0 DEGREE SIGN, F */
+    { "\xC2\xB0\x46", GK_UNIT_DEGF },   /* U+00B0 DEGREE SIGN, F (0x46) */
     { "\xE2\x84\x89", GK_UNIT_DEGF },   /* U+2109 DEGREE FAHRENHEIT */
-    { "\xC2\xB0" "R", GK_UNIT_DEGR },   /* U+00B0 DEGREE SIGN, R */
+    { "\xC2\xB0\x52", GK_UNIT_DEGR },   /* U+00B0 DEGREE SIGN, R (0x52) */
     { "m^3", GK_UNIT_M3 },
     { "l", GK_UNIT_L },
     { "dm3", GK_UNIT_L },
@@ -197,8 +199,8 @@ static const gk_unit_alias gk_unit_aliases[] = {
 
 /* Dimensions whose values must be > 0 in the typed functions (absolute quantities); speed and
  * the flows may take any finite value (direction of flow or motion). */
-static int gk_dim_positive(enum gk_dim dim) {
-    return (dim == GK_DIM_SPEED || dim == GK_DIM_VOLUME_FLOW || dim == GK_DIM_MASS_FLOW) ? 0 : 1;
+static bool gk_dim_positive(unsigned int dim) {
+    return (dim != GK_DIM_SPEED) && (dim != GK_DIM_VOLUME_FLOW) && (dim != GK_DIM_MASS_FLOW);
 }
 
 /* The row of a unit, or NULL for a value outside the enum. */
@@ -232,27 +234,64 @@ static gk_real gk_unit_offset(const gk_unit_row *u) {
 #  define GK_SCALE_LO GK_LIT(0x1p-900)
 #endif
 
+/* Binary exponents of the normal range: m 2^k with 0.5 <= |m| < 1 is finite for k <= MAX_EXP and
+ * normal for k >= MIN_EXP (C99 5.2.4.2.2: DBL_MAX_EXP 1024, DBL_MIN_EXP -1021; FLT_MAX_EXP 128,
+ * FLT_MIN_EXP -125 for IEEE 754 binary64 / binary32). */
+#if GK_REAL_IS_FLOAT
+#  define GK_UNIT_MAX_EXP 128
+#  define GK_UNIT_MIN_EXP (-125)
+#else
+#  define GK_UNIT_MAX_EXP 1024
+#  define GK_UNIT_MIN_EXP (-1021)
+#endif
+/* Any binary exponent frexp() returns for a finite value (subnormals included) lies inside. */
+#define GK_UNIT_EXP_BOUND 1100
+
 /* x * num / den without intermediate over/underflow (signed x, num and den > 0).
  * GK_ERR_RANGE when the result overflows, or when a non-zero x gives a result below the
- * smallest normal number. In the fast path x * (num / den) is computed directly; since scaling
- * by a power of two commutes with rounding in the normal range, it gives bit for bit the
- * result of the frexp/ldexp path. */
+ * smallest normal number. In the fast path |x| * (num / den) is computed and given the sign of
+ * x afterwards (round to nearest is symmetric, so this is bit for bit x * (num / den)); since
+ * scaling by a power of two commutes with rounding in the normal range, it also gives bit for
+ * bit the result of the frexp/ldexp path. The slow path brings the product of the mantissas
+ * back into [0.5, 1) and decides overflow and underflow on the exponent before scaling, so no
+ * step yields an infinity. */
 static gk_status gk_scale(gk_real x, gk_real num, gk_real den, gk_real *out) {
     const gk_real ax = gk_fabs(x);
-    int ex = 0, en = 0, ed = 0;
-    gk_real fx, fn, fd, r;
-    if ((ax >= GK_SCALE_LO && ax <= GK_SCALE_HI) || !(ax > GK_LIT(0.0))) {
-        *out = x * (num / den);
-        return GK_OK;
+    const gk_real ratio = num / den;
+    int ex = 0;
+    int en = 0;
+    int ed = 0;
+    int em = 0;
+    int k;
+    gk_real fx;
+    gk_real fn;
+    gk_real fd;
+    gk_real m;
+    gk_status s = GK_OK;
+    if ((ax >= GK_SCALE_LO) && (ax <= GK_SCALE_HI)) {
+        const gk_real r = ax * ratio;
+        *out = (x < GK_LIT(0.0)) ? -r : r;
+    } else if (!(ax > GK_LIT(0.0))) {
+        *out = x * GK_LIT(0.0); /* x is +0 or -0: keeps its sign */
+    } else {
+        fx = gk_frexp(x, &ex);
+        fn = gk_frexp(num, &en);
+        fd = gk_frexp(den, &ed);
+        m = gk_frexp(fx * (fn / fd), &em); /* |fx fn / fd| in (0.25, 2]: em in -1 ... 2 */
+        if ((ex < -GK_UNIT_EXP_BOUND) || (ex > GK_UNIT_EXP_BOUND) || (en < -GK_UNIT_EXP_BOUND) ||
+            (en > GK_UNIT_EXP_BOUND) || (ed < -GK_UNIT_EXP_BOUND) || (ed > GK_UNIT_EXP_BOUND) ||
+            (em < -2) || (em > 2)) {
+            s = GK_ERR_RANGE; /* not reached for finite x, num, den: frexp's exponent range */
+        } else {
+            k = ((ex + en) - ed) + em;
+            if ((k > GK_UNIT_MAX_EXP) || (k < GK_UNIT_MIN_EXP)) {
+                s = GK_ERR_RANGE; /* overflow, or below the smallest normal number */
+            } else {
+                *out = gk_ldexp(m, k); /* exact: the result is normal */
+            }
+        }
     }
-    fx = gk_frexp(x, &ex);
-    fn = gk_frexp(num, &en);
-    fd = gk_frexp(den, &ed);
-    r = gk_ldexp(fx * (fn / fd), ex + en - ed);
-    /* here x != 0 (0 takes the fast path): an r of 0 has underflowed as a subnormal has */
-    if (!(gk_fabs(r) >= GK_REAL_MIN_NORMAL && gk_fabs(r) <= GK_REAL_MAX)) { return GK_ERR_RANGE; }
-    *out = r;
-    return GK_OK;
+    return s;
 }
 
 /* Value in unit row u -> SI value. Temperature below 0 K is GK_ERR_DOMAIN. */
@@ -260,7 +299,7 @@ static gk_status gk_to_si(const gk_unit_row *u, gk_real value, gk_real *si) {
     gk_real x;
     if (!gk_finite(value)) { return GK_ERR_DOMAIN; }
     x = value + gk_unit_offset(u); /* offset <= 459.67: cannot overflow a finite value */
-    if (u->dim == GK_DIM_TEMPERATURE && x < GK_LIT(0.0)) { return GK_ERR_DOMAIN; }
+    if ((unsigned int)u->dim == GK_DIM_TEMPERATURE && x < GK_LIT(0.0)) { return GK_ERR_DOMAIN; }
     return gk_scale(x, ROW_TO_SI(u), si);
 }
 
@@ -269,7 +308,7 @@ static gk_status gk_from_si(const gk_unit_row *u, gk_real si, gk_real *value) {
     gk_real x = GK_LIT(0.0);
     gk_status s;
     if (!gk_finite(si)) { return GK_ERR_DOMAIN; }
-    if (u->dim == GK_DIM_TEMPERATURE && si < GK_LIT(0.0)) { return GK_ERR_DOMAIN; }
+    if ((unsigned int)u->dim == GK_DIM_TEMPERATURE && si < GK_LIT(0.0)) { return GK_ERR_DOMAIN; }
     s = gk_scale(si, ROW_FROM_SI(u), &x);
     if (s != GK_OK) { return s; }
     *value = x - gk_unit_offset(u);
@@ -289,11 +328,11 @@ gk_status gk_convert(gk_real value, gk_unit from, gk_unit to, gk_real *out) {
 }
 
 /* Typed constructor: value in unit (of dimension dim) -> SI value in *out. */
-static gk_status quantity_from(gk_real value, gk_unit unit, enum gk_dim dim, gk_real *out) {
+static gk_status quantity_from(gk_real value, gk_unit unit, unsigned int dim, gk_real *out) {
     const gk_unit_row *u = gk_unit_row_of(unit);
     gk_real si = GK_LIT(0.0);
     gk_status s;
-    if (out == NULL || u == NULL || u->dim != dim) { return GK_ERR_ARGUMENT; }
+    if (out == NULL || u == NULL || (unsigned int)u->dim != dim) { return GK_ERR_ARGUMENT; }
     if (!gk_finite(value)) { return GK_ERR_DOMAIN; }
     /* sign first, so a tiny negative value is a domain error rather than an underflow */
     if (gk_dim_positive(dim) && dim != GK_DIM_TEMPERATURE && !(value > GK_LIT(0.0))) {
@@ -307,11 +346,11 @@ static gk_status quantity_from(gk_real value, gk_unit unit, enum gk_dim dim, gk_
 }
 
 /* Typed accessor: SI value si (of dimension dim) -> value in unit, in *out. */
-static gk_status quantity_to(gk_real si, gk_unit unit, enum gk_dim dim, gk_real *out) {
+static gk_status quantity_to(gk_real si, gk_unit unit, unsigned int dim, gk_real *out) {
     const gk_unit_row *u = gk_unit_row_of(unit);
     gk_real r = GK_LIT(0.0);
     gk_status s;
-    if (out == NULL || u == NULL || u->dim != dim) { return GK_ERR_ARGUMENT; }
+    if (out == NULL || u == NULL || (unsigned int)u->dim != dim) { return GK_ERR_ARGUMENT; }
     if (!gk_finite(si)) { return GK_ERR_DOMAIN; }
     if (gk_dim_positive(dim) && !(si > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
     s = gk_from_si(u, si, &r);
@@ -319,26 +358,37 @@ static gk_status quantity_to(gk_real si, gk_unit unit, enum gk_dim dim, gk_real 
     return s;
 }
 
-/* Exact string equality; reads neither string past its NUL. */
-static int gk_text_equal(const char *a, const char *b) {
-    while (*a != '\0' && *a == *b) {
-        ++a;
-        ++b;
+/* Does the caller's text equal the table entry (a NUL-terminated text in entry[0 .. size-1])?
+ * Reads the caller's text only up to the first difference, so never past its NUL, and never
+ * more than size bytes (9 at most: the bound gk_unit_parse() documents). */
+static bool gk_unit_text_is(const char *text, const char *entry, size_t size) {
+    size_t i = 0;
+    bool equal = false;
+    bool done = false;
+    while (!done && (i < size)) {
+        if (text[i] != entry[i]) {
+            done = true;
+        } else if (entry[i] == '\0') {
+            equal = true;
+            done = true;
+        } else {
+            ++i;
+        }
     }
-    return *a == *b;
+    return equal;
 }
 
 gk_status gk_unit_parse(const char *symbol, gk_unit *out) {
     size_t i;
-    if (symbol == NULL || out == NULL) { return GK_ERR_ARGUMENT; }
-    for (i = 0; i < sizeof gk_units / sizeof gk_units[0]; ++i) {
-        if (gk_text_equal(symbol, gk_units[i].symbol)) {
+    if ((symbol == NULL) || (out == NULL)) { return GK_ERR_ARGUMENT; }
+    for (i = 0; i < (sizeof gk_units / sizeof gk_units[0]); ++i) {
+        if (gk_unit_text_is(symbol, gk_units[i].symbol, GK_UNIT_SYMBOL_SIZE)) {
             *out = (gk_unit)i;
             return GK_OK;
         }
     }
-    for (i = 0; i < sizeof gk_unit_aliases / sizeof gk_unit_aliases[0]; ++i) {
-        if (gk_text_equal(symbol, gk_unit_aliases[i].text)) {
+    for (i = 0; i < (sizeof gk_unit_aliases / sizeof gk_unit_aliases[0]); ++i) {
+        if (gk_unit_text_is(symbol, gk_unit_aliases[i].text, GK_UNIT_ALIAS_SIZE)) {
             *out = (gk_unit)gk_unit_aliases[i].unit;
             return GK_OK;
         }
@@ -351,17 +401,41 @@ const char *gk_unit_symbol(gk_unit unit) {
     return u != NULL ? u->symbol : "?";
 }
 
+/* *sum = a + b for finite a, b, or GK_ERR_RANGE where it overflows, without producing an
+ * infinity. Within half the largest value the plain sum is finite. Otherwise the halves are
+ * added first: halving is exact for such large operands and the other one, if small, is
+ * absorbed by the rounding as it would be in a + b, so 2 (a/2 + b/2) is a + b bit for bit. */
+static gk_status gk_add_finite(gk_real a, gk_real b, gk_real *sum) {
+    const gk_real half_max = GK_REAL_MAX * GK_LIT(0.5);
+    gk_real h;
+    gk_status s = GK_OK;
+    if ((a >= -half_max) && (a <= half_max) && (b >= -half_max) && (b <= half_max)) {
+        *sum = a + b;
+    } else {
+        h = (a * GK_LIT(0.5)) + (b * GK_LIT(0.5));
+        if ((h >= -half_max) && (h <= half_max)) {
+            *sum = h * GK_LIT(2.0);
+        } else {
+            s = GK_ERR_RANGE;
+        }
+    }
+    return s;
+}
+
 gk_status gk_pressure_from_gauge(gk_real value, gk_unit unit, gk_pressure ambient,
                                  gk_pressure *out) {
     const gk_unit_row *u = gk_unit_row_of(unit);
-    gk_real delta = GK_LIT(0.0), p;
+    gk_real delta = GK_LIT(0.0);
+    gk_real p = GK_LIT(0.0);
     gk_status s;
-    if (out == NULL || u == NULL || u->dim != GK_DIM_PRESSURE) { return GK_ERR_ARGUMENT; }
+    if (out == NULL || u == NULL || (unsigned int)u->dim != GK_DIM_PRESSURE) {
+        return GK_ERR_ARGUMENT;
+    }
     if (!gk_finite(value) || !gk_positive(ambient.pa)) { return GK_ERR_DOMAIN; }
     s = gk_scale(value, ROW_TO_SI(u), &delta); /* a pressure difference: no offset */
     if (s != GK_OK) { return s; }
-    p = delta + ambient.pa;
-    if (!gk_finite(p)) { return GK_ERR_RANGE; }
+    s = gk_add_finite(delta, ambient.pa, &p);
+    if (s != GK_OK) { return s; }
     if (!(p > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
     if (gk_check_normal(p) != GK_OK) { return GK_ERR_RANGE; }
     out->pa = p;

@@ -22,6 +22,8 @@
  * relative (measured in tests/test_water.c over the whole curve); the sublimation equation to
  * ~2e-6 relative (see subl_ln_ratio()).
  */
+#include <stdbool.h>
+
 #include "gk_internal.h"
 
 /* IAPWS-IF97 (Revised Release 2007), Table 34: coefficients n1 ... n10 of region 4. */
@@ -121,35 +123,48 @@ static gk_real subl_ln_ratio(gk_real t, gk_real *dlnp_dt) {
 
 static gk_real subl_p(gk_real t) { return P_TRIPLE * gk_exp(subl_ln_ratio(t, NULL)); }
 
-/* Inverse of the sublimation curve for p in [p_subl(200 K), pt]: guarded Newton on ln p. */
-static gk_real subl_t(gk_real p_pa) {
+/* Steps of the frost-point inverse. Bisection halves the bracket [200 K, 273.16 K] and a Newton
+   step inside it converges quadratically; the stopping test (a step below 4 units of rounding of
+   T) needs at most 49 halvings of 73.16 K in binary64 (22 in binary32), so 60 steps are a safe
+   cap. A run that reaches it reports GK_ERR_NO_SOLUTION rather than an unconverged value. */
+#define SUBL_ITER_MAX 60
+/* A lower bound of d ln p_subl / dT over [200 K, 273.16 K] with a wide margin (the slope is
+   L_subl / (R T^2) = 0.08 ... 0.15 1/K there; common practice: Clausius-Clapeyron). */
+#define SUBL_SLOPE_MIN GK_LIT(0.01)
+
+/* Inverse of the sublimation curve for p in [p_subl(200 K), pt]: guarded Newton on ln p from
+   inside the bracket [200 K, 273.16 K]. GK_OK with *t_out; GK_ERR_NO_SOLUTION if SUBL_ITER_MAX
+   steps pass without the stopping test. */
+static gk_status subl_t(gk_real p_pa, gk_real *t_out) {
     const gk_real target = gk_log(p_pa / P_TRIPLE);
-    gk_real lo = T_LOW, hi = T_TRIPLE;
+    gk_real lo = T_LOW;
+    gk_real hi = T_TRIPLE;
     /* Fixed start inside the bracket (a design choice, not a published value); a Newton step
        that leaves the bracket is replaced by bisection below, so the start only sets the
        iteration count. */
     gk_real t = GK_LIT(250.0);
+    gk_real slope;
+    gk_real f;
+    gk_real next;
     int i;
-    for (i = 0; i < 60; ++i) {
-        gk_real slope;
-        const gk_real f = subl_ln_ratio(t, &slope) - target;
-        gk_real next;
+    bool converged = false;
+    for (i = 0; (i < SUBL_ITER_MAX) && !converged; ++i) {
+        f = subl_ln_ratio(t, &slope) - target;
         if (f > GK_LIT(0.0)) {
             hi = t;
         } else {
             lo = t;
         }
-        next = t - f / slope;
-        if (!(next > lo && next < hi)) { /* Newton step left the bracket: bisect */
-            next = GK_LIT(0.5) * (lo + hi);
-        }
-        if (gk_fabs(next - t) <= GK_LIT(4.0) * GK_REAL_EPS * t) {
-            t = next;
-            break;
-        }
+        /* Newton's step where the slope is safely positive (d ln p / dT is 0.08 ... 0.15 1/K on
+           this curve: above SUBL_SLOPE_MIN always), bisection where the step leaves the bracket */
+        next = (slope > SUBL_SLOPE_MIN) ? (t - (f / slope)) : t;
+        if (!((next > lo) && (next < hi))) { next = GK_LIT(0.5) * (lo + hi); }
+        converged = gk_fabs(next - t) <= (GK_LIT(4.0) * GK_REAL_EPS * t);
         t = next;
     }
-    return t;
+    if (!converged) { return GK_ERR_NO_SOLUTION; }
+    *t_out = t;
+    return GK_OK;
 }
 
 gk_status gk_water_vapour_pressure(gk_temperature t, gk_pressure *out) {
@@ -164,7 +179,8 @@ gk_status gk_water_vapour_pressure(gk_temperature t, gk_pressure *out) {
 }
 
 gk_status gk_water_saturation_temperature(gk_pressure p, gk_temperature *out) {
-    gk_real t;
+    gk_real t = GK_LIT(0.0);
+    gk_status s;
     if (out == NULL) { return GK_ERR_ARGUMENT; }
     if (!gk_positive(p.pa)) { return GK_ERR_DOMAIN; }
     if (p.pa >= P_TRIPLE) {
@@ -175,7 +191,8 @@ gk_status gk_water_saturation_temperature(gk_pressure p, gk_temperature *out) {
         if (t > T_CRIT) { t = T_CRIT; }
     } else {
         if (p.pa < P_LOW) { return GK_ERR_RANGE; }
-        t = subl_t(p.pa);
+        s = subl_t(p.pa, &t);
+        if (s != GK_OK) { return s; }
     }
     if (!gk_positive(t)) { return GK_ERR_RANGE; }
     out->k = t;
@@ -190,7 +207,7 @@ gk_status gk_dew_point(gk_pressure water_partial_pressure, gk_temperature *out) 
 
 gk_status gk_dry_gas_pressure(gk_pressure total, gk_temperature t, gk_real relative_humidity,
                               gk_pressure *out) {
-    gk_pressure pws;
+    gk_pressure pws = { GK_LIT(0.0) };
     gk_real pw;
     gk_status s;
     if (out == NULL) { return GK_ERR_ARGUMENT; }

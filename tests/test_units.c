@@ -100,6 +100,7 @@ static void table_covers_every_unit(void **state) {
         gk_unit back = (gk_unit)-7;
         assert_non_null(sym);
         assert_string_not_equal(sym, "?");
+        assert_true(sym[0] != '\0'); /* every row of the table is filled */
         /* ASCII only */
         for (const char *c = sym; *c != '\0'; ++c) assert_true((unsigned char)*c < 128u);
         /* the symbol parses back to the same unit, so symbols are unique */
@@ -413,6 +414,19 @@ static void gauge_pressure(void **state) {
     assert_rel(p.pa, 41325.0, GK_TOL(1e-14, 4e-7));
     /* 30 psig at one standard atmosphere: 30 psi x 6894.757293168361 Pa + 101325 Pa (psi exact from
      * NIST SP 811: lbf = 0.45359237 kg x 9.80665 m/s2, in = 0.0254 m) */
+    /* near the largest value (DBL_MAX / FLT_MAX, IEEE 754): a sum that rounds to it is GK_OK
+       (computed without an intermediate infinity), one beyond it GK_ERR_RANGE */
+    {
+        const gk_real big = (gk_real)GK_TOL(1.7976931348623157e308, 3.4028234663852886e38);
+        const gk_pressure huge_ambient = { big };
+        gk_pressure q = { GK_SENTINEL };
+        assert_status(gk_pressure_from_gauge(big, GK_UNIT_PA, ambient, &q), GK_OK);
+        /* IEEE 754 round to nearest: 101325 Pa is far below half an ulp of the largest value */
+        assert_true(!(q.pa < big) && !(q.pa > big));
+        q.pa = GK_SENTINEL;
+        assert_status(gk_pressure_from_gauge(big, GK_UNIT_PA, huge_ambient, &q), GK_ERR_RANGE);
+        assert_true(!(q.pa < GK_SENTINEL) && !(q.pa > GK_SENTINEL));
+    }
     assert_status(gk_pressure_from_gauge((gk_real)30.0, GK_UNIT_PSI, ambient, &p), GK_OK);
     assert_rel(p.pa, 30.0 * 6894.757293168361 + 101325.0, GK_TOL(1e-14, 2e-7));
     /* zero reading: the ambient itself */
@@ -488,6 +502,21 @@ static void parse_rejects(void **state) {
     const char buf[5] = { 'k', '\0', 'P', 'a', '\0' };
     gk_unit u = (gk_unit)-7;
     assert_status(gk_unit_parse(buf, &u), GK_ERR_NOT_FOUND);
+    /* the longest spellings with one character more, and a long text: compared with at most
+       the 9 bytes of a table entry, never matched */
+    assert_status(gk_unit_parse("cm^3/molX", &u), GK_ERR_NOT_FOUND);
+    assert_status(gk_unit_parse("ft3/minute", &u), GK_ERR_NOT_FOUND);
+    {
+        char longtext[300];
+        memset(longtext, 'k', sizeof longtext - 1u);
+        longtext[sizeof longtext - 1u] = '\0';
+        assert_status(gk_unit_parse(longtext, &u), GK_ERR_NOT_FOUND);
+    }
+    assert_int_equal((int)u, -7);
+    /* the longest spelling as a text of its own matches */
+    assert_status(gk_unit_parse("cm^3/mol", &u), GK_OK);
+    assert_int_equal((int)u, (int)GK_UNIT_CM3_PER_MOL);
+    u = (gk_unit)-7;
     /* NULL */
     assert_status(gk_unit_parse(NULL, &u), GK_ERR_ARGUMENT);
     assert_status(gk_unit_parse("kPa", NULL), GK_ERR_ARGUMENT);

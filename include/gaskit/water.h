@@ -38,6 +38,8 @@ GK_API gk_status gk_water_vapour_pressure(gk_temperature t, gk_pressure *out);
  * @retval GK_ERR_ARGUMENT @p out is NULL.
  * @retval GK_ERR_DOMAIN   p not finite or not > 0.
  * @retval GK_ERR_RANGE    p outside the pressures of the curves (200 K ... 647.096 K).
+ * @retval GK_ERR_NO_SOLUTION the frost-point iteration (below the triple point) stopped at its
+ *                           step cap without converging (not expected; never seen in tests).
  */
 GK_API gk_status gk_water_saturation_temperature(gk_pressure p, gk_temperature *out);
 
