@@ -654,7 +654,8 @@ gk_status gk__hz_prepare(const gk__hz_model *m, gk_real p, gk_real t, gk__hz_pre
 }
 
 gk_status gk__hz_solve_prepared(const gk__hz_prepared *pr, gk_root root, gk_eos_result *out) {
-    hz_rootrec rr[2];
+    hz_rootrec rr[2] = { { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) },
+                         { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) } };
     int liquid = 0, gas;
     bool split;
     if (pr == NULL || out == NULL || !hz_root_valid(root)) { return GK_ERR_ARGUMENT; }

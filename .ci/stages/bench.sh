@@ -17,3 +17,12 @@ awk '
   END { exit bad }' build-bench/bench.txt
 pr=$(grep -m1 '^Peng-Robinson ' build-bench/bench.txt | awk '{print $2 " ns vs GSL " $3 " ns, ratio " $4 " (median " $5 "), max error off the critical point " $8}')
 echo "summary: bench: Peng-Robinson 0.45<Tr<3, 0.001<Pr<10: gaskit $pr (goal ratio <= 0.8)"
+# The reference-grade models (bench/bench_models.c): ns per Span-Wagner state beside a
+# Peng-Robinson state of the same gas and states, and the hydrogen equation; figures only.
+if cmake --build build-bench -j2 --target bench_models; then
+  build-bench/bench/bench_models | tee build-bench/bench_models.txt
+  sw=$(awk '$NF ~ /^[0-9.]+$/ && $3 == "..." { if ($NF + 0 > max) { max = $NF + 0; gas = $1 } }
+            END { printf "worst %s %.2f", gas, max }' build-bench/bench_models.txt)
+  h2=$(sed -n 's/^hydrogen equation .*: \([0-9.]*\) ns per state/\1/p' build-bench/bench_models.txt)
+  echo "summary: bench: Span-Wagner state / Peng-Robinson state, 8 gases: $sw (goal <= 3); hydrogen equation $h2 ns per state"
+fi
