@@ -482,18 +482,18 @@ static int cubic_convex_first(const cubic_poly *p, cubic_ctx *c, gk_real s, gk_r
     return n;
 }
 
-/* Last step: undo the scaling, keep the roots above lo, drop repeated values, write z[] (unused
-   entries 0). Returns the count, or -1 (z[] untouched) when a root is not finite. */
-static int cubic_output(const gk_real r_in[3], int n, gk_real lo, int e, gk_real z[3]) {
-    gk_real r[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
+/* Last step: keep the roots above lo, drop repeated values (r[] is compacted in place, unused
+   entries 0), undo the scaling, write z[]. Returns the count, or -1 (z[] untouched) when a root
+   is not finite. */
+static int cubic_output(gk_real r[3], int n, gk_real lo, int e, gk_real z[3]) {
     gk_real v;
     int out = 0;
     int i;
     for (i = 0; i < n; ++i) {
-        if (!CUBIC_ISFINITE(r_in[i])) { return -1; /* before z[] is written */ }
+        if (!CUBIC_ISFINITE(r[i])) { return -1; /* before z[] is written */ }
     }
     for (i = 0; i < n; ++i) {
-        v = r_in[i];
+        v = r[i]; /* out <= i: the entries read later are not overwritten */
         if ((v > lo) && ((out == 0) || (v > r[out - 1]))) { /* above lo, not a repeated value */
             r[out] = v;
             out += 1;
@@ -501,7 +501,7 @@ static int cubic_output(const gk_real r_in[3], int n, gk_real lo, int e, gk_real
     }
     for (i = 0; i < 3; ++i) {
         /* unscaled, a root beyond the largest gk_real (coefficients near it) is not finite */
-        v = ((e != 0) && (i < out)) ? gk_ldexp(r[i], e) : r[i];
+        v = (i >= out) ? GK_LIT(0.0) : ((e != 0) ? gk_ldexp(r[i], e) : r[i]);
         if (!CUBIC_ISFINITE(v)) { return -1; /* before z[] is written */ }
         r[i] = v;
     }

@@ -380,7 +380,9 @@ typedef struct eos_cubic {
     gk_real k2, k3, k4, k5; /* the coefficients of the start (above) */
 } eos_cubic;
 
-static eos_cubic cubic_of(eos_family family) {
+/* The family's constants (a pointer into the read-only tables, so that no copy of them is held
+   in the caller's frame while the roots are solved). */
+static const eos_cubic *cubic_of(eos_family family) {
     static const eos_cubic vdw = { GK_LIT(0.0), GK_LIT(0.0),  GK_LIT(2.0),
                                    GK_LIT(3.0), GK_LIT(20.0), GK_LIT(4.0) };
     static const eos_cubic rk = { GK_LIT(1.0), GK_LIT(0.0),  GK_LIT(3.0),
@@ -389,12 +391,12 @@ static eos_cubic cubic_of(eos_family family) {
                                   GK_LIT(14.0), GK_LIT(88.0), GK_LIT(48.0) };
     switch (family) {
         case FAMILY_RK:
-            return rk;
+            return &rk;
         case FAMILY_PR:
-            return pr;
+            return &pr;
         case FAMILY_VDW:
         default:
-            return vdw;
+            return &vdw;
     }
 }
 
@@ -437,16 +439,16 @@ static gk_root eos_pick(eos_family family, gk_real a, gk_real b, const gk_real z
 gk_status gk__eos_cubic_state(gk_eos eos, gk_real a, gk_real b, gk_real p, gk_real t, gk_real tc,
                               gk_root root, gk_eos_result *out) {
     const eos_family family = family_of(eos);
-    const eos_cubic k = cubic_of(family);
+    const eos_cubic *k = cubic_of(family);
     gk_real c2, c1, c0, guess, zsel = GK_LIT(0.0), attr = GK_LIT(0.0), phi, vm;
     gk_real zr[3] = { GK_LIT(0.0), GK_LIT(0.0), GK_LIT(0.0) };
     gk_root branch;
     int n;
 
-    c2 = -(GK_LIT(1.0) + b - k.u * b);
-    c1 = a - b * (k.u + (k.u - k.w) * b);
-    c0 = -b * (a + k.w * b * (GK_LIT(1.0) + b));
-    guess = (a < EOS_GUESS_MAX && b < EOS_GUESS_MAX) ? eos_gas_guess(&k, a, b) : GK_LIT(0.0);
+    c2 = -(GK_LIT(1.0) + b - k->u * b);
+    c1 = a - b * (k->u + (k->u - k->w) * b);
+    c0 = -b * (a + k->w * b * (GK_LIT(1.0) + b));
+    guess = (a < EOS_GUESS_MAX && b < EOS_GUESS_MAX) ? eos_gas_guess(k, a, b) : GK_LIT(0.0);
     n = gk__cubic_roots(c2, c1, c0, b, GK_LIT(1.0) + b, guess, zr);
     /* With A >= 0 and B > 0 a root above B always exists (f(B) < 0 < f(1 + B)); none found means
        it lies within rounding of B (e.g. Z - B ~ B^2/A below u B at absurdly large A): the result
@@ -498,14 +500,14 @@ static gk_status vdw_pressure(const gk_gas *gas, gk_real v, gk_real tk, gk_real 
 /* Reduced form: p/Pc = Tr/(vr - Ob) - Oa alpha / (vr^2 + u Ob vr + w Ob^2), vr = Vm Pc/(R Tc). */
 static gk_status reduced_pressure(gk_eos eos, const gk_gas *gas, gk_real v, gk_real tk,
                                   gk_real *pa) {
-    const eos_cubic k = cubic_of(family_of(eos));
+    const eos_cubic *k = cubic_of(family_of(eos));
     gk_real oa, ob, tr, vr, den, rep, red;
     omegas(eos, &oa, &ob);
     tr = tk / gas->critical_temperature.k;
     vr = v * (gas->critical_pressure.pa / (GK_R * gas->critical_temperature.k));
     if (!gk_finite(vr) || !gk_finite(tr)) { return GK_ERR_RANGE; }
     if (!(vr > ob)) { return GK_ERR_DOMAIN; }
-    den = vr * vr + (k.u * vr + k.w * ob) * ob;
+    den = vr * vr + (k->u * vr + k->w * ob) * ob;
     rep = tr / (vr - ob);
     /* the repulsive term is > 0, and so is a reduced pressure that the scaling by Pc rounds
        to 0: both are underflows */

@@ -228,13 +228,14 @@ gk_status gk__fluid_state(const gk__fluid *f, gk_pressure p, gk_temperature t, g
 }
 
 gk_status gk__fluid_gas_z(const gk__fluid *f, gk_pressure p, gk_temperature t, gk_real *z) {
+    const bool below_tc = t.k < f->tc;
     gk_eos_result r; /* filled by gk__fluid_state, read only on its GK_OK */
     const gk_status st = gk__fluid_state(f, p, t, GK_ROOT_STABLE, &r);
     if (st != GK_OK) { return st; }
     /* liquid: the stable root of two or three is the liquid one, or a lone root below Tc lies
        on the liquid side (the two spinodal volumes of a cubic bracket its critical volume for
        every T < Tc, so the side of Vc tells the side of the vapour pressure) */
-    if (r.branch == GK_ROOT_LIQUID && (r.root_count >= 2 || t.k < f->tc)) { return GK_ERR_RANGE; }
+    if (r.branch == GK_ROOT_LIQUID && (r.root_count >= 2 || below_tc)) { return GK_ERR_RANGE; }
     /* every formula above this layer divides by Z */
     if (!gk_positive(r.z) || !gk_positive(r.molar_volume.m3_per_mol)) { return GK_ERR_RANGE; }
     *z = r.z;

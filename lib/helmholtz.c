@@ -361,9 +361,9 @@ static void hz_add_row(gk_real *g, const gk__sw_fluid *fl, gk_real x, const gk_r
     }
 }
 
-/* The group coefficients at tau (see hz_group). Inlined: one frame less under the state solve
-   (firmware stack). */
-static HZ_INLINE void hz_tau_terms(const gk__hz_model *m, gk_real tau, gk_real *g) {
+/* The group coefficients at tau (see hz_group). One copy of the code, shared by
+   gk__hz_prepare() and gk__hz_pressure() (firmware flash). */
+static GK_NOINLINE void hz_tau_terms(const gk__hz_model *m, gk_real tau, gk_real *g) {
     gk_real fr[8], tp[HZ_TAU_POWERS];
     size_t i;
     int k;
@@ -646,10 +646,11 @@ gk_status gk__hz_prepare(const gk__hz_model *m, gk_real p, gk_real t, gk__hz_pre
     if (st != GK_OK) { return st; }
     out->pi = p / (m->rho_r * GK_R * t);
     if (!gk_positive(out->pi)) { return GK_ERR_RANGE; }
-    hz_tau_terms(m, m->t_r / t, out->g);
     out->tr = t / m->t_r;
     out->tr_two_roots = (m->fluid != NULL) ? HZ_TWO_ROOT_PURE : HZ_TWO_ROOT_MIX;
     out->rho_r = m->rho_r;
+    /* last: nothing computed here is kept across it (firmware stack) */
+    hz_tau_terms(m, m->t_r / t, out->g);
     return GK_OK;
 }
 
@@ -672,16 +673,6 @@ gk_status gk__hz_solve_prepared(const gk__hz_prepared *pr, gk_root root, gk_eos_
     if (liquid == 1 && gas == 1 && rr[0].delta < rr[1].delta) { return GK_ERR_NO_SOLUTION; }
     if (liquid + gas == 0) { return GK_ERR_NO_SOLUTION; }
     return hz_pick(pr, rr, gas == 1, liquid + gas, root, out);
-}
-
-gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
-                       gk_eos_result *out) {
-    gk__hz_prepared pr;
-    gk_status st;
-    if (m == NULL || out == NULL || !hz_root_valid(root)) { return GK_ERR_ARGUMENT; }
-    st = gk__hz_prepare(m, p, t, &pr);
-    if (st != GK_OK) { return st; }
-    return gk__hz_solve_prepared(&pr, root, out);
 }
 
 gk_status gk__hz_pressure(const gk__hz_model *m, gk_real rho, gk_real t, gk_real *out) {

@@ -154,18 +154,15 @@ typedef struct gk__hz_prepared {
     gk_real rho_r;        /* reducing density, mol/m^3 */
 } gk__hz_prepared;
 
-/* Checks p (Pa) and T (K) against the model and fills *out (only on GK_OK). Statuses as
-   gk__hz_solve() (the root is not an input here). */
+/* Checks p (Pa) and T (K) against the model and fills *out (only on GK_OK): GK_ERR_ARGUMENT
+   for a NULL pointer, GK_ERR_DOMAIN for p or T not finite and > 0, GK_ERR_RANGE outside the
+   model's validity or for a reduced pressure that underflows. */
 gk_status gk__hz_prepare(const gk__hz_model *m, gk_real p, gk_real t, gk__hz_prepared *out);
 
 /* The state of a prepared (p, T) with the root choice above, in the result form of the cubics:
    every field of *out but model (left to the caller) is written, on GK_OK only. A lone root
    above T_r is labelled GK_ROOT_SUPERCRITICAL. */
 gk_status gk__hz_solve_prepared(const gk__hz_prepared *pr, gk_root root, gk_eos_result *out);
-
-/* gk__hz_prepare() then gk__hz_solve_prepared(): the state at p (Pa), T (K). */
-gk_status gk__hz_solve(const gk__hz_model *m, gk_real p, gk_real t, gk_root root,
-                       gk_eos_result *out);
 
 /* Pressure (Pa) at molar density rho (mol/m^3) and T (K): p = rho R T (1 + delta dalpha_r/ddelta).
    GK_ERR_RANGE also when the pressure is above p_max; GK_ERR_NO_SOLUTION when it is not > 0

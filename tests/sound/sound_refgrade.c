@@ -9,15 +9,19 @@
 
 static void refgrade_gas(const gk_gas *gas) {
     gk__hz_model m = { 0, 0, 0, 0, 0, NULL, NULL, NULL, NULL, 0u };
+    gk__hz_prepared pr = { { 0 }, 0, 0, 0, 0 };
     gk_eos_result r;
     gk__h2_state h = { 0, 0, 0 };
     gk_real p = 0;
     gk_status s;
     if (gk__sw_model_gas(gas, &m) == GK_OK) {
-        s = gk__hz_solve(&m, sound_any_real(), sound_any_real(), SOUND_ENUM(gk_root, 4), &r);
-        SOUND_OK_FINITE(s, r.z);
-        SOUND_OK_FINITE(s, r.fugacity_coefficient);
-        SOUND_OK_FINITE(s, r.molar_volume.m3_per_mol);
+        s = gk__hz_prepare(&m, sound_any_real(), sound_any_real(), &pr);
+        if (s == GK_OK) {
+            s = gk__hz_solve_prepared(&pr, SOUND_ENUM(gk_root, 4), &r);
+            SOUND_OK_FINITE(s, r.z);
+            SOUND_OK_FINITE(s, r.fugacity_coefficient);
+            SOUND_OK_FINITE(s, r.molar_volume.m3_per_mol);
+        }
         s = gk__hz_pressure(&m, sound_any_real(), sound_any_real(), &p);
         SOUND_OK_FINITE(s, p);
     }
