@@ -271,7 +271,9 @@ static gk_status hz_model_mix(const gk_gas *const *gas, const gk__sw_fluid *cons
     size_t i;
     for (i = 0; i < count; ++i) {
         if (x[i] > GK_LIT(0.0)) {
-            hz_mix_add(&m, (rows != NULL) ? rows[i] : gk__sw_find(gas[i]), x[i]);
+            const gk__sw_fluid *fl = (rows != NULL) ? rows[i] : gk__sw_find(gas[i]);
+            if (fl == NULL) { return GK_ERR_NOT_FOUND; } /* the callers' check, kept local */
+            hz_mix_add(&m, fl, x[i]);
         }
     }
     if (!(m.s[1] > GK_LIT(0.0))) { return GK_ERR_DOMAIN; }
